@@ -1,0 +1,147 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * twofold-cli: Twofold without a window (DESIGN.md, "Command line").
+ *
+ * Exit codes: 0 done; 1 the analysis could not be computed; 2 bad usage or a bad file
+ * (the message on stderr names the file, group and key; nothing is written to stdout).
+ */
+#include "tf-analysis-file.h"
+#include "tf-explain.h"
+#include "tf-results.h"
+
+#include <glib/gi18n.h>
+#include <gsl/gsl_errno.h>
+#include <locale.h>
+#include <stdio.h>
+
+enum { EXIT_DONE = 0, EXIT_NOT_COMPUTED = 1, EXIT_USAGE = 2 };
+
+static void
+print_problems (const char *filename, GPtrArray *problems)
+{
+  for (guint i = 0; i < problems->len; i++)
+    {
+      const TfProblem *p = g_ptr_array_index (problems, i);
+
+      if (*p->group && *p->key)
+        g_printerr ("%s: [%s] %s: %s\n", filename, p->group, p->key, p->message);
+      else if (*p->group)
+        g_printerr ("%s: [%s]: %s\n", filename, p->group, p->message);
+      else
+        g_printerr ("%s: %s\n", filename, p->message);
+    }
+}
+
+static int
+usage_error (const char *message)
+{
+  g_printerr ("twofold-cli: %s\n", message);
+  g_printerr (_("Usage: twofold-cli analyse FILE [--json]\n"
+                "       twofold-cli --help\n"));
+  return EXIT_USAGE;
+}
+
+static void
+print_text (const char *filename, const TfAnalysis *analysis, const TfResults *results)
+{
+  g_autoptr (GString) out = g_string_new (NULL);
+  guint width = 0;
+
+  g_string_append_printf (out, "%s\n", filename);
+  g_string_append_printf (out, "%s%s%s\n\n", tf_design_label (analysis->design),
+                          analysis->title ? ": " : "", analysis->title ? analysis->title : "");
+  for (guint i = 0; i < results->numbers->len; i++)
+    {
+      const TfNumber *n = g_ptr_array_index (results->numbers, i);
+      width = MAX (width, (guint) g_utf8_strlen (n->label, -1));
+    }
+  for (guint i = 0; i < results->numbers->len; i++)
+    {
+      const TfNumber *n = g_ptr_array_index (results->numbers, i);
+      g_autofree char *value = tf_number_format (n);
+      guint pad = width - (guint) g_utf8_strlen (n->label, -1);
+
+      g_string_append_printf (out, "  %s%*s  %-22s %s", n->label, (int) pad, "", value, n->id);
+      if (n->status != TF_STATUS_OK)
+        g_string_append_printf (out, " (%s)", n->reason);
+      g_string_append_c (out, '\n');
+    }
+  g_string_append_printf (out, "\n%s\n", tf_caution_text ());
+  fputs (out->str, stdout);
+}
+
+static int
+command_analyse (int argc, char **argv)
+{
+  gboolean json = FALSE;
+  GOptionEntry entries[] = {
+    { "json", 0, 0, G_OPTION_ARG_NONE, &json, N_("Print one JSON object"), NULL },
+    { NULL }
+  };
+  g_autoptr (GOptionContext) context = g_option_context_new (_("analyse FILE"));
+  g_autoptr (GError) error = NULL;
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) analysis = NULL;
+  g_autoptr (TfResults) results = NULL;
+
+  g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
+  g_option_context_set_summary (context, _("Computes every number of an analysis file."));
+  if (!g_option_context_parse (context, &argc, &argv, &error))
+    return usage_error (error->message);
+  if (argc != 3)
+    return usage_error (argc < 3 ? _("analyse needs the analysis file to read")
+                                 : _("analyse reads one file"));
+
+  analysis = tf_analysis_load (argv[2], problems);
+  if (analysis == NULL)
+    {
+      print_problems (argv[2], problems);
+      return EXIT_USAGE;
+    }
+  results = tf_analysis_compute (analysis, problems);
+  if (results == NULL)
+    {
+      print_problems (argv[2], problems);
+      return EXIT_NOT_COMPUTED;
+    }
+  if (json)
+    {
+      g_autofree char *text = tf_results_to_json (analysis, results, problems);
+      fputs (text, stdout);
+    }
+  else
+    print_text (argv[2], analysis, results);
+  return fflush (stdout) == 0 ? EXIT_DONE : EXIT_NOT_COMPUTED;
+}
+
+int
+main (int argc, char **argv)
+{
+  setlocale (LC_ALL, "");
+  bindtextdomain (GETTEXT_PACKAGE, LOCALEDIR);
+  bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
+  textdomain (GETTEXT_PACKAGE);
+  gsl_set_error_handler_off ();
+
+  if (argc < 2)
+    return usage_error (_("a command is needed"));
+  if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h") || g_str_equal (argv[1], "help"))
+    {
+      g_print (_("Usage: twofold-cli COMMAND ...\n\n"
+                 "Commands:\n"
+                 "  analyse FILE [--json]   every number of an analysis, as text or JSON\n\n"
+                 "Exit codes: 0 done; 1 the analysis could not be computed;\n"
+                 "2 bad usage or a bad file (the message names file, group and key).\n"));
+      return EXIT_DONE;
+    }
+  if (g_str_equal (argv[1], "--version"))
+    {
+      g_print ("twofold-cli %s\n", TF_VERSION);
+      return EXIT_DONE;
+    }
+  if (g_str_equal (argv[1], "analyse") || g_str_equal (argv[1], "analyze"))
+    return command_analyse (argc, argv);
+  {
+    g_autofree char *message = g_strdup_printf (_("unknown command “%s”"), argv[1]);
+    return usage_error (message);
+  }
+}

@@ -1,0 +1,378 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-analysis-file.c: reading and writing *.twofold analysis files (DESIGN.md).
+ */
+#include "tf-analysis-file.h"
+
+#include <errno.h>
+#include <glib/gi18n-lib.h>
+#include <math.h>
+#include <stdlib.h>
+
+/* Every key Twofold reads, in every design: these are rewritten on save, and all other
+ * keys in the source file are kept as they were. */
+static const char *const known_keys[][2] = {
+  { "Analysis", "Format" }, { "Analysis", "Design" }, { "Analysis", "Title" },
+  { "Data", "Successes" }, { "Data", "Trials" },
+  { "Data", "SuccessesA" }, { "Data", "TrialsA" }, { "Data", "SuccessesB" }, { "Data", "TrialsB" },
+  { "Data", "N" }, { "Data", "Mean" }, { "Data", "SD" }, { "Data", "Values" }, { "Data", "KnownSD" },
+  { "Data", "MeanDiff" }, { "Data", "SDDiff" }, { "Data", "ValuesA" }, { "Data", "ValuesB" },
+  { "Data", "NA" }, { "Data", "MeanA" }, { "Data", "SDA" }, { "Data", "NB" }, { "Data", "MeanB" },
+  { "Data", "SDB" }, { "Data", "EqualVariances" },
+  { "Data", "Events" }, { "Data", "Exposure" }, { "Data", "EventsA" }, { "Data", "ExposureA" },
+  { "Data", "EventsB" }, { "Data", "ExposureB" },
+  { "Null", "Kind" }, { "Null", "Value" }, { "Null", "Low" }, { "Null", "High" },
+  { "Alternative", "Direction" }, { "Alternative", "Prior" }, { "Alternative", "PriorA" },
+  { "Alternative", "PriorB" }, { "Alternative", "PriorScale" }, { "Alternative", "PriorShape" },
+  { "Alternative", "PriorRate" },
+  { "Models", "PriorNull" },
+  { "Options", "Level" },
+};
+
+char *
+tf_format_double (double value)
+{
+  char buffer[G_ASCII_DTOSTR_BUF_SIZE];
+
+  if (!isfinite (value))
+    return g_strdup ("null");
+  /* The shortest of %.15g, %.16g, %.17g that reads back as the same double. */
+  for (int digits = 15; digits <= 17; digits++)
+    {
+      char format[8];
+
+      g_snprintf (format, sizeof format, "%%.%dg", digits);
+      g_ascii_formatd (buffer, sizeof buffer, format, value);
+      if (g_ascii_strtod (buffer, NULL) == value)
+        break;
+    }
+  return g_strdup (buffer);
+}
+
+typedef struct {
+  GKeyFile *key_file;
+  GPtrArray *problems;
+  guint n_before;
+} Reader;
+
+static char *
+reader_string (Reader *r, const char *group, const char *key)
+{
+  g_autofree char *raw = g_key_file_get_value (r->key_file, group, key, NULL);
+
+  return raw ? g_strstrip (g_strdup (raw)) : NULL;
+}
+
+/* A number in C notation; missing keys take the default when optional. */
+static double
+reader_number (Reader *r, const char *group, const char *key, gboolean required,
+               double fallback)
+{
+  g_autofree char *text = reader_string (r, group, key);
+  char *end = NULL;
+  double value;
+
+  if (text == NULL)
+    {
+      if (required)
+        g_ptr_array_add (r->problems,
+                         tf_problem_new (group, key, _("This key is required and missing.")));
+      return fallback;
+    }
+  if (*text == '\0')
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key, _("The value is empty; a number is needed.")));
+      return fallback;
+    }
+  errno = 0;
+  value = g_ascii_strtod (text, &end);
+  if (end == text || *end != '\0' || g_ascii_strncasecmp (text, "0x", 2) == 0
+      || g_ascii_strncasecmp (text, "-0x", 3) == 0)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key,
+                                       _("“%s” is not a number (write numbers like 0.5 or 1e-3, with a point as decimal mark)."),
+                                       text));
+      return fallback;
+    }
+  if (!isfinite (value) || (errno == ERANGE && fabs (value) > 1.0))
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key,
+                                       _("“%s” is not a finite number Twofold can use."), text));
+      return fallback;
+    }
+  return value;
+}
+
+/* One of a list of words. */
+static void
+reader_word (Reader *r, const char *group, const char *key, gboolean required,
+             gboolean (*parse) (const char *, int *), int *out, const char *allowed)
+{
+  g_autofree char *text = reader_string (r, group, key);
+
+  if (text == NULL)
+    {
+      if (required)
+        g_ptr_array_add (r->problems,
+                         tf_problem_new (group, key, _("This key is required and missing.")));
+      return;
+    }
+  if (!parse (text, out))
+    g_ptr_array_add (r->problems,
+                     tf_problem_new (group, key, _("“%s” is not allowed here; use one of: %s."),
+                                     text, allowed));
+}
+
+#define WORD_PARSER(name, type, fn) \
+  static gboolean name (const char *s, int *out) { type v; if (!fn (s, &v)) return FALSE; *out = (int) v; return TRUE; }
+WORD_PARSER (parse_design, TfDesign, tf_design_from_string)
+WORD_PARSER (parse_direction, TfDirection, tf_direction_from_string)
+WORD_PARSER (parse_prior, TfPriorFamily, tf_prior_family_from_string)
+WORD_PARSER (parse_null_kind, TfNullKind, tf_null_kind_from_string)
+
+static void
+read_data (Reader *r, TfAnalysis *a)
+{
+  switch (a->design)
+    {
+    case TF_DESIGN_ONE_PROPORTION:
+      a->successes = reader_number (r, "Data", "Successes", TRUE, a->successes);
+      a->trials = reader_number (r, "Data", "Trials", TRUE, a->trials);
+      break;
+    default:
+      /* Refused by validation, which says the design is not available yet. */
+      break;
+    }
+}
+
+TfAnalysis *
+tf_analysis_from_key_file (GKeyFile *key_file, GPtrArray *problems)
+{
+  Reader r = { key_file, problems, problems->len };
+  g_autoptr (TfAnalysis) a = NULL;
+  int design = TF_DESIGN_ONE_PROPORTION, word;
+  double format;
+
+  format = reader_number (&r, "Analysis", "Format", TRUE, TF_ANALYSIS_FORMAT);
+  if (problems->len == r.n_before && format != TF_ANALYSIS_FORMAT)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Analysis", "Format",
+                                     _("Format %g is not known to this version of Twofold, which reads format %d."),
+                                     format, TF_ANALYSIS_FORMAT));
+  reader_word (&r, "Analysis", "Design", TRUE, parse_design, &design,
+               "one-proportion, two-proportions, one-mean, paired-means, two-means, one-rate, two-rates");
+  if (problems->len != r.n_before)
+    return NULL;  /* without a design, the rest cannot be read */
+
+  a = tf_analysis_new ((TfDesign) design);
+  {
+    g_autofree char *title = g_key_file_get_string (key_file, "Analysis", "Title", NULL);
+    tf_analysis_set_title (a, title ? g_strstrip (title) : NULL);
+  }
+
+  read_data (&r, a);
+
+  word = a->null_kind;
+  reader_word (&r, "Null", "Kind", FALSE, parse_null_kind, &word, "point, interval");
+  a->null_kind = (TfNullKind) word;
+  if (a->null_kind == TF_NULL_POINT)
+    a->null_value = reader_number (&r, "Null", "Value",
+                                   a->design == TF_DESIGN_ONE_PROPORTION
+                                   || a->design == TF_DESIGN_ONE_MEAN
+                                   || a->design == TF_DESIGN_ONE_RATE,
+                                   a->null_value);
+  else
+    {
+      a->null_low = reader_number (&r, "Null", "Low", TRUE, a->null_low);
+      a->null_high = reader_number (&r, "Null", "High", TRUE, a->null_high);
+    }
+
+  word = a->direction;
+  reader_word (&r, "Alternative", "Direction", FALSE, parse_direction, &word,
+               "two-sided, greater, less");
+  a->direction = (TfDirection) word;
+  word = a->prior;
+  reader_word (&r, "Alternative", "Prior", FALSE, parse_prior, &word,
+               "beta, normal, cauchy, gamma");
+  a->prior = (TfPriorFamily) word;
+  a->prior_a = reader_number (&r, "Alternative", "PriorA", FALSE, a->prior_a);
+  a->prior_b = reader_number (&r, "Alternative", "PriorB", FALSE, a->prior_b);
+  a->prior_scale = reader_number (&r, "Alternative", "PriorScale", FALSE, a->prior_scale);
+  a->prior_shape = reader_number (&r, "Alternative", "PriorShape", FALSE, a->prior_shape);
+  a->prior_rate = reader_number (&r, "Alternative", "PriorRate", FALSE, a->prior_rate);
+
+  a->prior_null = reader_number (&r, "Models", "PriorNull", FALSE, a->prior_null);
+  a->level = reader_number (&r, "Options", "Level", FALSE, a->level);
+
+  if (problems->len != r.n_before)
+    return NULL;
+  a->source = g_key_file_ref (key_file);
+  return g_steal_pointer (&a);
+}
+
+static TfAnalysis *
+load_key_file (GKeyFile *key_file, const char *data, gsize length, GPtrArray *problems)
+{
+  g_autoptr (GError) error = NULL;
+  TfAnalysis *analysis;
+
+  if (!g_utf8_validate (data, (gssize) length, NULL))
+    {
+      g_ptr_array_add (problems, tf_problem_new ("", "", _("The file is not UTF-8 text.")));
+      return NULL;
+    }
+  if (!g_key_file_load_from_data (key_file, data, length, G_KEY_FILE_KEEP_COMMENTS, &error))
+    {
+      g_ptr_array_add (problems,
+                       tf_problem_new ("", "", _("The file is not a Twofold analysis (a key file): %s."),
+                                       error->message));
+      return NULL;
+    }
+  if (!g_key_file_has_group (key_file, "Analysis"))
+    {
+      g_ptr_array_add (problems,
+                       tf_problem_new ("Analysis", "",
+                                       _("The group [Analysis] is missing: this is not a Twofold analysis.")));
+      return NULL;
+    }
+  analysis = tf_analysis_from_key_file (key_file, problems);
+  if (analysis && !tf_analysis_validate (analysis, problems))
+    g_clear_pointer (&analysis, tf_analysis_free);
+  return analysis;
+}
+
+TfAnalysis *
+tf_analysis_load_from_data (const char *data, gsize length, GPtrArray *problems)
+{
+  g_autoptr (GKeyFile) key_file = g_key_file_new ();
+
+  return load_key_file (key_file, data, length, problems);
+}
+
+TfAnalysis *
+tf_analysis_load (const char *filename, GPtrArray *problems)
+{
+  g_autoptr (GError) error = NULL;
+  g_autofree char *data = NULL;
+  gsize length = 0;
+
+  if (!g_file_get_contents (filename, &data, &length, &error))
+    {
+      g_ptr_array_add (problems, tf_problem_new ("", "", _("The file cannot be read: %s."),
+                                                 error->message));
+      return NULL;
+    }
+  return tf_analysis_load_from_data (data, length, problems);
+}
+
+static void
+set_number (GKeyFile *key_file, const char *group, const char *key, double value)
+{
+  g_autofree char *text = tf_format_double (value);
+
+  g_key_file_set_value (key_file, group, key, text);
+}
+
+GKeyFile *
+tf_analysis_to_key_file (const TfAnalysis *a)
+{
+  GKeyFile *key_file = g_key_file_new ();
+
+  /* The groups come first in the order of DESIGN.md, then whatever else the source had. */
+  g_key_file_set_integer (key_file, "Analysis", "Format", TF_ANALYSIS_FORMAT);
+  g_key_file_set_value (key_file, "Analysis", "Design", tf_design_to_string (a->design));
+  if (a->title)
+    g_key_file_set_string (key_file, "Analysis", "Title", a->title);
+
+  switch (a->design)
+    {
+    case TF_DESIGN_ONE_PROPORTION:
+      set_number (key_file, "Data", "Successes", a->successes);
+      set_number (key_file, "Data", "Trials", a->trials);
+      break;
+    default:
+      break;
+    }
+
+  g_key_file_set_value (key_file, "Null", "Kind", tf_null_kind_to_string (a->null_kind));
+  if (a->null_kind == TF_NULL_POINT)
+    set_number (key_file, "Null", "Value", a->null_value);
+  else
+    {
+      set_number (key_file, "Null", "Low", a->null_low);
+      set_number (key_file, "Null", "High", a->null_high);
+    }
+
+  g_key_file_set_value (key_file, "Alternative", "Direction", tf_direction_to_string (a->direction));
+  g_key_file_set_value (key_file, "Alternative", "Prior", tf_prior_family_to_string (a->prior));
+  switch (a->prior)
+    {
+    case TF_PRIOR_BETA:
+      set_number (key_file, "Alternative", "PriorA", a->prior_a);
+      set_number (key_file, "Alternative", "PriorB", a->prior_b);
+      break;
+    case TF_PRIOR_NORMAL:
+    case TF_PRIOR_CAUCHY:
+      set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
+      break;
+    case TF_PRIOR_GAMMA:
+      set_number (key_file, "Alternative", "PriorShape", a->prior_shape);
+      set_number (key_file, "Alternative", "PriorRate", a->prior_rate);
+      break;
+    }
+  set_number (key_file, "Models", "PriorNull", a->prior_null);
+  set_number (key_file, "Options", "Level", a->level);
+
+  /* Keep what Twofold does not know. */
+  if (a->source)
+    {
+      g_auto (GStrv) groups = g_key_file_get_groups (a->source, NULL);
+
+      for (guint g = 0; groups[g]; g++)
+        {
+          g_auto (GStrv) keys = g_key_file_get_keys (a->source, groups[g], NULL, NULL);
+
+          for (guint k = 0; keys && keys[k]; k++)
+            {
+              gboolean known = FALSE;
+
+              for (guint i = 0; i < G_N_ELEMENTS (known_keys) && !known; i++)
+                known = g_str_equal (known_keys[i][0], groups[g])
+                        && g_str_equal (known_keys[i][1], keys[k]);
+              if (!known)
+                {
+                  g_autofree char *value = g_key_file_get_value (a->source, groups[g], keys[k], NULL);
+                  g_autofree char *comment = g_key_file_get_comment (a->source, groups[g], keys[k], NULL);
+
+                  g_key_file_set_value (key_file, groups[g], keys[k], value);
+                  if (comment)
+                    g_key_file_set_comment (key_file, groups[g], keys[k], comment, NULL);
+                }
+            }
+        }
+    }
+  return key_file;
+}
+
+char *
+tf_analysis_to_data (const TfAnalysis *analysis, gsize *length)
+{
+  g_autoptr (GKeyFile) key_file = tf_analysis_to_key_file (analysis);
+
+  return g_key_file_to_data (key_file, length, NULL);
+}
+
+gboolean
+tf_analysis_save (const TfAnalysis *analysis, const char *filename, GError **error)
+{
+  gsize length = 0;
+  g_autofree char *data = tf_analysis_to_data (analysis, &length);
+
+  /* CONSISTENT: written to a temporary file in the same folder and renamed over the
+   * target, so a crash leaves either the old file or the new one, never half of one. */
+  return g_file_set_contents_full (filename, data, (gssize) length,
+                                   G_FILE_SET_CONTENTS_CONSISTENT | G_FILE_SET_CONTENTS_DURABLE,
+                                   0666, error);
+}

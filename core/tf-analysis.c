@@ -1,0 +1,246 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-analysis.c: the analysis as the user set it, its defaults and its validation.
+ */
+#include "tf-analysis.h"
+#include "tf-one-proportion.h"
+
+#include <glib/gi18n-lib.h>
+#include <math.h>
+
+static const char *const design_names[TF_N_DESIGNS] = {
+  "one-proportion", "two-proportions", "one-mean", "paired-means",
+  "two-means", "one-rate", "two-rates",
+};
+
+static const char *const direction_names[] = { "two-sided", "greater", "less" };
+static const char *const prior_names[] = { "beta", "normal", "cauchy", "gamma" };
+static const char *const null_kind_names[] = { "point", "interval" };
+
+static gboolean
+lookup_name (const char *const *names, guint n_names, const char *s, int *out)
+{
+  if (s == NULL)
+    return FALSE;
+  for (guint i = 0; i < n_names; i++)
+    if (g_strcmp0 (names[i], s) == 0)
+      {
+        *out = (int) i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
+#define DEFINE_NAMES(type, prefix, table)                                     \
+  const char *prefix##_to_string (type value)                                 \
+  {                                                                           \
+    g_return_val_if_fail ((guint) value < G_N_ELEMENTS (table), NULL);        \
+    return table[value];                                                      \
+  }                                                                           \
+  gboolean prefix##_from_string (const char *s, type *value)                  \
+  {                                                                           \
+    int i;                                                                    \
+    if (!lookup_name (table, G_N_ELEMENTS (table), s, &i))                    \
+      return FALSE;                                                           \
+    *value = (type) i;                                                        \
+    return TRUE;                                                              \
+  }
+
+DEFINE_NAMES (TfDesign, tf_design, design_names)
+DEFINE_NAMES (TfDirection, tf_direction, direction_names)
+DEFINE_NAMES (TfPriorFamily, tf_prior_family, prior_names)
+DEFINE_NAMES (TfNullKind, tf_null_kind, null_kind_names)
+
+const char *
+tf_design_label (TfDesign design)
+{
+  switch (design)
+    {
+    case TF_DESIGN_ONE_PROPORTION: return _("One proportion");
+    case TF_DESIGN_TWO_PROPORTIONS: return _("Two proportions");
+    case TF_DESIGN_ONE_MEAN: return _("One mean");
+    case TF_DESIGN_PAIRED_MEANS: return _("Paired means");
+    case TF_DESIGN_TWO_MEANS: return _("Two means");
+    case TF_DESIGN_ONE_RATE: return _("One rate");
+    case TF_DESIGN_TWO_RATES: return _("Two rates");
+    case TF_N_DESIGNS: break;
+    }
+  g_return_val_if_reached (NULL);
+}
+
+void
+tf_analysis_reset (TfAnalysis *analysis, TfDesign design)
+{
+  GKeyFile *source = analysis->source;
+
+  g_free (analysis->title);
+  *analysis = (TfAnalysis) {
+    .design = design,
+    .title = NULL,
+    .successes = 0,
+    .trials = 0,
+    .null_kind = TF_NULL_POINT,
+    .null_value = design == TF_DESIGN_ONE_PROPORTION ? 0.5 : 0.0,
+    .null_low = 0.0,
+    .null_high = 0.0,
+    .direction = TF_DIRECTION_TWO_SIDED,
+    .prior = design == TF_DESIGN_ONE_PROPORTION || design == TF_DESIGN_TWO_PROPORTIONS
+             ? TF_PRIOR_BETA
+             : design == TF_DESIGN_ONE_RATE || design == TF_DESIGN_TWO_RATES
+             ? TF_PRIOR_GAMMA : TF_PRIOR_CAUCHY,
+    .prior_a = 1.0,
+    .prior_b = 1.0,
+    .prior_scale = M_SQRT1_2,
+    .prior_shape = 1.0,
+    .prior_rate = 1.0,
+    .prior_null = 0.5,
+    .level = 0.95,
+    .source = source,
+  };
+  if (design == TF_DESIGN_ONE_PROPORTION)
+    {
+      analysis->successes = 12;
+      analysis->trials = 20;
+    }
+}
+
+TfAnalysis *
+tf_analysis_new (TfDesign design)
+{
+  TfAnalysis *analysis = g_new0 (TfAnalysis, 1);
+
+  tf_analysis_reset (analysis, design);
+  return analysis;
+}
+
+static GKeyFile *
+key_file_copy (GKeyFile *key_file)
+{
+  g_autofree char *data = NULL;
+  gsize length = 0;
+  GKeyFile *copy = g_key_file_new ();
+
+  data = g_key_file_to_data (key_file, &length, NULL);
+  if (!g_key_file_load_from_data (copy, data, length,
+                                  G_KEY_FILE_KEEP_COMMENTS, NULL))
+    g_warn_if_reached ();
+  return copy;
+}
+
+TfAnalysis *
+tf_analysis_copy (const TfAnalysis *analysis)
+{
+  TfAnalysis *copy = g_new (TfAnalysis, 1);
+
+  *copy = *analysis;
+  copy->title = g_strdup (analysis->title);
+  copy->source = analysis->source ? key_file_copy (analysis->source) : NULL;
+  return copy;
+}
+
+void
+tf_analysis_free (TfAnalysis *analysis)
+{
+  if (analysis == NULL)
+    return;
+  g_free (analysis->title);
+  g_clear_pointer (&analysis->source, g_key_file_unref);
+  g_free (analysis);
+}
+
+void
+tf_analysis_set_title (TfAnalysis *analysis, const char *title)
+{
+  g_free (analysis->title);
+  analysis->title = title && *title ? g_strdup (title) : NULL;
+}
+
+/* Checks shared by every design: the prior model probability and the level. */
+static void
+validate_common (const TfAnalysis *analysis, GPtrArray *problems)
+{
+  if (!(analysis->prior_null > 0.0 && analysis->prior_null < 1.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Models", "PriorNull",
+                                     _("The prior probability of the null must lie strictly between 0 and 1 (it is %g)."),
+                                     analysis->prior_null));
+  if (!(analysis->level >= 0.5 && analysis->level < 1.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Options", "Level",
+                                     _("The level must be at least 0.5 and below 1, for example 0.95 (it is %g)."),
+                                     analysis->level));
+}
+
+gboolean
+tf_analysis_validate (const TfAnalysis *analysis, GPtrArray *problems)
+{
+  guint before = problems->len;
+
+  switch (analysis->design)
+    {
+    case TF_DESIGN_ONE_PROPORTION:
+      tf_one_proportion_validate (analysis, problems);
+      break;
+    case TF_DESIGN_TWO_PROPORTIONS:
+    case TF_DESIGN_ONE_MEAN:
+    case TF_DESIGN_PAIRED_MEANS:
+    case TF_DESIGN_TWO_MEANS:
+    case TF_DESIGN_ONE_RATE:
+    case TF_DESIGN_TWO_RATES:
+      g_ptr_array_add (problems,
+                       tf_problem_new ("Analysis", "Design",
+                                       _("The design “%s” is not available in this version of Twofold; only one-proportion is."),
+                                       tf_design_to_string (analysis->design)));
+      break;
+    case TF_N_DESIGNS:
+    default:
+      g_ptr_array_add (problems,
+                       tf_problem_new ("Analysis", "Design", _("The design is not known.")));
+      break;
+    }
+  validate_common (analysis, problems);
+  return problems->len == before;
+}
+
+TfProblem *
+tf_problem_new (const char *group, const char *key, const char *format, ...)
+{
+  TfProblem *problem = g_new (TfProblem, 1);
+  va_list args;
+
+  problem->group = g_strdup (group ? group : "");
+  problem->key = g_strdup (key ? key : "");
+  va_start (args, format);
+  problem->message = g_strdup_vprintf (format, args);
+  va_end (args);
+  return problem;
+}
+
+void
+tf_problem_free (TfProblem *problem)
+{
+  if (problem == NULL)
+    return;
+  g_free (problem->group);
+  g_free (problem->key);
+  g_free (problem->message);
+  g_free (problem);
+}
+
+GPtrArray *
+tf_problem_list_new (void)
+{
+  return g_ptr_array_new_with_free_func ((GDestroyNotify) tf_problem_free);
+}
+
+const TfProblem *
+tf_problem_list_find (GPtrArray *problems, const char *group, const char *key)
+{
+  for (guint i = 0; i < problems->len; i++)
+    {
+      const TfProblem *problem = g_ptr_array_index (problems, i);
+
+      if (g_strcmp0 (problem->group, group) == 0 && g_strcmp0 (problem->key, key) == 0)
+        return problem;
+    }
+  return NULL;
+}

@@ -1,0 +1,111 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-analysis.h: what the user set: design, data, hypotheses, priors, options.
+ *
+ * A TfAnalysis is plain data. Forms and files fill it in; tf_analysis_validate()
+ * lists what is wrong with it, field by field; tf_analysis_compute() turns a valid
+ * one into TfResults. Nothing downstream writes back into it.
+ */
+#pragma once
+
+#include <glib.h>
+
+G_BEGIN_DECLS
+
+typedef enum {
+  TF_DESIGN_ONE_PROPORTION,
+  TF_DESIGN_TWO_PROPORTIONS,
+  TF_DESIGN_ONE_MEAN,
+  TF_DESIGN_PAIRED_MEANS,
+  TF_DESIGN_TWO_MEANS,
+  TF_DESIGN_ONE_RATE,
+  TF_DESIGN_TWO_RATES,
+  TF_N_DESIGNS
+} TfDesign;
+
+typedef enum { TF_NULL_POINT, TF_NULL_INTERVAL } TfNullKind;
+
+typedef enum {
+  TF_DIRECTION_TWO_SIDED,
+  TF_DIRECTION_GREATER,
+  TF_DIRECTION_LESS
+} TfDirection;
+
+typedef enum {
+  TF_PRIOR_BETA,
+  TF_PRIOR_NORMAL,
+  TF_PRIOR_CAUCHY,
+  TF_PRIOR_GAMMA
+} TfPriorFamily;
+
+/* Counts are held as doubles with integer values: exact up to 2^53, which covers the
+ * documented range n <= 10^12 with room to spare. */
+typedef struct {
+  TfDesign design;
+  char *title;                  /* may be NULL */
+
+  /* [Data], one proportion */
+  double successes;
+  double trials;
+
+  /* [Null] */
+  TfNullKind null_kind;
+  double null_value;
+  double null_low, null_high;
+
+  /* [Alternative] */
+  TfDirection direction;
+  TfPriorFamily prior;
+  double prior_a, prior_b;      /* beta shapes */
+  double prior_scale;           /* effect prior scale (means) */
+  double prior_shape, prior_rate; /* gamma (rates) */
+
+  /* [Models] */
+  double prior_null;            /* prior probability of the null model */
+
+  /* [Options] */
+  double level;                 /* confidence and credible level */
+
+  /* The key file this analysis was read from, so that keys Twofold does not know
+   * are written back on save. NULL for an analysis made from scratch. */
+  GKeyFile *source;
+} TfAnalysis;
+
+/* A problem with one field, named as in the analysis file: group and key. */
+typedef struct {
+  char *group;
+  char *key;
+  char *message;                /* translated, one sentence, says what is wrong */
+} TfProblem;
+
+TfAnalysis *tf_analysis_new (TfDesign design);
+TfAnalysis *tf_analysis_copy (const TfAnalysis *analysis);
+void tf_analysis_free (TfAnalysis *analysis);
+G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfAnalysis, tf_analysis_free)
+
+/* Sets every field of a new analysis of this design to Twofold's neutral defaults. */
+void tf_analysis_reset (TfAnalysis *analysis, TfDesign design);
+
+void tf_analysis_set_title (TfAnalysis *analysis, const char *title);
+
+/* Appends one TfProblem per thing wrong with the analysis to problems (a GPtrArray
+ * freeing with tf_problem_free). Returns TRUE when nothing was wrong. */
+gboolean tf_analysis_validate (const TfAnalysis *analysis, GPtrArray *problems);
+
+const char *tf_design_to_string (TfDesign design);           /* file name: "one-proportion" */
+gboolean tf_design_from_string (const char *s, TfDesign *design);
+const char *tf_design_label (TfDesign design);              /* translated, for people */
+const char *tf_direction_to_string (TfDirection direction);
+gboolean tf_direction_from_string (const char *s, TfDirection *direction);
+const char *tf_prior_family_to_string (TfPriorFamily family);
+gboolean tf_prior_family_from_string (const char *s, TfPriorFamily *family);
+const char *tf_null_kind_to_string (TfNullKind kind);
+gboolean tf_null_kind_from_string (const char *s, TfNullKind *kind);
+
+TfProblem *tf_problem_new (const char *group, const char *key, const char *format, ...) G_GNUC_PRINTF (3, 4);
+void tf_problem_free (TfProblem *problem);
+G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfProblem, tf_problem_free)
+GPtrArray *tf_problem_list_new (void);
+/* First problem naming this group and key, or NULL. */
+const TfProblem *tf_problem_list_find (GPtrArray *problems, const char *group, const char *key);
+
+G_END_DECLS

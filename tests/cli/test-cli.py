@@ -1,0 +1,170 @@
+#!/usr/bin/env python3
+# SPDX-License-Identifier: GPL-3.0-or-later
+"""twofold-cli as a user runs it: good files, bad files, bad usage.
+
+Usage: test-cli.py TWOFOLD_CLI SOURCE_DIR
+Reference values: scipy 1.10.1 (Debian 12), named beside each check.
+"""
+import json
+import math
+import os
+import subprocess
+import sys
+import tempfile
+
+cli, source_dir = sys.argv[1], sys.argv[2]
+demo = os.path.join(source_dir, "data", "demo", "seed-germination.twofold")
+passed = failed = 0
+
+
+def check(name, condition, detail=""):
+    global passed, failed
+    if condition:
+        passed += 1
+    else:
+        failed += 1
+        print(f"FAIL {name} {detail}")
+
+
+def run(*args):
+    r = subprocess.run([cli, *args], capture_output=True, text=True,
+                       env=dict(os.environ, LC_ALL="C.UTF-8"))
+    return r.returncode, r.stdout, r.stderr
+
+
+def close(a, b, rel):
+    return abs(a - b) <= rel * abs(b)
+
+
+# --- the demo, as JSON -------------------------------------------------------------
+code, out, err = run("analyse", demo, "--json")
+check("demo exit 0", code == 0, err)
+doc = json.loads(out)
+check("format", doc["format"] == 1)
+check("design", doc["design"] == "one-proportion")
+res = doc["results"]
+for rid in ["p_value", "bf10", "bf01", "posterior_null", "ci_low", "ci_high",
+            "cri_low", "cri_high", "min_bf01", "estimate",
+            "p_value_exact", "p_value_midp", "p_value_score", "p_value_lr"]:
+    check(f"id {rid} present", rid in res, str(sorted(res)))
+# scipy 1.10.1: stats.binomtest(9700, 12000, 0.8).pvalue
+check("p_value", close(res["p_value"], 0.0224737373321237, 1e-9), res["p_value"])
+# scipy 1.10.1: binomtest(...).proportion_ci(0.95, 'exact') (Clopper-Pearson)
+check("ci_low", close(res["ci_low"], 0.801174726388625, 1e-9), res["ci_low"])
+check("ci_high", close(res["ci_high"], 0.815342058897227, 1e-9), res["ci_high"])
+# mpmath 1.2.1 at 40 digits: exp(k ln θ0 + (n-k) ln(1-θ0) + ln B(1,1) - ln B(k+1, n-k+1))
+check("bf01", close(res["bf01"], 7.98772466619784, 1e-9), res["bf01"])
+check("bf10", close(res["bf10"], 1 / 7.98772466619784, 1e-9), res["bf10"])
+check("posterior_null", close(res["posterior_null"], 0.888737134576349, 1e-9), res["posterior_null"])
+# scipy 1.10.1: stats.beta.ppf(0.025 / 0.975, 9701, 2301)
+check("cri_low", close(res["cri_low"], 0.801191220263589, 1e-9), res["cri_low"])
+check("cri_high", close(res["cri_high"], 0.815275372873405, 1e-9), res["cri_high"])
+p = res["p_value"]
+check("min_bf01", close(res["min_bf01"], -math.e * p * math.log(p), 1e-12), res["min_bf01"])
+check("estimate", res["estimate"] == 9700 / 12000)
+for n in doc["numbers"]:
+    check(f"number {n['id']} fields", set(["id", "label", "value", "measure", "status"]) <= set(n))
+    if n["status"] == "ok":
+        check(f"number {n['id']} finite", isinstance(n["value"], (int, float)) and math.isfinite(n["value"]))
+check("no problems", doc["problems"] == [])
+check("no NaN in JSON", "nan" not in out.lower() and "inf" not in out.lower())
+
+# --- the demo, as text ----------------------------------------------------------------
+code, out, err = run("analyse", demo)
+check("text exit 0", code == 0, err)
+check("text has caution", "qualified statistician" in out)
+check("text has p-value", "p_value" in out and "0.02247" in out, out)
+check("text has no nan", "nan" not in out.lower() and "inf " not in out.lower())
+
+# --- bad files: exit 2, message names file, group and key, nothing on stdout -----------
+GOOD = open(demo, encoding="utf-8").read()
+
+
+def variant(old, new):
+    assert old in GOOD, old
+    return GOOD.replace(old, new)
+
+
+bad_cases = [
+    ("k > n", variant("Successes=9700", "Successes=12001"), "[Data] Successes"),
+    ("k < 0", variant("Successes=9700", "Successes=-1"), "[Data] Successes"),
+    ("k not whole", variant("Successes=9700", "Successes=9700.5"), "[Data] Successes"),
+    ("n = 0", variant("Trials=12000", "Trials=0"), "[Data] Trials"),
+    ("n not a number", variant("Trials=12000", "Trials=twelve"), "[Data] Trials"),
+    ("n comma decimal", variant("Trials=12000", "Trials=12000,0"), "[Data] Trials"),
+    ("n NaN", variant("Trials=12000", "Trials=nan"), "[Data] Trials"),
+    ("n inf", variant("Trials=12000", "Trials=inf"), "[Data] Trials"),
+    ("n overflow", variant("Trials=12000", "Trials=1e999"), "[Data] Trials"),
+    ("n empty", variant("Trials=12000", "Trials="), "[Data] Trials"),
+    ("n missing", variant("Trials=12000\n", ""), "[Data] Trials"),
+    ("theta0 = 0", variant("Value=0.8", "Value=0"), "[Null] Value"),
+    ("theta0 = 1", variant("Value=0.8", "Value=1"), "[Null] Value"),
+    ("theta0 > 1", variant("Value=0.8", "Value=1.5"), "[Null] Value"),
+    ("a = 0", variant("PriorA=1", "PriorA=0"), "[Alternative] PriorA"),
+    ("b < 0", variant("PriorB=1", "PriorB=-2"), "[Alternative] PriorB"),
+    ("pi0 = 0", variant("PriorNull=0.5", "PriorNull=0"), "[Models] PriorNull"),
+    ("pi0 = 1", variant("PriorNull=0.5", "PriorNull=1"), "[Models] PriorNull"),
+    ("pi0 NaN", variant("PriorNull=0.5", "PriorNull=NaN"), "[Models] PriorNull"),
+    ("level 1", variant("Level=0.95", "Level=1"), "[Options] Level"),
+    ("unknown design", variant("Design=one-proportion", "Design=three-proportions"), "[Analysis] Design"),
+    ("unknown direction", variant("Direction=two-sided", "Direction=sideways"), "[Alternative] Direction"),
+    ("newer format", variant("Format=1", "Format=7"), "[Analysis] Format"),
+    ("not a key file", "this is not a key file\n", "not a Twofold analysis"),
+    ("no Analysis group", "[Data]\nTrials=3\n", "[Analysis]"),
+    ("not UTF-8", None, "UTF-8"),
+]
+with tempfile.TemporaryDirectory() as tmp:
+    for name, text, expect in bad_cases:
+        path = os.path.join(tmp, "bad.twofold")
+        with open(path, "wb") as f:
+            f.write(b"[Analysis]\nTitle=\xff\xfe\n" if text is None else text.encode("utf-8"))
+        for args in (("analyse", path), ("analyse", path, "--json")):
+            code, out, err = run(*args)
+            check(f"{name}: exit 2", code == 2, f"got {code}: {err}")
+            check(f"{name}: stdout empty", out == "", out)
+            check(f"{name}: names file", path in err, err)
+            check(f"{name}: names {expect}", expect in err, err)
+            check(f"{name}: no nan", "nan\n" not in err.lower())
+
+    code, out, err = run("analyse", os.path.join(tmp, "missing.twofold"))
+    check("missing file: exit 2", code == 2)
+    check("missing file: message", "missing.twofold" in err and out == "", err)
+
+    # Edge values that are valid: exit 0, every number finite or undefined with a reason.
+    for name, old, new in [
+        ("n = 1, k = 0", "Successes=9700\nTrials=12000", "Successes=0\nTrials=1"),
+        ("n = 1, k = 1", "Successes=9700\nTrials=12000", "Successes=1\nTrials=1"),
+        ("k = 0", "Successes=9700", "Successes=0"),
+        ("k = n", "Successes=9700", "Successes=12000"),
+        ("n = 1e12", "Successes=9700\nTrials=12000", "Successes=800000400000\nTrials=1000000000000"),
+        ("n = 1e12 far", "Successes=9700\nTrials=12000", "Successes=900000000000\nTrials=1000000000000"),
+        ("tiny prior", "PriorA=1\nPriorB=1", "PriorA=0.01\nPriorB=0.01"),
+        ("huge prior", "PriorA=1\nPriorB=1", "PriorA=8e10\nPriorB=2e10"),
+        ("greater", "Direction=two-sided", "Direction=greater"),
+        ("less", "Direction=two-sided", "Direction=less"),
+    ]:
+        path = os.path.join(tmp, "edge.twofold")
+        with open(path, "w", encoding="utf-8") as f:
+            f.write(variant(old, new))
+        code, out, err = run("analyse", path, "--json")
+        check(f"{name}: exit 0", code == 0, err)
+        if code == 0:
+            doc = json.loads(out)
+            for n in doc["numbers"]:
+                ok = (n["status"] == "ok" and math.isfinite(n["value"])) or \
+                     (n["status"] == "undefined" and n["value"] is None and n.get("reason"))
+                check(f"{name}: {n['id']} finite or explained", ok, str(n))
+            for rid in ("p_value", "bf01", "posterior_null"):
+                check(f"{name}: {rid} defined", rid in doc["results"], str(doc["numbers"]))
+            if "posterior_null" in doc["results"]:
+                v = doc["results"]["posterior_null"]
+                check(f"{name}: posterior_null in [0,1]", 0 <= v <= 1, v)
+
+# --- bad usage ------------------------------------------------------------------------
+for args in [(), ("frobnicate",), ("analyse",), ("analyse", demo, "--colour")]:
+    code, out, err = run(*args)
+    check(f"usage {args}: exit 2", code == 2, f"{code} {err}")
+    check(f"usage {args}: says usage", "Usage" in err or "usage" in err, err)
+
+print(f"{passed} passed, {failed} failed")
+sys.exit(1 if failed else 0)

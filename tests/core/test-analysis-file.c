@@ -1,0 +1,308 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * The analysis file: reading, writing, keeping unknown keys, atomic saves, and a
+ * problem naming group and key for every kind of bad value.
+ */
+#include "tf-analysis-file.h"
+#include "tf-results.h"
+
+#include <glib/gstdio.h>
+#include <locale.h>
+#include <math.h>
+
+static const char demo[] =
+  "# a comment at the top\n"
+  "[Analysis]\n"
+  "Format=1\n"
+  "Design=one-proportion\n"
+  "Title=Seed lot 7\n"
+  "Operator=J. Doe\n"
+  "\n"
+  "[Data]\n"
+  "Successes=9700\n"
+  "Trials=12000\n"
+  "\n"
+  "[Null]\n"
+  "Kind=point\n"
+  "Value=0.8\n"
+  "\n"
+  "[Alternative]\n"
+  "Direction=two-sided\n"
+  "Prior=beta\n"
+  "PriorA=1\n"
+  "PriorB=1\n"
+  "\n"
+  "[Models]\n"
+  "PriorNull=0.5\n"
+  "\n"
+  "[Options]\n"
+  "Level=0.95\n"
+  "\n"
+  "[Lab notebook]\n"
+  "# kept as written\n"
+  "Page=41\n";
+
+static TfAnalysis *
+load_string (const char *text, GPtrArray *problems)
+{
+  return tf_analysis_load_from_data (text, strlen (text), problems);
+}
+
+static void
+test_load_fields (void)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) a = load_string (demo, problems);
+
+  g_assert_nonnull (a);
+  g_assert_cmpuint (problems->len, ==, 0);
+  g_assert_cmpint (a->design, ==, TF_DESIGN_ONE_PROPORTION);
+  g_assert_cmpstr (a->title, ==, "Seed lot 7");
+  g_assert_cmpfloat (a->successes, ==, 9700);
+  g_assert_cmpfloat (a->trials, ==, 12000);
+  g_assert_cmpfloat (a->null_value, ==, 0.8);
+  g_assert_cmpfloat (a->prior_a, ==, 1);
+  g_assert_cmpfloat (a->prior_null, ==, 0.5);
+  g_assert_cmpfloat (a->level, ==, 0.95);
+}
+
+/* Saving and loading again gives the same analysis, and the keys Twofold does not
+ * know come back as they were (DESIGN.md: "Unknown keys are kept"). */
+static void
+test_round_trip_keeps_unknown_keys (void)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) a = load_string (demo, problems);
+  g_autoptr (TfAnalysis) b = NULL;
+  g_autofree char *dir = g_dir_make_tmp ("twofold-test-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "lot 7.twofold", NULL);
+  g_autoptr (GError) error = NULL;
+  g_autofree char *written = NULL;
+
+  g_assert_nonnull (a);
+  a->successes = 9701;
+  g_assert_true (tf_analysis_save (a, path, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (path, &written, NULL, NULL));
+  g_assert_nonnull (strstr (written, "Operator=J. Doe"));
+  g_assert_nonnull (strstr (written, "[Lab notebook]"));
+  g_assert_nonnull (strstr (written, "# kept as written\nPage=41"));
+  g_assert_nonnull (strstr (written, "Successes=9701"));
+
+  b = tf_analysis_load (path, problems);
+  g_assert_nonnull (b);
+  g_assert_cmpfloat (b->successes, ==, 9701);
+  g_assert_cmpfloat (b->trials, ==, a->trials);
+  g_assert_cmpfloat (b->null_value, ==, a->null_value);
+  g_assert_cmpstr (b->title, ==, a->title);
+
+  /* Only the target is left in the folder: the temporary file was renamed over it. */
+  {
+    g_autoptr (GDir) d = g_dir_open (dir, 0, NULL);
+    const char *name;
+    guint count = 0;
+
+    while ((name = g_dir_read_name (d)))
+      count++;
+    g_assert_cmpuint (count, ==, 1);
+  }
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+static void
+test_save_failure_leaves_nothing (void)
+{
+  g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  g_autoptr (GError) error = NULL;
+
+  g_assert_false (tf_analysis_save (a, "/nonexistent-folder-for-twofold/x.twofold", &error));
+  g_assert_nonnull (error);
+  g_assert_false (g_file_test ("/nonexistent-folder-for-twofold", G_FILE_TEST_EXISTS));
+}
+
+/* Numbers are written with '.' and read back bit for bit whatever the locale. */
+static void
+test_numbers_round_trip (void)
+{
+  g_autoptr (GRand) rand = g_rand_new_with_seed (20261201);
+  const double specials[] = { 0.1, 1.0 / 3.0, 1e12, 1e-300, 0.9999999999999999,
+                              4.9406564584124654e-324, 1.7976931348623157e308, 800000400000 };
+
+  for (guint i = 0; i < G_N_ELEMENTS (specials) + 10000; i++)
+    {
+      double x = i < G_N_ELEMENTS (specials) ? specials[i]
+                 : exp (g_rand_double_range (rand, -700, 700));
+      g_autofree char *s = tf_format_double (x);
+
+      g_assert_cmpfloat (g_ascii_strtod (s, NULL), ==, x);
+      g_assert_null (strchr (s, ','));
+    }
+  {
+    g_autofree char *s = tf_format_double (0.5);
+    g_assert_cmpstr (s, ==, "0.5");
+  }
+  {
+    g_autofree char *s = tf_format_double (1e12);
+    g_assert_cmpstr (s, ==, "1000000000000");
+  }
+}
+
+static void
+test_locale_independent (void)
+{
+  const char *locales[] = { "de_DE.UTF-8", "fr_FR.UTF-8", "de_DE", NULL };
+  const char *found = NULL;
+
+  for (guint i = 0; locales[i] && !found; i++)
+    if (setlocale (LC_NUMERIC, locales[i]))
+      found = locales[i];
+  if (!found)
+    {
+      g_test_skip ("no locale with a decimal comma is installed");
+      return;
+    }
+  {
+    g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+    g_autoptr (TfAnalysis) a = load_string (demo, problems);
+    g_autofree char *data = NULL;
+
+    g_assert_nonnull (a);
+    g_assert_cmpfloat (a->null_value, ==, 0.8);
+    data = tf_analysis_to_data (a, NULL);
+    g_assert_nonnull (strstr (data, "Value=0.8\n"));
+  }
+  setlocale (LC_NUMERIC, "C");
+}
+
+typedef struct {
+  const char *old, *new;
+  const char *group, *key;
+} BadCase;
+
+/* Each bad value gives a problem naming its group and key. */
+static void
+test_bad_values_named (void)
+{
+  const BadCase cases[] = {
+    { "Trials=12000", "Trials=abc", "Data", "Trials" },
+    { "Trials=12000", "Trials=", "Data", "Trials" },
+    { "Trials=12000", "Trials=nan", "Data", "Trials" },
+    { "Trials=12000", "Trials=-inf", "Data", "Trials" },
+    { "Trials=12000", "Trials=1e400", "Data", "Trials" },
+    { "Trials=12000", "Trials=0x10", "Data", "Trials" },
+    { "Trials=12000", "Trials=12 000", "Data", "Trials" },
+    { "Trials=12000\n", "", "Data", "Trials" },
+    { "Successes=9700\n", "", "Data", "Successes" },
+    { "Value=0.8", "Value=0,8", "Null", "Value" },
+    { "Kind=point", "Kind=fuzzy", "Null", "Kind" },
+    { "Direction=two-sided", "Direction=up", "Alternative", "Direction" },
+    { "Prior=beta", "Prior=lognormal", "Alternative", "Prior" },
+    { "PriorA=1", "PriorA=one", "Alternative", "PriorA" },
+    { "PriorNull=0.5", "PriorNull=half", "Models", "PriorNull" },
+    { "Level=0.95", "Level=95%", "Options", "Level" },
+    { "Design=one-proportion", "Design=one-proportions", "Analysis", "Design" },
+    { "Format=1", "Format=2", "Analysis", "Format" },
+    { "Format=1\n", "", "Analysis", "Format" },
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+      g_autoptr (GString) text = g_string_new (demo);
+      g_autoptr (TfAnalysis) a = NULL;
+
+      g_assert_cmpuint (g_string_replace (text, cases[i].old, cases[i].new, 1), ==, 1);
+      a = load_string (text->str, problems);
+      g_assert_null (a);
+      if (tf_problem_list_find (problems, cases[i].group, cases[i].key) == NULL)
+        g_error ("case %u (%s): no problem names [%s] %s", i, cases[i].new,
+                 cases[i].group, cases[i].key);
+    }
+}
+
+static void
+test_not_an_analysis (void)
+{
+  const char *texts[] = { "", "hello\n", "[Data]\nTrials=3\n", "[Analysis\nFormat=1\n" };
+
+  for (guint i = 0; i < G_N_ELEMENTS (texts); i++)
+    {
+      g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+      g_autoptr (TfAnalysis) a = load_string (texts[i], problems);
+
+      g_assert_null (a);
+      g_assert_cmpuint (problems->len, >=, 1);
+    }
+  {
+    g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+    g_autoptr (TfAnalysis) a = tf_analysis_load ("/nonexistent/x.twofold", problems);
+
+    g_assert_null (a);
+    g_assert_cmpuint (problems->len, ==, 1);
+  }
+}
+
+/* The shipped demo analyses load and compute. */
+static void
+test_demos_load (void)
+{
+  const char *names[] = { "seed-germination.twofold", "workshop-defects.twofold" };
+  const char *top = g_getenv ("TF_SOURCE_DIR");
+
+  if (top == NULL)
+    {
+      g_test_skip ("TF_SOURCE_DIR is not set");
+      return;
+    }
+  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
+    {
+      g_autofree char *path = g_build_filename (top, "data", "demo", names[i], NULL);
+      g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+      g_autoptr (TfAnalysis) a = tf_analysis_load (path, problems);
+      g_autoptr (TfResults) r = NULL;
+
+      g_assert_nonnull (a);
+      r = tf_analysis_compute (a, problems);
+      g_assert_nonnull (r);
+      g_assert_true (tf_results_get (r, "p_value", NULL));
+      g_assert_true (tf_results_get (r, "posterior_null", NULL));
+    }
+}
+
+static void
+test_format_value (void)
+{
+  struct { double v; TfMeasure m; const char *want; } cases[] = {
+    { 0.02247, TF_MEASURE_TAIL_PROBABILITY, "0.02247" },
+    { 1e-300, TF_MEASURE_TAIL_PROBABILITY, "1.000 × 10^-300" },
+    { 1 - 1e-12, TF_MEASURE_POSTERIOR_PROBABILITY, "1 − 1e-12" },
+    { 7.98772, TF_MEASURE_BAYES_FACTOR, "7.988" },
+    { 0.0, TF_MEASURE_TAIL_PROBABILITY, "0" },
+    { NAN, TF_MEASURE_BAYES_FACTOR, "not defined" },
+    { INFINITY, TF_MEASURE_BAYES_FACTOR, "not defined" },
+    { 9.99999e-5, TF_MEASURE_TAIL_PROBABILITY, "1.000 × 10^-4" },
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      g_autofree char *s = tf_format_value (cases[i].v, cases[i].m);
+      g_assert_cmpstr (s, ==, cases[i].want);
+    }
+}
+
+int
+main (int argc, char **argv)
+{
+  setlocale (LC_ALL, "C.UTF-8");
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/analysis-file/load-fields", test_load_fields);
+  g_test_add_func ("/analysis-file/round-trip-keeps-unknown-keys", test_round_trip_keeps_unknown_keys);
+  g_test_add_func ("/analysis-file/save-failure-leaves-nothing", test_save_failure_leaves_nothing);
+  g_test_add_func ("/analysis-file/numbers-round-trip", test_numbers_round_trip);
+  g_test_add_func ("/analysis-file/locale-independent", test_locale_independent);
+  g_test_add_func ("/analysis-file/bad-values-named", test_bad_values_named);
+  g_test_add_func ("/analysis-file/not-an-analysis", test_not_an_analysis);
+  g_test_add_func ("/analysis-file/demos-load", test_demos_load);
+  g_test_add_func ("/results/format-value", test_format_value);
+  return g_test_run ();
+}
