@@ -7,6 +7,7 @@
 #include "tf-analysis-file.h"
 #include "tf-explain.h"
 #include "tf-results.h"
+#include "tf-figure-export.h"
 
 #include <glib/gi18n.h>
 #include <gsl/gsl_errno.h>
@@ -36,6 +37,8 @@ usage_error (const char *message)
 {
   g_printerr ("twofold-cli: %s\n", message);
   g_printerr (_("Usage: twofold-cli analyse FILE [--json]\n"
+                "       twofold-cli figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
+                "                   [--width-mm W] [--height-mm H] [--dpi D]\n"
                 "       twofold-cli --help\n"));
   return EXIT_USAGE;
 }
@@ -113,6 +116,59 @@ command_analyse (int argc, char **argv)
   return fflush (stdout) == 0 ? EXIT_DONE : EXIT_NOT_COMPUTED;
 }
 
+static int
+command_figure (int argc, char **argv)
+{
+  g_autofree char *kind = NULL;
+  g_autofree char *output = NULL;
+  double width_mm = TF_FIGURE_DEFAULT_WIDTH_MM, height_mm = TF_FIGURE_DEFAULT_HEIGHT_MM;
+  double dpi = TF_FIGURE_DEFAULT_DPI;
+  GOptionEntry entries[] = {
+    { "kind", 0, 0, G_OPTION_ARG_STRING, &kind,
+      N_("densities, sensitivity, sample-size, null-distribution or model-probabilities"), N_("KIND") },
+    { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("The file to write: .png, .svg or .pdf"), N_("OUT") },
+    { "width-mm", 0, 0, G_OPTION_ARG_DOUBLE, &width_mm, N_("Width in millimetres (default 120)"), N_("W") },
+    { "height-mm", 0, 0, G_OPTION_ARG_DOUBLE, &height_mm, N_("Height in millimetres (default 80)"), N_("H") },
+    { "dpi", 0, 0, G_OPTION_ARG_DOUBLE, &dpi, N_("Dots per inch of a PNG (default 300)"), N_("D") },
+    { NULL }
+  };
+  g_autoptr (GOptionContext) context = g_option_context_new (_("figure FILE"));
+  g_autoptr (GError) error = NULL;
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) analysis = NULL;
+
+  g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
+  g_option_context_set_summary (context, _("Draws a figure of an analysis to PNG, SVG or PDF."));
+  if (!g_option_context_parse (context, &argc, &argv, &error))
+    return usage_error (error->message);
+  if (argc != 3)
+    return usage_error (argc < 3 ? _("figure needs the analysis file to read")
+                                 : _("figure reads one file"));
+  if (kind == NULL)
+    return usage_error (_("figure needs --kind"));
+  if (output == NULL)
+    return usage_error (_("figure needs --output"));
+
+  analysis = tf_analysis_load (argv[2], problems);
+  if (analysis == NULL)
+    {
+      print_problems (argv[2], problems);
+      return EXIT_USAGE;
+    }
+  if (!tf_figure_export (analysis, kind, output, width_mm, height_mm, dpi, &error))
+    {
+      gboolean usage = error->domain == TF_FIGURE_ERROR
+                       && (error->code == TF_FIGURE_ERROR_UNKNOWN_KIND
+                           || error->code == TF_FIGURE_ERROR_BAD_SIZE
+                           || error->code == TF_FIGURE_ERROR_BAD_FORMAT
+                           || error->code == TF_FIGURE_ERROR_INVALID_ANALYSIS);
+
+      g_printerr ("%s: %s\n", argv[2], error->message);
+      return usage ? EXIT_USAGE : EXIT_NOT_COMPUTED;
+    }
+  return EXIT_DONE;
+}
+
 int
 main (int argc, char **argv)
 {
@@ -128,7 +184,10 @@ main (int argc, char **argv)
     {
       g_print (_("Usage: twofold-cli COMMAND ...\n\n"
                  "Commands:\n"
-                 "  analyse FILE [--json]   every number of an analysis, as text or JSON\n\n"
+                 "  analyse FILE [--json]   every number of an analysis, as text or JSON\n"
+                 "  figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
+                 "         [--width-mm W] [--height-mm H] [--dpi D]\n"
+                 "                          a figure at the size a journal asks\n\n"
                  "Exit codes: 0 done; 1 the analysis could not be computed;\n"
                  "2 bad usage or a bad file (the message names file, group and key).\n"));
       return EXIT_DONE;
@@ -140,6 +199,8 @@ main (int argc, char **argv)
     }
   if (g_str_equal (argv[1], "analyse") || g_str_equal (argv[1], "analyze"))
     return command_analyse (argc, argv);
+  if (g_str_equal (argv[1], "figure"))
+    return command_figure (argc, argv);
   {
     g_autofree char *message = g_strdup_printf (_("unknown command “%s”"), argv[1]);
     return usage_error (message);

@@ -160,6 +160,62 @@ with tempfile.TemporaryDirectory() as tmp:
                 v = doc["results"]["posterior_null"]
                 check(f"{name}: posterior_null in [0,1]", 0 <= v <= 1, v)
 
+# --- figures: sizes exact, files well formed, nothing written on error ----------------
+import shutil
+import struct
+import xml.etree.ElementTree as ET
+
+with tempfile.TemporaryDirectory() as tmp:
+    png = os.path.join(tmp, "d.png")
+    code, out, err = run("figure", demo, "--kind", "densities", "--output", png)
+    check("png default exit 0", code == 0, err)
+    with open(png, "rb") as f:
+        head = f.read(80)
+    check("png signature", head[:8] == b"\x89PNG\r\n\x1a\n")
+    w, h = struct.unpack(">II", head[16:24])
+    # 120 x 80 mm at 300 dpi: round(120 / 25.4 * 300) = 1417, round(80 / 25.4 * 300) = 945
+    check("png default size", (w, h) == (1417, 945), (w, h))
+    check("png has pHYs 300 dpi", b"pHYs" in head and
+          struct.unpack(">I", head[head.index(b"pHYs") + 4:][:4])[0] == round(300 / 0.0254))
+    code, out, err = run("figure", demo, "--kind", "densities", "--output", png,
+                         "--width-mm", "85", "--height-mm", "60", "--dpi", "600")
+    with open(png, "rb") as f:
+        w, h = struct.unpack(">II", f.read(24)[16:24])
+    check("png 85 x 60 mm at 600 dpi", (w, h) == (round(85 / 25.4 * 600), round(60 / 25.4 * 600)), (w, h))
+
+    svg = os.path.join(tmp, "d.svg")
+    code, out, err = run("figure", demo, "--kind", "densities", "--output", svg, "--width-mm", "85")
+    check("svg exit 0", code == 0, err)
+    root = ET.parse(svg).getroot()
+    check("svg width in mm", root.get("width") in ("85mm", "85.0mm") or root.get("width", "").startswith("85"),
+          root.get("width"))
+
+    pdf = os.path.join(tmp, "d.pdf")
+    code, out, err = run("figure", demo, "--kind", "densities", "--output", pdf,
+                         "--width-mm", "174", "--height-mm", "100")
+    check("pdf exit 0", code == 0, err)
+    if shutil.which("pdfinfo"):
+        info = subprocess.run(["pdfinfo", pdf], capture_output=True, text=True).stdout
+        size = [l for l in info.splitlines() if l.startswith("Page size:")][0].split()
+        wpt, hpt = float(size[2]), float(size[4])
+        # 174 mm = 493.228 pt, 100 mm = 283.465 pt (1 in = 25.4 mm = 72 pt)
+        check("pdf page 174 x 100 mm", abs(wpt - 174 / 25.4 * 72) < 0.01 and abs(hpt - 100 / 25.4 * 72) < 0.01,
+              size)
+
+    for args, want in [
+        (("--kind", "pie", "--output", os.path.join(tmp, "x.png")), 2),
+        (("--kind", "densities", "--output", os.path.join(tmp, "x.gif")), 2),
+        (("--kind", "densities", "--output", os.path.join(tmp, "x.png"), "--width-mm", "0"), 2),
+        (("--kind", "densities", "--output", os.path.join(tmp, "x.png"), "--dpi", "1e6"), 2),
+        (("--kind", "densities", "--output", "/nonexistent-dir/x.png"), 1),
+        (("--output", os.path.join(tmp, "x.png")), 2),
+    ]:
+        code, out, err = run("figure", demo, *args)
+        check(f"figure {args}: exit {want}", code == want, f"{code} {err}")
+        check(f"figure {args}: message", err.strip() != "")
+    check("nothing written on error", not os.path.exists(os.path.join(tmp, "x.png"))
+          and not os.path.exists(os.path.join(tmp, "x.gif")))
+
 # --- bad usage ------------------------------------------------------------------------
 for args in [(), ("frobnicate",), ("analyse",), ("analyse", demo, "--colour")]:
     code, out, err = run(*args)
