@@ -1,0 +1,23 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-window-private.h: what the GUI tests look at inside a TfWindow.
+ */
+#pragma once
+
+#include "tf-window.h"
+#include "tf-proportion-form.h"
+#include "tf-plot-view.h"
+#include "tf-result-list.h"
+#include "tf-explanation-pane.h"
+
+G_BEGIN_DECLS
+
+TfProportionForm *tf_window_get_form (TfWindow *self);
+TfPlotView *tf_window_get_plot_view (TfWindow *self);
+TfResultList *tf_window_get_result_list (TfWindow *self);
+TfExplanationPane *tf_window_get_explanation_pane (TfWindow *self);
+/* The analysis as the form last set it (possibly not valid). */
+const TfAnalysis *tf_window_get_analysis (TfWindow *self);
+/* "analysis" when results are shown, "invalid" when the form needs fixing. */
+const char *tf_window_get_visible_page (TfWindow *self);
+
+G_END_DECLS

@@ -1,0 +1,553 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-window.c: one analysis in a window. Every edit of the form recomputes at once; an
+ * analysis that cannot be computed clears the figure, the numbers and the explanations
+ * and says what to fix, so nothing stale is ever shown.
+ */
+#include <glib/gi18n.h>
+#include "tf-window.h"
+#include "tf-window-private.h"
+#include "tf-analysis-file.h"
+#include "tf-results.h"
+
+#define DEMO_RESOURCE "/org/twofold/Twofold/demo/seed-germination.twofold"
+#define FILE_SUFFIX ".twofold"
+
+struct _TfWindow
+{
+  AdwApplicationWindow parent_instance;
+
+  /* template */
+  AdwWindowTitle *window_title;
+  AdwToastOverlay *toast_overlay;
+  AdwFlap *flap;
+  GtkToggleButton *explanations_button;
+  TfProportionForm *form;
+  GtkStack *center_stack;
+  GtkPaned *paned;
+  TfPlotView *plot_view;
+  TfResultList *result_list;
+  AdwStatusPage *invalid_page;
+  TfExplanationPane *explanation_pane;
+
+  TfAnalysis *analysis;         /* the document, as the form last set it */
+  TfResults *results;           /* NULL while the analysis cannot be computed */
+  GFile *file;                  /* NULL for the demo and new analyses */
+  gboolean is_demo;
+  GSettings *settings;          /* NULL when the schema is not installed */
+  GtkFileChooserNative *chooser;
+};
+
+G_DEFINE_FINAL_TYPE (TfWindow, tf_window, ADW_TYPE_APPLICATION_WINDOW)
+
+static void
+update_title (TfWindow *self)
+{
+  const char *title = self->analysis && self->analysis->title && *self->analysis->title
+                        ? self->analysis->title : _("Untitled Analysis");
+  const char *design = tf_design_label (self->analysis ? self->analysis->design
+                                                       : TF_DESIGN_ONE_PROPORTION);
+  g_autofree char *subtitle = NULL;
+
+  if (self->file)
+    {
+      g_autofree char *name = g_file_get_basename (self->file);
+      /* TRANSLATORS: window subtitle: design, then file name */
+      subtitle = g_strdup_printf (_("%s — %s"), design, name);
+    }
+  else if (self->is_demo)
+    /* TRANSLATORS: window subtitle: the design of the demo analysis */
+    subtitle = g_strdup_printf (_("%s — demo"), design);
+  else
+    subtitle = g_strdup (design);
+
+  adw_window_title_set_title (self->window_title, title);
+  adw_window_title_set_subtitle (self->window_title, subtitle);
+  gtk_window_set_title (GTK_WINDOW (self), title);
+}
+
+static char *
+problems_to_text (GPtrArray *problems, gboolean with_fields)
+{
+  GString *text = g_string_new (NULL);
+
+  for (guint i = 0; i < problems->len; i++)
+    {
+      const TfProblem *problem = g_ptr_array_index (problems, i);
+
+      if (text->len > 0)
+        g_string_append_c (text, '\n');
+      if (with_fields && problem->group && *problem->group)
+        /* TRANSLATORS: a problem in a file: [group] key: message */
+        g_string_append_printf (text, _("[%s] %s: %s"), problem->group,
+                                problem->key ? problem->key : "", problem->message);
+      else
+        g_string_append (text, problem->message);
+    }
+  return g_string_free (text, FALSE);
+}
+
+static void
+recompute (TfWindow *self)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autofree char *description = NULL;
+
+  g_clear_pointer (&self->results, tf_results_free);
+  if (tf_proportion_form_apply (self->form, self->analysis, problems))
+    self->results = tf_analysis_compute (self->analysis, problems);
+  tf_proportion_form_show_problems (self->form, problems);
+
+  if (self->results)
+    {
+      tf_result_list_set_results (self->result_list, self->results);
+      tf_plot_view_set_analysis (self->plot_view, self->analysis);
+      tf_explanation_pane_set_results (self->explanation_pane, self->analysis, self->results);
+      gtk_stack_set_visible_child_name (self->center_stack, "analysis");
+      return;
+    }
+
+  if (problems->len == 0)
+    g_ptr_array_add (problems, tf_problem_new ("", "", "%s",
+                                               _("The analysis could not be computed.")));
+  description = problems_to_text (problems, FALSE);
+  adw_status_page_set_description (self->invalid_page, description);
+  tf_result_list_clear (self->result_list, _("Fix the Marked Field"), description);
+  tf_plot_view_set_analysis (self->plot_view, NULL);
+  tf_explanation_pane_clear (self->explanation_pane,
+                             _("Fix the field marked in the form: the explanations come back with the results."));
+  gtk_stack_set_visible_child_name (self->center_stack, "invalid");
+}
+
+static void
+on_form_changed (TfProportionForm *form, TfWindow *self)
+{
+  recompute (self);
+}
+
+void
+tf_window_set_analysis (TfWindow *self, const TfAnalysis *analysis, GFile *file)
+{
+  g_return_if_fail (TF_IS_WINDOW (self));
+  g_return_if_fail (analysis != NULL);
+
+  g_clear_pointer (&self->analysis, tf_analysis_free);
+  self->analysis = tf_analysis_copy (analysis);
+  g_set_object (&self->file, file);
+  self->is_demo = FALSE;
+  tf_proportion_form_set_analysis (self->form, self->analysis);
+  recompute (self);
+  update_title (self);
+}
+
+static void
+show_error (TfWindow *self, const char *heading, const char *body)
+{
+  GtkWidget *dialog = adw_message_dialog_new (GTK_WINDOW (self), heading, body);
+
+  adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (dialog), "close", _("_Close"));
+  adw_message_dialog_set_default_response (ADW_MESSAGE_DIALOG (dialog), "close");
+  gtk_window_present (GTK_WINDOW (dialog));
+}
+
+static char *
+file_display_name (GFile *file)
+{
+  g_autofree char *path = g_file_get_path (file);
+  return path ? g_filename_display_name (path) : g_file_get_parse_name (file);
+}
+
+gboolean
+tf_window_open_file (TfWindow *self, GFile *file)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) analysis = NULL;
+  g_autofree char *path = g_file_get_path (file);
+  g_autofree char *name = file_display_name (file);
+
+  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
+
+  if (path == NULL)
+    {
+      g_autofree char *heading = g_strdup_printf (_("Could Not Open “%s”"), name);
+      show_error (self, heading, _("Only files on this computer can be opened."));
+      return FALSE;
+    }
+  analysis = tf_analysis_load (path, problems);
+  if (analysis == NULL)
+    {
+      g_autofree char *heading = g_strdup_printf (_("Could Not Open “%s”"), name);
+      g_autofree char *body = problems_to_text (problems, TRUE);
+      show_error (self, heading, body);
+      return FALSE;
+    }
+  tf_window_set_analysis (self, analysis, file);
+  if (self->settings)
+    {
+      g_autoptr (GFile) parent = g_file_get_parent (file);
+      g_autofree char *folder = parent ? g_file_get_path (parent) : NULL;
+      if (folder)
+        g_settings_set_string (self->settings, "last-folder", folder);
+    }
+  return TRUE;
+}
+
+void
+tf_window_open_demo (TfWindow *self)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (GBytes) bytes = NULL;
+  g_autoptr (TfAnalysis) analysis = NULL;
+
+  g_return_if_fail (TF_IS_WINDOW (self));
+
+  bytes = g_resources_lookup_data (DEMO_RESOURCE, G_RESOURCE_LOOKUP_FLAGS_NONE, NULL);
+  if (bytes)
+    {
+      gsize size;
+      const char *data = g_bytes_get_data (bytes, &size);
+      analysis = tf_analysis_load_from_data (data, size, problems);
+    }
+#ifdef TF_DEMO_DIR
+  if (analysis == NULL)
+    {
+      g_autofree char *path = g_build_filename (TF_DEMO_DIR, "seed-germination.twofold", NULL);
+      g_ptr_array_set_size (problems, 0);
+      analysis = tf_analysis_load (path, problems);
+    }
+#endif
+  if (analysis == NULL)
+    {
+      g_warning ("The demo analysis could not be read; showing the defaults");
+      analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+    }
+  tf_window_set_analysis (self, analysis, NULL);
+  self->is_demo = TRUE;
+  update_title (self);
+}
+
+/* Files */
+
+static GtkFileFilter *
+twofold_filter_new (void)
+{
+  GtkFileFilter *filter = gtk_file_filter_new ();
+
+  gtk_file_filter_set_name (filter, _("Twofold analyses"));
+  gtk_file_filter_add_mime_type (filter, "application/x-twofold");
+  gtk_file_filter_add_suffix (filter, "twofold");
+  return filter;
+}
+
+static void
+chooser_set_folder (TfWindow *self, GtkFileChooser *chooser)
+{
+  g_autofree char *folder = NULL;
+
+  if (self->file)
+    {
+      g_autoptr (GFile) parent = g_file_get_parent (self->file);
+      if (parent)
+        gtk_file_chooser_set_current_folder (chooser, parent, NULL);
+      return;
+    }
+  if (self->settings)
+    folder = g_settings_get_string (self->settings, "last-folder");
+  if (folder && *folder)
+    {
+      g_autoptr (GFile) dir = g_file_new_for_path (folder);
+      gtk_file_chooser_set_current_folder (chooser, dir, NULL);
+    }
+}
+
+static void
+on_open_response (GtkNativeDialog *dialog, int response, TfWindow *self)
+{
+  if (response == GTK_RESPONSE_ACCEPT)
+    {
+      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
+      if (file)
+        tf_window_open_file (self, file);
+    }
+  g_clear_object (&self->chooser);
+}
+
+static void
+open_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
+{
+  TfWindow *self = TF_WINDOW (widget);
+  g_autoptr (GtkFileFilter) filter = twofold_filter_new ();
+
+  if (self->chooser)
+    return;
+  self->chooser = gtk_file_chooser_native_new (_("Open Analysis"), GTK_WINDOW (self),
+                                               GTK_FILE_CHOOSER_ACTION_OPEN,
+                                               _("_Open"), _("_Cancel"));
+  gtk_native_dialog_set_modal (GTK_NATIVE_DIALOG (self->chooser), TRUE);
+  gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (self->chooser), filter);
+  chooser_set_folder (self, GTK_FILE_CHOOSER (self->chooser));
+  g_signal_connect (self->chooser, "response", G_CALLBACK (on_open_response), self);
+  gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
+}
+
+static gboolean
+save_to (TfWindow *self, GFile *file)
+{
+  g_autoptr (GError) error = NULL;
+  g_autofree char *path = g_file_get_path (file);
+  g_autofree char *name = file_display_name (file);
+  g_autofree char *basename = g_file_get_basename (file);
+
+  if (self->results == NULL)
+    {
+      g_autofree char *heading = g_strdup_printf (_("Could Not Save “%s”"), name);
+      show_error (self, heading,
+                  _("The analysis has a field that needs fixing, marked in the form. Fix it, then save again."));
+      return FALSE;
+    }
+  if (path == NULL || !tf_analysis_save (self->analysis, path, &error))
+    {
+      g_autofree char *heading = g_strdup_printf (_("Could Not Save “%s”"), name);
+      show_error (self, heading, error ? error->message : _("Only files on this computer can be written."));
+      return FALSE;
+    }
+  g_set_object (&self->file, file);
+  self->is_demo = FALSE;
+  update_title (self);
+  {
+    g_autofree char *message = g_strdup_printf (_("Saved “%s”"), basename);
+    adw_toast_overlay_add_toast (self->toast_overlay, adw_toast_new (message));
+  }
+  if (self->settings)
+    {
+      g_autoptr (GFile) parent = g_file_get_parent (file);
+      g_autofree char *folder = parent ? g_file_get_path (parent) : NULL;
+      if (folder)
+        g_settings_set_string (self->settings, "last-folder", folder);
+    }
+  return TRUE;
+}
+
+static void
+on_save_response (GtkNativeDialog *dialog, int response, TfWindow *self)
+{
+  if (response == GTK_RESPONSE_ACCEPT)
+    {
+      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
+      g_autofree char *basename = file ? g_file_get_basename (file) : NULL;
+
+      if (file && basename && !g_str_has_suffix (basename, FILE_SUFFIX))
+        {
+          g_autofree char *with_suffix = g_strconcat (basename, FILE_SUFFIX, NULL);
+          g_autoptr (GFile) parent = g_file_get_parent (file);
+          g_autoptr (GFile) renamed = g_file_get_child (parent, with_suffix);
+          g_set_object (&file, renamed);
+        }
+      if (file)
+        save_to (self, file);
+    }
+  g_clear_object (&self->chooser);
+}
+
+static char *
+suggested_name (TfWindow *self)
+{
+  if (self->file)
+    return g_file_get_basename (self->file);
+  if (self->is_demo)
+    return g_strdup ("seed-germination" FILE_SUFFIX);
+  return g_strconcat (_("analysis"), FILE_SUFFIX, NULL);
+}
+
+static void
+save_as_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
+{
+  TfWindow *self = TF_WINDOW (widget);
+  g_autoptr (GtkFileFilter) filter = twofold_filter_new ();
+  g_autofree char *name = suggested_name (self);
+
+  if (self->chooser)
+    return;
+  self->chooser = gtk_file_chooser_native_new (_("Save Analysis"), GTK_WINDOW (self),
+                                               GTK_FILE_CHOOSER_ACTION_SAVE,
+                                               _("_Save"), _("_Cancel"));
+  gtk_native_dialog_set_modal (GTK_NATIVE_DIALOG (self->chooser), TRUE);
+  gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (self->chooser), filter);
+  chooser_set_folder (self, GTK_FILE_CHOOSER (self->chooser));
+  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (self->chooser), name);
+  g_signal_connect (self->chooser, "response", G_CALLBACK (on_save_response), self);
+  gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
+}
+
+static void
+save_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
+{
+  TfWindow *self = TF_WINDOW (widget);
+
+  if (self->file == NULL)
+    save_as_action (widget, "win.save-as", NULL);
+  else
+    save_to (self, self->file);
+}
+
+/* Window state */
+
+static gboolean
+tf_window_close_request (GtkWindow *window)
+{
+  TfWindow *self = TF_WINDOW (window);
+
+  if (self->settings)
+    {
+      int width, height;
+
+      gtk_window_get_default_size (window, &width, &height);
+      g_settings_set_int (self->settings, "window-width", width);
+      g_settings_set_int (self->settings, "window-height", height);
+      g_settings_set_boolean (self->settings, "window-maximized", gtk_window_is_maximized (window));
+    }
+  return GTK_WINDOW_CLASS (tf_window_parent_class)->close_request (window);
+}
+
+static void
+load_settings (TfWindow *self)
+{
+  GSettingsSchemaSource *source = g_settings_schema_source_get_default ();
+  g_autoptr (GSettingsSchema) schema = source ? g_settings_schema_source_lookup (source, TF_APP_ID, TRUE)
+                                              : NULL;
+
+  if (schema == NULL)
+    return;
+  self->settings = g_settings_new (TF_APP_ID);
+  gtk_window_set_default_size (GTK_WINDOW (self),
+                               g_settings_get_int (self->settings, "window-width"),
+                               g_settings_get_int (self->settings, "window-height"));
+  if (g_settings_get_boolean (self->settings, "window-maximized"))
+    gtk_window_maximize (GTK_WINDOW (self));
+  g_settings_bind (self->settings, "show-explanations", self->flap, "reveal-flap",
+                   G_SETTINGS_BIND_DEFAULT);
+}
+
+/* Accessors for the tests */
+
+TfProportionForm *
+tf_window_get_form (TfWindow *self)
+{
+  return self->form;
+}
+
+TfPlotView *
+tf_window_get_plot_view (TfWindow *self)
+{
+  return self->plot_view;
+}
+
+TfResultList *
+tf_window_get_result_list (TfWindow *self)
+{
+  return self->result_list;
+}
+
+TfExplanationPane *
+tf_window_get_explanation_pane (TfWindow *self)
+{
+  return self->explanation_pane;
+}
+
+const TfAnalysis *
+tf_window_get_analysis (TfWindow *self)
+{
+  return self->analysis;
+}
+
+const char *
+tf_window_get_visible_page (TfWindow *self)
+{
+  return gtk_stack_get_visible_child_name (self->center_stack);
+}
+
+/* GObject */
+
+static void
+tf_window_dispose (GObject *object)
+{
+  TfWindow *self = TF_WINDOW (object);
+
+  if (self->chooser)
+    {
+      gtk_native_dialog_destroy (GTK_NATIVE_DIALOG (self->chooser));
+      g_clear_object (&self->chooser);
+    }
+  g_clear_object (&self->settings);
+  gtk_widget_dispose_template (GTK_WIDGET (self), TF_TYPE_WINDOW);
+  G_OBJECT_CLASS (tf_window_parent_class)->dispose (object);
+}
+
+static void
+tf_window_finalize (GObject *object)
+{
+  TfWindow *self = TF_WINDOW (object);
+
+  g_clear_pointer (&self->analysis, tf_analysis_free);
+  g_clear_pointer (&self->results, tf_results_free);
+  g_clear_object (&self->file);
+  G_OBJECT_CLASS (tf_window_parent_class)->finalize (object);
+}
+
+static void
+tf_window_class_init (TfWindowClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+  GtkWindowClass *window_class = GTK_WINDOW_CLASS (klass);
+
+  object_class->dispose = tf_window_dispose;
+  object_class->finalize = tf_window_finalize;
+  window_class->close_request = tf_window_close_request;
+
+  g_type_ensure (TF_TYPE_PROPORTION_FORM);
+  g_type_ensure (TF_TYPE_PLOT_VIEW);
+  g_type_ensure (TF_TYPE_RESULT_LIST);
+  g_type_ensure (TF_TYPE_EXPLANATION_PANE);
+
+  gtk_widget_class_set_template_from_resource (widget_class, "/org/twofold/Twofold/ui/tf-window.ui");
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, window_title);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, toast_overlay);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, flap);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, explanations_button);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, form);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, center_stack);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, paned);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, plot_view);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, result_list);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, invalid_page);
+  gtk_widget_class_bind_template_child (widget_class, TfWindow, explanation_pane);
+
+  gtk_widget_class_install_action (widget_class, "win.open", NULL, open_action);
+  gtk_widget_class_install_action (widget_class, "win.save", NULL, save_action);
+  gtk_widget_class_install_action (widget_class, "win.save-as", NULL, save_as_action);
+}
+
+static void
+tf_window_init (TfWindow *self)
+{
+  g_autoptr (GPropertyAction) show_explanations = NULL;
+
+  gtk_widget_init_template (GTK_WIDGET (self));
+
+  show_explanations = g_property_action_new ("show-explanations", self->flap, "reveal-flap");
+  g_action_map_add_action (G_ACTION_MAP (self), G_ACTION (show_explanations));
+
+  g_signal_connect (self->form, "changed", G_CALLBACK (on_form_changed), self);
+  load_settings (self);
+
+  self->analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  tf_proportion_form_set_analysis (self->form, self->analysis);
+  recompute (self);
+  update_title (self);
+}
+
+TfWindow *
+tf_window_new (GtkApplication *application)
+{
+  return g_object_new (TF_TYPE_WINDOW, "application", application, NULL);
+}

@@ -1,0 +1,262 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-axis.c: plot areas, ticks by Heckbert's nice numbers, and axes.
+ */
+#include <math.h>
+#include "tf-axis.h"
+
+#define GAP_PT 2.5              /* between tick and label, label and axis label */
+
+double
+tf_plot_area_map_x (const TfPlotArea *area, double value)
+{
+  double span = area->x_hi - area->x_lo;
+  return area->x + (span > 0 ? (value - area->x_lo) / span : 0.5) * area->width;
+}
+
+double
+tf_plot_area_map_y (const TfPlotArea *area, double value)
+{
+  double span = area->y_hi - area->y_lo;
+  return area->y + area->height - (span > 0 ? (value - area->y_lo) / span : 0.5) * area->height;
+}
+
+/* Heckbert (1990), "Nice numbers for graph labels", Graphics Gems I, pp. 61-63. */
+double
+tf_nice_number (double x, gboolean round)
+{
+  double exponent, fraction, nice;
+
+  if (!(x > 0) || !isfinite (x))
+    return 1.0;
+  exponent = floor (log10 (x));
+  fraction = x / pow (10.0, exponent);
+  if (round)
+    nice = fraction < 1.5 ? 1 : fraction < 3 ? 2 : fraction < 7 ? 5 : 10;
+  else
+    nice = fraction <= 1 ? 1 : fraction <= 2 ? 2 : fraction <= 5 ? 5 : 10;
+  return nice * pow (10.0, exponent);
+}
+
+/* Heckbert (1990) loose labelling. */
+void
+tf_ticks_compute (TfTicks *ticks, double lo, double hi, guint target, gboolean loose)
+{
+  double range, step, first, last, eps;
+
+  if (!isfinite (lo) || !isfinite (hi))
+    lo = 0, hi = 1;
+  if (hi < lo)
+    {
+      double t = lo;
+      lo = hi;
+      hi = t;
+    }
+  if (hi - lo <= fabs (hi) * 1e-12 || hi == lo)
+    {
+      double pad = lo != 0 ? fabs (lo) * 0.1 : 1.0;
+      lo -= pad;
+      hi += pad;
+    }
+  target = CLAMP (target, 2, 12);
+
+  range = tf_nice_number (hi - lo, FALSE);
+  step = tf_nice_number (range / (target - 1), TRUE);
+  eps = step * 1e-9;
+  if (loose)
+    {
+      lo = floor (lo / step + 1e-9) * step;
+      hi = ceil (hi / step - 1e-9) * step;
+    }
+  first = ceil (lo / step - 1e-9) * step;
+  last = floor (hi / step + 1e-9) * step;
+
+  ticks->lo = lo;
+  ticks->hi = hi;
+  ticks->first = first;
+  ticks->step = step;
+  ticks->n = last + eps >= first ? (guint) floor ((last - first) / step + 0.5) + 1 : 0;
+  ticks->n_frac = (int) MAX (-floor (log10 (step) + 1e-9), 0);
+}
+
+double
+tf_ticks_value (const TfTicks *ticks, guint i)
+{
+  double v = ticks->first + i * ticks->step;
+  /* no "-0" and no 0.30000000000000004 */
+  if (fabs (v) < ticks->step * 1e-9)
+    v = 0;
+  return v;
+}
+
+char *
+tf_ticks_label (const TfTicks *ticks, guint i)
+{
+  double v = tf_ticks_value (ticks, i);
+  g_autofree char *text = g_strdup_printf ("%.*f", ticks->n_frac, fabs (v));
+
+  if (v < 0)
+    return g_strconcat ("\u2212", text, NULL);
+  return g_steal_pointer (&text);
+}
+
+guint
+tf_ticks_target (const TfFigureTheme *theme, double length, double spacing_pt)
+{
+  double n = length / tf_figure_theme_pt (theme, spacing_pt);
+  return (guint) CLAMP (floor (n) + 1, 2, 10);
+}
+
+double
+tf_axis_left_extent (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
+                     const char *label_markup)
+{
+  double widest = 0, label_h = 0;
+
+  for (guint i = 0; i < ticks->n; i++)
+    {
+      g_autofree char *text = tf_ticks_label (ticks, i);
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
+      double w;
+
+      tf_figure_layout_size (layout, &w, NULL);
+      widest = MAX (widest, w);
+    }
+  if (label_markup)
+    {
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
+                                                               label_markup);
+      tf_figure_layout_size (layout, NULL, &label_h);
+    }
+  return tf_figure_theme_pt (theme, theme->tick_length + GAP_PT) + widest
+         + (label_h > 0 ? tf_figure_theme_pt (theme, GAP_PT * 1.5) + label_h : 0);
+}
+
+double
+tf_axis_bottom_extent (cairo_t *cr, const TfFigureTheme *theme, const char *label_markup)
+{
+  g_autoptr (PangoLayout) digits = tf_figure_theme_layout (cr, theme, theme->text_size, "0.9");
+  double tick_h, label_h = 0;
+
+  tf_figure_layout_size (digits, NULL, &tick_h);
+  if (label_markup)
+    {
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
+                                                               label_markup);
+      tf_figure_layout_size (layout, NULL, &label_h);
+    }
+  return tf_figure_theme_pt (theme, theme->tick_length + GAP_PT) + tick_h
+         + (label_h > 0 ? tf_figure_theme_pt (theme, GAP_PT) + label_h : 0);
+}
+
+static void
+draw_layout_at (cairo_t *cr, PangoLayout *layout, double x, double y)
+{
+  cairo_move_to (cr, x, y);
+  pango_cairo_show_layout (cr, layout);
+}
+
+void
+tf_axis_draw_bottom (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                     const TfTicks *ticks, const char *label_markup)
+{
+  double base = area->y + area->height;
+  double tick = tf_figure_theme_pt (theme, theme->tick_length);
+  double gap = tf_figure_theme_pt (theme, GAP_PT);
+  double label_top = base + tick + gap;
+  double tick_h = 0;
+
+  cairo_save (cr);
+  tf_figure_theme_set_source (cr, &theme->foreground);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
+  cairo_set_dash (cr, NULL, 0, 0);
+  cairo_move_to (cr, area->x, base);
+  cairo_line_to (cr, area->x + area->width, base);
+  cairo_stroke (cr);
+
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+  for (guint i = 0; i < ticks->n; i++)
+    {
+      double v = tf_ticks_value (ticks, i);
+      double x = tf_plot_area_map_x (area, v);
+      g_autofree char *text = tf_ticks_label (ticks, i);
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
+      double w, h;
+
+      cairo_move_to (cr, x, base);
+      cairo_line_to (cr, x, base + tick);
+      cairo_stroke (cr);
+      tf_figure_layout_size (layout, &w, &h);
+      tick_h = MAX (tick_h, h);
+      draw_layout_at (cr, layout, x - w / 2, label_top);
+    }
+
+  if (label_markup)
+    {
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
+                                                               label_markup);
+      double w;
+
+      if (tick_h == 0)
+        {
+          g_autoptr (PangoLayout) digits = tf_figure_theme_layout (cr, theme, theme->text_size, "0");
+          tf_figure_layout_size (digits, NULL, &tick_h);
+        }
+      tf_figure_layout_size (layout, &w, NULL);
+      draw_layout_at (cr, layout, area->x + (area->width - w) / 2, label_top + tick_h + gap);
+    }
+  cairo_restore (cr);
+}
+
+void
+tf_axis_draw_left (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                   const TfTicks *ticks, const char *label_markup)
+{
+  double tick = tf_figure_theme_pt (theme, theme->tick_length);
+  double gap = tf_figure_theme_pt (theme, GAP_PT);
+  double widest = 0;
+
+  cairo_save (cr);
+  tf_figure_theme_set_source (cr, &theme->foreground);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
+  cairo_set_dash (cr, NULL, 0, 0);
+  cairo_move_to (cr, area->x, area->y);
+  cairo_line_to (cr, area->x, area->y + area->height);
+  cairo_stroke (cr);
+
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+  for (guint i = 0; i < ticks->n; i++)
+    {
+      double v = tf_ticks_value (ticks, i);
+      double y = tf_plot_area_map_y (area, v);
+      g_autofree char *text = tf_ticks_label (ticks, i);
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
+      double w, h;
+
+      cairo_move_to (cr, area->x, y);
+      cairo_line_to (cr, area->x - tick, y);
+      cairo_stroke (cr);
+      tf_figure_layout_size (layout, &w, &h);
+      widest = MAX (widest, w);
+      draw_layout_at (cr, layout, area->x - tick - gap - w, y - h / 2);
+    }
+
+  if (label_markup)
+    {
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
+                                                               label_markup);
+      double w, h;
+
+      tf_figure_layout_size (layout, &w, &h);
+      cairo_save (cr);
+      /* reads upwards, centred on the plot area's height */
+      cairo_translate (cr, area->x - tick - gap - widest - gap * 1.5 - h,
+                       area->y + (area->height + w) / 2);
+      cairo_rotate (cr, -G_PI / 2);
+      pango_cairo_update_layout (cr, layout);
+      draw_layout_at (cr, layout, 0, 0);
+      cairo_restore (cr);
+    }
+  cairo_restore (cr);
+}

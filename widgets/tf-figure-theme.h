@@ -1,0 +1,61 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-figure-theme.h: colours, line styles and text sizes shared by Twofold's figures.
+ * Cairo + PangoCairo only. All sizes are in points and multiplied by the theme's scale
+ * (user units per point) when drawn.
+ */
+#pragma once
+
+#include <cairo.h>
+#include <pango/pangocairo.h>
+#include "tf-figure.h"
+
+G_BEGIN_DECLS
+
+typedef struct {
+  double r, g, b, a;
+} TfColour;
+
+typedef enum {
+  TF_SERIES_PRIOR,
+  TF_SERIES_POSTERIOR,
+  TF_SERIES_LIKELIHOOD,
+  TF_SERIES_NULL,
+  TF_N_SERIES
+} TfSeries;
+
+typedef struct {
+  TfFigureStyle style;
+  double scale;                 /* user units per point */
+  TfColour background;
+  TfColour foreground;          /* text, axes */
+  TfColour muted;               /* secondary text */
+  TfColour series[TF_N_SERIES];
+  const char *font_family;
+  double text_size;             /* pt: tick labels, legend */
+  double label_size;            /* pt: axis labels */
+  double axis_width;            /* pt */
+  double tick_length;           /* pt */
+} TfFigureTheme;
+
+void tf_figure_theme_init (TfFigureTheme *theme, TfFigureStyle style, double scale);
+
+/* Points to user units. */
+static inline double
+tf_figure_theme_pt (const TfFigureTheme *theme, double points)
+{
+  return points * theme->scale;
+}
+
+void tf_figure_theme_set_source (cairo_t *cr, const TfColour *colour);
+void tf_figure_theme_set_source_alpha (cairo_t *cr, const TfColour *colour, double alpha);
+
+/* Sets colour, width, dash pattern and caps of one series' line. */
+void tf_figure_theme_set_series_line (cairo_t *cr, const TfFigureTheme *theme, TfSeries series);
+
+/* A layout for Pango markup at size_pt points in the theme's font. */
+PangoLayout *tf_figure_theme_layout (cairo_t *cr, const TfFigureTheme *theme,
+                                     double size_pt, const char *markup);
+/* Logical size of a layout, in user units. */
+void tf_figure_layout_size (PangoLayout *layout, double *width, double *height);
+
+G_END_DECLS

@@ -1,0 +1,36 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-legend.h: figure legends, placed where they hide no data. Cairo + PangoCairo only.
+ */
+#pragma once
+
+#include <cairo.h>
+#include "tf-axis.h"
+
+G_BEGIN_DECLS
+
+typedef struct {
+  TfSeries series;
+  const char *markup;           /* Pango markup */
+} TfLegendEntry;
+
+/* A polyline in user units: the data a legend must not cover. */
+typedef struct {
+  const double *x;
+  const double *y;
+  guint n;
+} TfPolyline;
+
+/* Size of the legend box, user units. horizontal lays the entries out in one row. */
+void tf_legend_measure (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
+                        guint n_entries, gboolean horizontal, double *width, double *height);
+
+/* Finds a place for a width × height box inside area, inset from its edges, that no
+ * polyline crosses: the top corners first, then along the top, then lower down.
+ * Returns FALSE when every place hides some data. */
+gboolean tf_legend_place (const TfPlotArea *area, double width, double height, double inset,
+                          const TfPolyline *lines, guint n_lines, double *x, double *y);
+
+void tf_legend_draw (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
+                     guint n_entries, gboolean horizontal, double x, double y);
+
+G_END_DECLS

@@ -1,0 +1,207 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-result-list.c: one row per number: its label, and its value or "not defined" with
+ * the reason both visible and as a tooltip.
+ */
+#include <glib/gi18n-lib.h>
+#include <adwaita.h>
+#include "tf-result-list.h"
+
+struct _TfResultList
+{
+  GtkWidget parent_instance;
+
+  GtkStack *stack;
+  AdwStatusPage *placeholder;
+  AdwPreferencesGroup *groups[3];
+
+  GPtrArray *rows[3];           /* AdwActionRow*, per section, not owned */
+  GHashTable *values;           /* id -> GtkLabel*, not owned */
+  GHashTable *subtitles;        /* id -> char* */
+};
+
+G_DEFINE_FINAL_TYPE (TfResultList, tf_result_list, GTK_TYPE_WIDGET)
+
+TfResultSection
+tf_result_section_for_number (const TfNumber *number)
+{
+  switch (number->measure)
+    {
+    case TF_MEASURE_BAYES_FACTOR:
+    case TF_MEASURE_POSTERIOR_PROBABILITY:
+    case TF_MEASURE_CREDIBLE_LIMIT:
+      return TF_RESULT_SECTION_BAYESIAN;
+    case TF_MEASURE_BOUND:
+      return TF_RESULT_SECTION_BOUNDS;
+    case TF_MEASURE_ESTIMATE:
+    case TF_MEASURE_STATISTIC:
+      /* posterior mean and median are estimates of the Bayesian reading */
+      if (number->id && (g_str_has_prefix (number->id, "posterior_")
+                         || g_str_has_prefix (number->id, "cri_")))
+        return TF_RESULT_SECTION_BAYESIAN;
+      return TF_RESULT_SECTION_CLASSICAL;
+    case TF_MEASURE_TAIL_PROBABILITY:
+    case TF_MEASURE_CONFIDENCE_LIMIT:
+    default:
+      return TF_RESULT_SECTION_CLASSICAL;
+    }
+}
+
+static void
+remove_rows (TfResultList *self)
+{
+  for (guint s = 0; s < G_N_ELEMENTS (self->groups); s++)
+    {
+      for (guint i = 0; i < self->rows[s]->len; i++)
+        adw_preferences_group_remove (self->groups[s], g_ptr_array_index (self->rows[s], i));
+      g_ptr_array_set_size (self->rows[s], 0);
+    }
+  g_hash_table_remove_all (self->values);
+  g_hash_table_remove_all (self->subtitles);
+}
+
+static GtkWidget *
+row_new (TfResultList *self, const TfNumber *number)
+{
+  GtkWidget *row = adw_action_row_new ();
+  g_autofree char *text = tf_number_format (number);
+  GtkWidget *value = gtk_label_new (text);
+
+  adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), number->label);
+  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
+  gtk_widget_add_css_class (row, "tf-number");
+  gtk_widget_add_css_class (value, "numeric");
+  gtk_label_set_selectable (GTK_LABEL (value), TRUE);
+  gtk_label_set_xalign (GTK_LABEL (value), 1.0);
+  gtk_widget_set_valign (value, GTK_ALIGN_CENTER);
+  gtk_widget_set_focusable (value, FALSE);
+
+  if (number->status != TF_STATUS_OK)
+    {
+      const char *reason = number->reason ? number->reason : _("not defined for this input");
+
+      adw_action_row_set_subtitle (ADW_ACTION_ROW (row), reason);
+      gtk_widget_set_tooltip_text (value, reason);
+      gtk_widget_set_tooltip_text (row, reason);
+      gtk_widget_add_css_class (value, "dim-label");
+      g_hash_table_insert (self->subtitles, g_strdup (number->id), g_strdup (reason));
+    }
+  adw_action_row_add_suffix (ADW_ACTION_ROW (row), value);
+  g_hash_table_insert (self->values, g_strdup (number->id), value);
+  return row;
+}
+
+void
+tf_result_list_set_results (TfResultList *self, const TfResults *results)
+{
+  g_return_if_fail (TF_IS_RESULT_LIST (self));
+  g_return_if_fail (results != NULL);
+
+  remove_rows (self);
+  for (guint i = 0; i < results->numbers->len; i++)
+    {
+      const TfNumber *number = g_ptr_array_index (results->numbers, i);
+      TfResultSection section = tf_result_section_for_number (number);
+      GtkWidget *row = row_new (self, number);
+
+      adw_preferences_group_add (self->groups[section], row);
+      g_ptr_array_add (self->rows[section], row);
+    }
+  for (guint s = 0; s < G_N_ELEMENTS (self->groups); s++)
+    gtk_widget_set_visible (GTK_WIDGET (self->groups[s]), self->rows[s]->len > 0);
+  gtk_stack_set_visible_child_name (self->stack, "results");
+}
+
+void
+tf_result_list_clear (TfResultList *self, const char *title, const char *description)
+{
+  g_return_if_fail (TF_IS_RESULT_LIST (self));
+
+  remove_rows (self);
+  adw_status_page_set_title (self->placeholder, title ? title : _("No Results"));
+  adw_status_page_set_description (self->placeholder, description);
+  gtk_stack_set_visible_child_name (self->stack, "placeholder");
+}
+
+gboolean
+tf_result_list_has_results (TfResultList *self)
+{
+  g_return_val_if_fail (TF_IS_RESULT_LIST (self), FALSE);
+  return g_hash_table_size (self->values) > 0;
+}
+
+const char *
+tf_result_list_get_value_text (TfResultList *self, const char *id)
+{
+  GtkLabel *label;
+
+  g_return_val_if_fail (TF_IS_RESULT_LIST (self), NULL);
+  label = g_hash_table_lookup (self->values, id);
+  return label ? gtk_label_get_text (label) : NULL;
+}
+
+const char *
+tf_result_list_get_subtitle (TfResultList *self, const char *id)
+{
+  g_return_val_if_fail (TF_IS_RESULT_LIST (self), NULL);
+  return g_hash_table_lookup (self->subtitles, id);
+}
+
+static void
+tf_result_list_dispose (GObject *object)
+{
+  TfResultList *self = TF_RESULT_LIST (object);
+
+  gtk_widget_dispose_template (GTK_WIDGET (self), TF_TYPE_RESULT_LIST);
+  G_OBJECT_CLASS (tf_result_list_parent_class)->dispose (object);
+}
+
+static void
+tf_result_list_finalize (GObject *object)
+{
+  TfResultList *self = TF_RESULT_LIST (object);
+
+  for (guint s = 0; s < G_N_ELEMENTS (self->rows); s++)
+    g_clear_pointer (&self->rows[s], g_ptr_array_unref);
+  g_clear_pointer (&self->values, g_hash_table_unref);
+  g_clear_pointer (&self->subtitles, g_hash_table_unref);
+  G_OBJECT_CLASS (tf_result_list_parent_class)->finalize (object);
+}
+
+static void
+tf_result_list_class_init (TfResultListClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->dispose = tf_result_list_dispose;
+  object_class->finalize = tf_result_list_finalize;
+
+  gtk_widget_class_set_template_from_resource (widget_class,
+                                               "/org/twofold/Twofold/ui/tf-result-list.ui");
+  gtk_widget_class_bind_template_child (widget_class, TfResultList, stack);
+  gtk_widget_class_bind_template_child (widget_class, TfResultList, placeholder);
+  gtk_widget_class_bind_template_child_full (widget_class, "classical_group", FALSE,
+                                             G_STRUCT_OFFSET (TfResultList, groups[TF_RESULT_SECTION_CLASSICAL]));
+  gtk_widget_class_bind_template_child_full (widget_class, "bayesian_group", FALSE,
+                                             G_STRUCT_OFFSET (TfResultList, groups[TF_RESULT_SECTION_BAYESIAN]));
+  gtk_widget_class_bind_template_child_full (widget_class, "bounds_group", FALSE,
+                                             G_STRUCT_OFFSET (TfResultList, groups[TF_RESULT_SECTION_BOUNDS]));
+  gtk_widget_class_set_layout_manager_type (widget_class, GTK_TYPE_BIN_LAYOUT);
+  gtk_widget_class_set_css_name (widget_class, "tf-result-list");
+}
+
+static void
+tf_result_list_init (TfResultList *self)
+{
+  gtk_widget_init_template (GTK_WIDGET (self));
+  for (guint s = 0; s < G_N_ELEMENTS (self->rows); s++)
+    self->rows[s] = g_ptr_array_new ();
+  self->values = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
+  self->subtitles = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
+}
+
+GtkWidget *
+tf_result_list_new (void)
+{
+  return g_object_new (TF_TYPE_RESULT_LIST, NULL);
+}
