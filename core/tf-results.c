@@ -146,6 +146,18 @@ tf_analysis_compute (const TfAnalysis *analysis, GPtrArray *problems)
   return results;
 }
 
+/* The exponent in superscript digits: "10⁻³⁰⁰" reads as a number, "10^-300" as code. */
+static void
+append_superscript (GString *out, int exponent)
+{
+  static const char *const digits[] = { "⁰", "¹", "²", "³", "⁴", "⁵", "⁶", "⁷", "⁸", "⁹" };
+  char plain[16];
+
+  g_snprintf (plain, sizeof plain, "%d", exponent);
+  for (const char *p = plain; *p; p++)
+    g_string_append (out, *p == '-' ? "⁻" : digits[*p - '0']);
+}
+
 /* Probabilities and Bayes factors are shown with 4 significant digits; a probability
  * below 1e-4 (or a Bayes factor beyond 1e±4) in scientific notation so that small
  * values keep their digits rather than turning into 0.0000. Probabilities within 1e-4
@@ -163,7 +175,7 @@ tf_format_value (double value, TfMeasure measure)
     return g_strdup ("0");
   if (probability && value < 1.0 && value > 0.9999)
     {
-      g_autofree char *rest = g_strdup_printf ("%.3g", 1.0 - value);
+      g_autofree char *rest = tf_format_value (1.0 - value, measure);
       return g_strdup_printf ("1 − %s", rest);
     }
   if (magnitude < 1e-4 || magnitude >= 1e6)
@@ -178,8 +190,12 @@ tf_format_value (double value, TfMeasure measure)
           m /= 10.0;
           exponent++;
         }
+      GString *out = g_string_new (NULL);
+
       g_snprintf (mantissa, sizeof mantissa, "%.3f", m);
-      return g_strdup_printf ("%s × 10^%d", mantissa, exponent);
+      g_string_append_printf (out, "%s × 10", mantissa);
+      append_superscript (out, exponent);
+      return g_string_free (out, FALSE);
     }
   return g_strdup_printf ("%.4g", value);
 }

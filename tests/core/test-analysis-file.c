@@ -274,13 +274,15 @@ test_format_value (void)
 {
   struct { double v; TfMeasure m; const char *want; } cases[] = {
     { 0.02247, TF_MEASURE_TAIL_PROBABILITY, "0.02247" },
-    { 1e-300, TF_MEASURE_TAIL_PROBABILITY, "1.000 × 10^-300" },
-    { 1 - 1e-12, TF_MEASURE_POSTERIOR_PROBABILITY, "1 − 1e-12" },
+    { 1e-300, TF_MEASURE_TAIL_PROBABILITY, "1.000 × 10⁻³⁰⁰" },
+    { 1 - 1e-12, TF_MEASURE_POSTERIOR_PROBABILITY, "1 − 1.000 × 10⁻¹²" },
     { 7.98772, TF_MEASURE_BAYES_FACTOR, "7.988" },
     { 0.0, TF_MEASURE_TAIL_PROBABILITY, "0" },
     { NAN, TF_MEASURE_BAYES_FACTOR, "not defined" },
     { INFINITY, TF_MEASURE_BAYES_FACTOR, "not defined" },
-    { 9.99999e-5, TF_MEASURE_TAIL_PROBABILITY, "1.000 × 10^-4" },
+    { 9.99999e-5, TF_MEASURE_TAIL_PROBABILITY, "1.000 × 10⁻⁴" },
+    { 2.5e12, TF_MEASURE_BAYES_FACTOR, "2.500 × 10¹²" },
+    { -3.25e-7, TF_MEASURE_STATISTIC, "-3.250 × 10⁻⁷" },
   };
 
   for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
