@@ -14,6 +14,8 @@ double tf_binom_log_sf (double k, double n, double p, double q);
 /* Two-sided exact p-value by the minimum-likelihood rule: the probability of every
  * outcome no more likely than k, with relative tolerance 1e-7 (common practice). */
 double tf_binom_exact_two_sided (double k, double n, double p0);
+/* Its logarithm, finite where the p-value itself underflows. */
+double tf_binom_log_exact_two_sided (double k, double n, double p0);
 
 /* Clopper–Pearson interval (Clopper & Pearson 1934) at level, two-sided. */
 void tf_binom_clopper_pearson (double k, double n, double level, double *lo, double *hi);

@@ -13,11 +13,17 @@ G_BEGIN_DECLS
 double tf_incbeta_log_lower (double x, double y, double a, double b);
 double tf_incbeta_log_upper (double x, double y, double a, double b);
 
+/* Both of the above in one call. */
+void tf_incbeta_log_both (double x, double y, double a, double b, double *log_lower,
+                          double *log_upper);
+
 /* I_x(a, b) and its complement, plain. */
 double tf_incbeta_lower (double x, double y, double a, double b);
 double tf_incbeta_upper (double x, double y, double a, double b);
 
 /* The x with I_x(a, b) = p (lower TRUE) or 1 − I_x(a, b) = p (lower FALSE), p in (0, 1). */
 double tf_incbeta_inverse (double p, double a, double b, gboolean lower);
+/* The same given ln p, so that p below the smallest double still has an inverse. */
+double tf_incbeta_inverse_log (double log_p, double a, double b, gboolean lower);
 
 G_END_DECLS

@@ -14,6 +14,8 @@ double tf_stirling_remainder (double x);
 /* x ln(x / m) + m − x, the deviance term, x >= 0, m > 0, with no cancellation
  * when x is near m (Loader 2000, "bd0"). */
 double tf_bd0 (double x, double m);
+/* The same given d = x − m, computed by the caller without cancellation. */
+double tf_bd0_delta (double x, double m, double d);
 
 /* ln of the binomial probability of k successes in n trials, success probability p
  * (q = 1 − p given separately so that p near 1 stays exact) (Loader 2000). */
