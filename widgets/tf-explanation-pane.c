@@ -114,10 +114,21 @@ tf_explanation_pane_get_n_explanations (TfExplanationPane *self)
   return self->n_explanations;
 }
 
+/* The template's root is not bound to a field: unparent whatever is left. */
+static void
+clear_children (GtkWidget *widget)
+{
+  GtkWidget *child;
+
+  while ((child = gtk_widget_get_first_child (widget)))
+    gtk_widget_unparent (child);
+}
+
 static void
 tf_explanation_pane_dispose (GObject *object)
 {
   gtk_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_EXPLANATION_PANE);
+  clear_children (GTK_WIDGET (object));
   G_OBJECT_CLASS (tf_explanation_pane_parent_class)->dispose (object);
 }
 

@@ -236,10 +236,21 @@ tf_proportion_form_get_message (TfProportionForm *self, const char *group, const
   return gtk_label_get_text (self->messages[i]);
 }
 
+/* The template's root is not bound to a field: unparent whatever is left. */
+static void
+clear_children (GtkWidget *widget)
+{
+  GtkWidget *child;
+
+  while ((child = gtk_widget_get_first_child (widget)))
+    gtk_widget_unparent (child);
+}
+
 static void
 tf_proportion_form_dispose (GObject *object)
 {
   gtk_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_PROPORTION_FORM);
+  clear_children (GTK_WIDGET (object));
   G_OBJECT_CLASS (tf_proportion_form_parent_class)->dispose (object);
 }
 

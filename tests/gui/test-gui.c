@@ -1,0 +1,422 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * test-gui.c: the real Twofold window under Xvfb, driven as a user would: typing into the
+ * form's entries and reading back what the result list shows. And the densities figure
+ * drawn to an image surface, checked pixel by pixel.
+ *
+ * Expected values are not recalled numbers: each one is what tf_analysis_compute() and
+ * tf_number_format() give for the same analysis, so the test checks that the window
+ * shows the core's results, not that the core is right (that is the 'core' suite's job).
+ */
+#include <math.h>
+#include <glib/gstdio.h>
+#include <cairo-pdf.h>
+#include <gtk/gtk.h>
+#include <adwaita.h>
+#include "tf-window-private.h"
+#include "tf-analysis-file.h"
+#include "tf-results.h"
+#include "tf-curves.h"
+#include "tf-figure.h"
+#include "tf-figure-theme.h"
+#include "tf-axis.h"
+
+static void
+iterate (void)
+{
+  while (g_main_context_pending (NULL))
+    g_main_context_iteration (NULL, FALSE);
+}
+
+static void
+wait_until_mapped (GtkWidget *widget)
+{
+  gint64 deadline = g_get_monotonic_time () + 10 * G_USEC_PER_SEC;
+
+  while (!gtk_widget_get_mapped (widget) && g_get_monotonic_time () < deadline)
+    {
+      iterate ();
+      g_usleep (10000);
+    }
+  g_assert_true (gtk_widget_get_mapped (widget));
+  iterate ();
+}
+
+static void
+type_into (TfWindow *window, const char *group, const char *key, const char *text)
+{
+  GtkEditable *entry = tf_proportion_form_get_entry (tf_window_get_form (window), group, key);
+
+  g_assert_nonnull (entry);
+  gtk_editable_set_text (entry, text);
+  iterate ();
+}
+
+/* Every number of expected is in the list with the text the core formats for it. */
+static void
+assert_list_shows (TfResultList *list, const TfResults *expected)
+{
+  g_assert_true (tf_result_list_has_results (list));
+  for (guint i = 0; i < expected->numbers->len; i++)
+    {
+      const TfNumber *number = g_ptr_array_index (expected->numbers, i);
+      g_autofree char *want = tf_number_format (number);
+
+      g_assert_cmpstr (tf_result_list_get_value_text (list, number->id), ==, want);
+      if (number->status != TF_STATUS_OK)
+        g_assert_cmpstr (tf_result_list_get_subtitle (list, number->id), ==, number->reason);
+    }
+}
+
+static TfResults *
+compute_or_fail (const TfAnalysis *analysis)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  TfResults *results = tf_analysis_compute (analysis, problems);
+
+  g_assert_cmpuint (problems->len, ==, 0);
+  g_assert_nonnull (results);
+  return results;
+}
+
+static void
+test_window_edits (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  TfResultList *list = tf_window_get_result_list (window);
+  TfProportionForm *form = tf_window_get_form (window);
+  g_autoptr (TfAnalysis) expected = NULL;
+  g_autoptr (TfResults) expected_results = NULL;
+  g_autoptr (TfResults) demo_results = NULL;
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  const TfProblem *problem;
+  GtkEditable *successes;
+
+  tf_window_open_demo (window);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+
+  /* The demo, data/demo/seed-germination.twofold, bundled in the GResource. */
+  g_assert_cmpfloat (tf_window_get_analysis (window)->trials, ==, 12000);
+  g_assert_cmpfloat (tf_window_get_analysis (window)->successes, ==, 9700);
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
+  demo_results = compute_or_fail (tf_window_get_analysis (window));
+  assert_list_shows (list, demo_results);
+  g_assert_nonnull (tf_result_list_get_value_text (list, "p_value"));
+  g_assert_nonnull (tf_result_list_get_value_text (list, "posterior_null"));
+  g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
+  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), >, 0);
+
+  /* Type a new analysis in, field by field. */
+  type_into (window, "Data", "Trials", "100");
+  type_into (window, "Data", "Successes", "62");
+  type_into (window, "Null", "Value", "0.5");
+  type_into (window, "Alternative", "PriorA", "2");
+  type_into (window, "Alternative", "PriorB", "3");
+  type_into (window, "Models", "PriorNull", "0.25");
+
+  expected = tf_analysis_copy (tf_window_get_analysis (window));
+  expected->trials = 100;
+  expected->successes = 62;
+  expected->null_value = 0.5;
+  expected->prior_a = 2;
+  expected->prior_b = 3;
+  expected->prior_null = 0.25;
+  g_assert_cmpfloat (tf_window_get_analysis (window)->successes, ==, 62);
+  g_assert_cmpfloat (tf_window_get_analysis (window)->prior_null, ==, 0.25);
+  expected_results = compute_or_fail (expected);
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
+  assert_list_shows (list, expected_results);
+  {
+    const TfNumber *p = tf_results_lookup (expected_results, "p_value");
+    const TfNumber *post = tf_results_lookup (expected_results, "posterior_null");
+    g_autofree char *p_text = tf_number_format (p);
+    g_autofree char *post_text = tf_number_format (post);
+
+    g_assert_cmpstr (tf_result_list_get_value_text (list, "p_value"), ==, p_text);
+    g_assert_cmpstr (tf_result_list_get_value_text (list, "posterior_null"), ==, post_text);
+    /* and the numbers moved from the demo's */
+    g_assert_true (fabs (p->value - tf_results_lookup (demo_results, "p_value")->value) > 1e-9);
+  }
+
+  /* More successes than trials: the field says so, and nothing stale is shown. */
+  type_into (window, "Data", "Successes", "120");
+  successes = tf_proportion_form_get_entry (form, "Data", "Successes");
+  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (successes), "error"));
+  expected->successes = 120;
+  g_assert_false (tf_analysis_validate (expected, problems));
+  problem = tf_problem_list_find (problems, "Data", "Successes");
+  if (problem == NULL)
+    problem = tf_problem_list_find (problems, "Data", "Trials");
+  g_assert_nonnull (problem);
+  g_assert_cmpstr (tf_proportion_form_get_message (form, problem->group, problem->key), ==,
+                   problem->message);
+  g_assert_false (tf_result_list_has_results (list));
+  g_assert_null (tf_result_list_get_value_text (list, "p_value"));
+  g_assert_null (tf_result_list_get_value_text (list, "posterior_null"));
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "invalid");
+  g_assert_null (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
+  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), ==, 0);
+
+  /* A text that is not a number is a problem of its own field, named after it. */
+  type_into (window, "Data", "Successes", "62");
+  type_into (window, "Data", "Trials", "1OO");
+  {
+    const char *message = tf_proportion_form_get_message (form, "Data", "Trials");
+    g_assert_nonnull (message);
+    g_assert_nonnull (strstr (message, "Trials"));
+    g_assert_nonnull (strstr (message, "1OO"));
+    g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (tf_proportion_form_get_entry (form, "Data", "Trials")),
+                                             "error"));
+    g_assert_false (tf_result_list_has_results (list));
+  }
+
+  /* Put it right: the marks go and the results come back. */
+  type_into (window, "Data", "Trials", "100");
+  g_assert_false (gtk_widget_has_css_class (GTK_WIDGET (successes), "error"));
+  g_assert_null (tf_proportion_form_get_message (form, "Data", "Successes"));
+  g_assert_null (tf_proportion_form_get_message (form, "Data", "Trials"));
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
+  assert_list_shows (list, expected_results);
+  g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
+  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), >, 0);
+
+  gtk_window_destroy (GTK_WINDOW (window));
+  iterate ();
+}
+
+/* A file saved from the window opens again with the same fields. */
+static void
+test_window_save_and_open (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  g_autofree char *dir = g_dir_make_tmp ("twofold-gui-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "saved.twofold", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+  g_autoptr (TfAnalysis) analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  TfWindow *second;
+
+  analysis->successes = 7;
+  analysis->trials = 20;
+  tf_analysis_set_title (analysis, "Seven of twenty");
+  g_assert_true (tf_analysis_save (analysis, path, &error));
+  g_assert_no_error (error);
+
+  g_assert_true (tf_window_open_file (window, file));
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  g_assert_cmpstr (gtk_window_get_title (GTK_WINDOW (window)), ==, "Seven of twenty");
+  g_assert_cmpstr (gtk_editable_get_text (tf_proportion_form_get_entry (tf_window_get_form (window),
+                                                                        "Data", "Successes")), ==, "7");
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
+
+  type_into (window, "Data", "Successes", "8");
+  g_assert_true (gtk_widget_activate_action (GTK_WIDGET (window), "win.save", NULL));
+  iterate ();
+
+  second = tf_window_new (NULL);
+  g_assert_true (tf_window_open_file (second, file));
+  g_assert_cmpfloat (tf_window_get_analysis (second)->successes, ==, 8);
+  g_assert_cmpfloat (tf_window_get_analysis (second)->trials, ==, 20);
+
+  gtk_window_destroy (GTK_WINDOW (second));
+  gtk_window_destroy (GTK_WINDOW (window));
+  iterate ();
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+/* Figure */
+
+static void
+pixel_at (cairo_surface_t *surface, int x, int y, double rgb[3])
+{
+  const unsigned char *data = cairo_image_surface_get_data (surface);
+  int stride = cairo_image_surface_get_stride (surface);
+  guint32 pixel = *(const guint32 *) (data + y * stride + 4 * x);
+
+  /* CAIRO_FORMAT_RGB24: native-endian xRGB */
+  rgb[0] = ((pixel >> 16) & 0xff) / 255.0;
+  rgb[1] = ((pixel >> 8) & 0xff) / 255.0;
+  rgb[2] = (pixel & 0xff) / 255.0;
+}
+
+static double
+colour_distance (const double rgb[3], const TfColour *colour)
+{
+  return MAX (MAX (fabs (rgb[0] - colour->r), fabs (rgb[1] - colour->g)), fabs (rgb[2] - colour->b));
+}
+
+static TfAnalysis *
+figure_analysis (void)
+{
+  TfAnalysis *analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+
+  analysis->successes = 30;
+  analysis->trials = 100;
+  analysis->null_value = 0.5;
+  analysis->prior_a = 1;
+  analysis->prior_b = 1;
+  return analysis;
+}
+
+static void
+check_figure_pixels (TfFigureStyle style)
+{
+  const int width = 600, height = 400;
+  const double scale = 2.0;     /* 144 pixels per inch */
+  g_autoptr (TfAnalysis) analysis = figure_analysis ();
+  g_autoptr (TfDensityCurves) curves = tf_density_curves_new (analysis, 401, NULL);
+  cairo_surface_t *surface = cairo_image_surface_create (CAIRO_FORMAT_RGB24, width, height);
+  cairo_t *cr = cairo_create (surface);
+  TfFigureTheme theme;
+  TfPlotArea area;
+  double rgb[3], best = 1;
+  guint peak = 0;
+  int px, py;
+
+  tf_figure_theme_init (&theme, style, scale);
+  g_assert_nonnull (curves);
+  g_assert_true (tf_figure_draw_densities_full (cr, width, height, scale, analysis, style, &area));
+  cairo_destroy (cr);
+  cairo_surface_flush (surface);
+  if (g_getenv ("TF_GUI_TEST_PNG"))
+    cairo_surface_write_to_png (surface, g_getenv ("TF_GUI_TEST_PNG"));
+
+  /* The background at a corner. */
+  pixel_at (surface, 1, 1, rgb);
+  g_assert_cmpfloat (colour_distance (rgb, &theme.background), <, 0.01);
+  pixel_at (surface, width - 2, height - 2, rgb);
+  g_assert_cmpfloat (colour_distance (rgb, &theme.background), <, 0.01);
+
+  /* The plot area sits inside the figure. */
+  g_assert_cmpfloat (area.x, >, 0);
+  g_assert_cmpfloat (area.y, >, 0);
+  g_assert_cmpfloat (area.x + area.width, <, width);
+  g_assert_cmpfloat (area.y + area.height, <, height);
+
+  /* The posterior's colour within a few pixels of its peak. */
+  for (guint i = 0; i < curves->n; i++)
+    if (curves->posterior[i] > curves->posterior[peak])
+      peak = i;
+  g_assert_false (curves->posterior_narrow);
+  px = (int) round (tf_plot_area_map_x (&area, curves->x[peak]));
+  py = (int) round (tf_plot_area_map_y (&area, curves->posterior[peak]));
+  g_assert_cmpint (px, >=, 0);
+  g_assert_cmpint (px, <, width);
+  g_assert_cmpint (py, >=, 0);
+  g_assert_cmpint (py, <, height);
+  for (int dy = -4; dy <= 4; dy++)
+    for (int dx = -4; dx <= 4; dx++)
+      {
+        int x = CLAMP (px + dx, 0, width - 1), y = CLAMP (py + dy, 0, height - 1);
+        pixel_at (surface, x, y, rgb);
+        best = MIN (best, colour_distance (rgb, &theme.series[TF_SERIES_POSTERIOR]));
+      }
+  g_assert_cmpfloat (best, <, 0.12);
+
+  cairo_surface_destroy (surface);
+}
+
+static void
+test_figure_pixels_light (void)
+{
+  check_figure_pixels (TF_FIGURE_STYLE_LIGHT);
+}
+
+static void
+test_figure_pixels_dark (void)
+{
+  check_figure_pixels (TF_FIGURE_STYLE_DARK);
+}
+
+static cairo_status_t
+count_bytes (void *closure, const unsigned char *data, unsigned int length)
+{
+  *(gsize *) closure += length;
+  return CAIRO_STATUS_SUCCESS;
+}
+
+/* The same drawing on a PDF surface, in points. */
+static void
+test_figure_pdf (void)
+{
+  g_autoptr (TfAnalysis) analysis = figure_analysis ();
+  gsize written = 0;
+  cairo_surface_t *surface = cairo_pdf_surface_create_for_stream (count_bytes, &written, 340, 220);
+  cairo_t *cr = cairo_create (surface);
+
+  g_assert_true (tf_figure_draw_densities (cr, 340, 220, 1.0, analysis, TF_FIGURE_STYLE_LIGHT));
+  g_assert_cmpint (cairo_status (cr), ==, CAIRO_STATUS_SUCCESS);
+  cairo_destroy (cr);
+  cairo_surface_finish (surface);
+  g_assert_cmpint (cairo_surface_status (surface), ==, CAIRO_STATUS_SUCCESS);
+  cairo_surface_destroy (surface);
+  g_assert_cmpuint (written, >, 1000);
+}
+
+/* An invalid analysis draws a message on the background and says FALSE. */
+static void
+test_figure_invalid (void)
+{
+  g_autoptr (TfAnalysis) analysis = figure_analysis ();
+  cairo_surface_t *surface = cairo_image_surface_create (CAIRO_FORMAT_RGB24, 300, 200);
+  cairo_t *cr = cairo_create (surface);
+  TfFigureTheme theme;
+  double rgb[3];
+
+  analysis->successes = 130;    /* more than the 100 trials */
+  tf_figure_theme_init (&theme, TF_FIGURE_STYLE_LIGHT, 1.0);
+  g_assert_false (tf_figure_draw_densities (cr, 300, 200, 1.0, analysis, TF_FIGURE_STYLE_LIGHT));
+  cairo_destroy (cr);
+  cairo_surface_flush (surface);
+  pixel_at (surface, 1, 1, rgb);
+  g_assert_cmpfloat (colour_distance (rgb, &theme.background), <, 0.01);
+  cairo_surface_destroy (surface);
+}
+
+/* Heckbert (1990), "Nice numbers for graph labels": 1, 2, 5 times a power of ten. The
+ * expected values follow from the rule as stated there (common practice). */
+static void
+test_nice_numbers (void)
+{
+  TfTicks ticks;
+
+  g_assert_cmpfloat_with_epsilon (tf_nice_number (0.23, TRUE), 0.2, 1e-12);
+  g_assert_cmpfloat_with_epsilon (tf_nice_number (0.23, FALSE), 0.5, 1e-12);
+  g_assert_cmpfloat_with_epsilon (tf_nice_number (7.5, TRUE), 10, 1e-12);
+  g_assert_cmpfloat_with_epsilon (tf_nice_number (1.4, TRUE), 1, 1e-12);
+  g_assert_cmpfloat_with_epsilon (tf_nice_number (3e-5, TRUE), 5e-5, 1e-17);
+
+  /* range nice(10.3) = 20, step nice(20 / 4, round) = 5, extended to 15 */
+  tf_ticks_compute (&ticks, 0, 10.3, 5, TRUE);
+  g_assert_cmpfloat_with_epsilon (ticks.step, 5, 1e-12);
+  g_assert_cmpfloat_with_epsilon (ticks.hi, 15, 1e-12);
+  g_assert_cmpuint (ticks.n, ==, 4);
+
+  tf_ticks_compute (&ticks, 0.213, 0.397, 5, FALSE);
+  g_assert_cmpfloat_with_epsilon (ticks.step, 0.05, 1e-12);
+  g_assert_cmpfloat_with_epsilon (tf_ticks_value (&ticks, 0), 0.25, 1e-12);
+  g_assert_cmpuint (ticks.n, ==, 3);
+  {
+    g_autofree char *label = tf_ticks_label (&ticks, 0);
+    g_assert_cmpstr (label, ==, "0.25");
+  }
+}
+
+int
+main (int argc, char *argv[])
+{
+  g_test_init (&argc, &argv, NULL);
+  adw_init ();
+  g_object_set (gtk_settings_get_default (), "gtk-enable-animations", FALSE, NULL);
+
+  g_test_add_func ("/gui/window/edits", test_window_edits);
+  g_test_add_func ("/gui/window/save-and-open", test_window_save_and_open);
+  g_test_add_func ("/gui/figure/pixels-light", test_figure_pixels_light);
+  g_test_add_func ("/gui/figure/pixels-dark", test_figure_pixels_dark);
+  g_test_add_func ("/gui/figure/pdf", test_figure_pdf);
+  g_test_add_func ("/gui/figure/invalid", test_figure_invalid);
+  g_test_add_func ("/gui/figure/nice-numbers", test_nice_numbers);
+  return g_test_run ();
+}
