@@ -67,8 +67,9 @@ tf_ticks_compute (TfTicks *ticks, double lo, double hi, guint target, gboolean l
       lo = floor (lo / step + 1e-9) * step;
       hi = ceil (hi / step - 1e-9) * step;
     }
-  first = ceil (lo / step - 1e-9) * step;
-  last = floor (hi / step + 1e-9) * step;
+  /* A tick a hair outside the range (0 when the grid starts at 0.005) still counts. */
+  first = ceil (lo / step - 1e-9 - 0.01 * (hi - lo) / step) * step;
+  last = floor (hi / step + 1e-9 + 0.01 * (hi - lo) / step) * step;
 
   ticks->lo = lo;
   ticks->hi = hi;

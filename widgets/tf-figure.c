@@ -116,6 +116,12 @@ compute_layout (cairo_t *cr, const TfFigureTheme *theme, double width, double he
   tf_ticks_compute (&out->x_ticks, x_lo, x_hi,
                     tf_ticks_target (theme, plot_w, X_TICK_SPACING_PT), FALSE);
 
+  /* an end tick a hair outside the data widens the axis to it */
+  if (out->x_ticks.n > 0)
+    {
+      x_lo = MIN (x_lo, tf_ticks_value (&out->x_ticks, 0));
+      x_hi = MAX (x_hi, tf_ticks_value (&out->x_ticks, out->x_ticks.n - 1));
+    }
   out->area = (TfPlotArea) {
     .x = left, .y = top, .width = plot_w, .height = plot_h,
     .x_lo = x_lo, .x_hi = x_hi,
@@ -202,25 +208,6 @@ draw_marker (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area, Tf
   cairo_restore (cr);
 }
 
-/* Text with its left edge at x, or its right edge when it would run off the area. */
-static void
-draw_text_beside (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
-                  const char *markup, double size, double x, double y, const TfColour *colour)
-{
-  g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, size, markup);
-  double gap = tf_figure_theme_pt (theme, 3.0);
-  double w, h;
-
-  tf_figure_layout_size (layout, &w, &h);
-  if (x + gap + w > area->x + area->width + tf_figure_theme_pt (theme, PAD_PT))
-    x = x - gap - w;
-  else
-    x = x + gap;
-  tf_figure_theme_set_source (cr, colour);
-  cairo_move_to (cr, x, y);
-  pango_cairo_show_layout (cr, layout);
-}
-
 gboolean
 tf_figure_draw_densities (cairo_t *cr, double width, double height, double scale,
                           const TfAnalysis *analysis, TfFigureStyle style)
@@ -301,7 +288,15 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
   null_h = text_height (cr, &theme, theme.text_size, null_label);
   top_extra = null_h + tf_figure_theme_pt (&theme, 2.0);
 
-  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, _("Posterior under H<sub>1</sub>") };
+  if (spike_posterior)
+    {
+      g_autofree char *mode = g_strdup_printf ("%.4g", curves->x[posterior_at]);
+      /* TRANSLATORS: legend of a posterior drawn as a spike; %s is its mode, e.g. 0.8094 */
+      note = g_strdup_printf (_("Posterior under H<sub>1</sub>, too narrow\nto draw: a spike at its mode, %s"), mode);
+      entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, note };
+    }
+  else
+    entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, _("Posterior under H<sub>1</sub>") };
   entries[n_entries++] = (TfLegendEntry) { TF_SERIES_PRIOR, _("Prior under H<sub>1</sub>") };
   entries[n_entries++] = (TfLegendEntry) { TF_SERIES_LIKELIHOOD, _("Likelihood, scaled") };
 
@@ -384,21 +379,22 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
   path_polyline (cr, &prior);
   cairo_stroke (cr);
 
-  if (spike_likelihood)
-    draw_spike (cr, &theme, area, TF_SERIES_LIKELIHOOD, curves->x[likelihood_at]);
-  else
-    {
-      tf_figure_theme_set_series_line (cr, &theme, TF_SERIES_LIKELIHOOD);
-      path_polyline (cr, &likelihood);
-      cairo_stroke (cr);
-    }
-
   if (spike_posterior)
     draw_spike (cr, &theme, area, TF_SERIES_POSTERIOR, curves->x[posterior_at]);
   else
     {
       tf_figure_theme_set_series_line (cr, &theme, TF_SERIES_POSTERIOR);
       path_polyline (cr, &posterior);
+      cairo_stroke (cr);
+    }
+
+  /* the likelihood's dashes on top: with a flat prior it lies on the posterior */
+  if (spike_likelihood)
+    draw_spike (cr, &theme, area, TF_SERIES_LIKELIHOOD, curves->x[likelihood_at]);
+  else
+    {
+      tf_figure_theme_set_series_line (cr, &theme, TF_SERIES_LIKELIHOOD);
+      path_polyline (cr, &likelihood);
       cairo_stroke (cr);
     }
   cairo_restore (cr);
@@ -437,17 +433,6 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
 
   tf_axis_draw_bottom (cr, &theme, area, &layout.x_ticks, x_label);
   tf_axis_draw_left (cr, &theme, area, &layout.y_ticks, y_label);
-
-  if (spike_posterior)
-    {
-      g_autofree char *mode = g_strdup_printf ("%.4g", curves->x[posterior_at]);
-      double x = tf_plot_area_map_x (area, curves->x[posterior_at]);
-
-      /* TRANSLATORS: beside a posterior drawn as a spike; %s is its mode, e.g. 0.5117 */
-      note = g_strdup_printf (_("posterior too narrow to draw:\nspike at its mode, %s"), mode);
-      draw_text_beside (cr, &theme, area, note, theme.text_size, x,
-                        area->y + tf_figure_theme_pt (&theme, 2.0), &theme.muted);
-    }
 
   tf_legend_draw (cr, &theme, entries, n_entries, !legend_inside, legend_x, legend_y);
 

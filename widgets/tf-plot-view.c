@@ -7,8 +7,10 @@
 #include "tf-plot-view.h"
 #include "tf-figure.h"
 
-/* Screen pixels (logical, 1/96 in) per point (1/72 in). GTK scales to the device. */
-#define PIXELS_PER_POINT (96.0 / 72.0)
+/* Logical screen pixels per point. Paper is 72 points an inch and a screen 96 pixels, but
+ * a screen is read from further away: 1.5 gives the figure's 8-9 pt text the size of the
+ * interface's own. GTK scales the drawing to the device's pixels. */
+#define PIXELS_PER_POINT 1.5
 
 struct _TfPlotView
 {

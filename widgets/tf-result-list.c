@@ -11,7 +11,8 @@ struct _TfResultList
   GtkWidget parent_instance;
 
   GtkStack *stack;
-  AdwStatusPage *placeholder;
+  GtkLabel *placeholder_title;
+  GtkLabel *placeholder_description;
   AdwPreferencesGroup *groups[3];
 
   GPtrArray *rows[3];           /* AdwActionRow*, per section, not owned */
@@ -117,8 +118,9 @@ tf_result_list_clear (TfResultList *self, const char *title, const char *descrip
   g_return_if_fail (TF_IS_RESULT_LIST (self));
 
   remove_rows (self);
-  adw_status_page_set_title (self->placeholder, title ? title : _("No Results"));
-  adw_status_page_set_description (self->placeholder, description);
+  gtk_label_set_text (self->placeholder_title, title ? title : _("No Results"));
+  gtk_label_set_text (self->placeholder_description, description ? description : "");
+  gtk_widget_set_visible (GTK_WIDGET (self->placeholder_description), description && *description);
   gtk_stack_set_visible_child_name (self->stack, "placeholder");
 }
 
@@ -190,7 +192,8 @@ tf_result_list_class_init (TfResultListClass *klass)
   gtk_widget_class_set_template_from_resource (widget_class,
                                                "/org/twofold/Twofold/ui/tf-result-list.ui");
   gtk_widget_class_bind_template_child (widget_class, TfResultList, stack);
-  gtk_widget_class_bind_template_child (widget_class, TfResultList, placeholder);
+  gtk_widget_class_bind_template_child (widget_class, TfResultList, placeholder_title);
+  gtk_widget_class_bind_template_child (widget_class, TfResultList, placeholder_description);
   gtk_widget_class_bind_template_child_full (widget_class, "classical_group", FALSE,
                                              G_STRUCT_OFFSET (TfResultList, groups[TF_RESULT_SECTION_CLASSICAL]));
   gtk_widget_class_bind_template_child_full (widget_class, "bayesian_group", FALSE,
