@@ -238,7 +238,7 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
   TfLegendEntry entries[3];
   guint n_entries = 0;
   double legend_w, legend_h, legend_x = 0, legend_y = 0;
-  gboolean legend_inside;
+  guint legend_columns;
 
   tf_figure_theme_init (&theme, style, scale);
   cairo_save (cr);
@@ -264,6 +264,23 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
   likelihood_max = array_max (curves->likelihood, curves->n, &likelihood_at);
   spike_posterior = curves->posterior_narrow;
   spike_likelihood = spike_posterior && likelihood_max > 4 * MAX (prior_max, 1e-300);
+  /* A prior that runs off to infinity at an end (Beta with a or b below 1) would flatten
+   * everything else: the axis then follows the prior's inside and the ends go off the top. */
+  {
+    guint prior_at, edge = MAX (curves->n / 33, 1);
+    double inside = 0, others = 0;
+
+    array_max (curves->prior, curves->n, &prior_at);
+    for (guint i = edge; i + edge < curves->n; i++)
+      inside = MAX (inside, curves->prior[i]);
+    if (!spike_posterior)
+      others = MAX (others, posterior_max);
+    if (!spike_likelihood)
+      others = MAX (others, likelihood_max);
+    if ((prior_at < edge || prior_at + edge >= curves->n)
+        && prior_max > 1.5 * MAX (inside, others))
+      prior_max = MAX (inside, 1e-300);
+  }
   y_max = prior_max;
   if (!spike_posterior)
     y_max = MAX (y_max, posterior_max);
@@ -300,10 +317,13 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
   entries[n_entries++] = (TfLegendEntry) { TF_SERIES_PRIOR, _("Prior under H<sub>1</sub>") };
   entries[n_entries++] = (TfLegendEntry) { TF_SERIES_LIKELIHOOD, _("Likelihood, scaled") };
 
-  /* Lay out with the legend inside; if it would hide data, put it in a row above. */
+  /* Lay out with the legend inside; if it would hide data, put it above the plot area in
+   * as few rows as fit the width. */
+  legend_columns = 1;
   for (int attempt = 0; attempt < 2; attempt++)
     {
-      gboolean horizontal = attempt == 1;
+      gboolean above = attempt == 1;
+      double pad = tf_figure_theme_pt (&theme, PAD_PT);
       TfPolyline lines[4];
       guint n_lines = 0;
 
@@ -311,9 +331,16 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
       points_clear (&posterior);
       points_clear (&likelihood);
       points_clear (&null_line);
-      tf_legend_measure (cr, &theme, entries, n_entries, horizontal, &legend_w, &legend_h);
+      if (above)
+        for (legend_columns = n_entries; legend_columns > 1; legend_columns--)
+          {
+            tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
+            if (legend_w <= width - 2 * pad)
+              break;
+          }
+      tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
       compute_layout (cr, &theme, width, height,
-                      top_extra + (horizontal ? legend_h + tf_figure_theme_pt (&theme, 2.0) : 0),
+                      top_extra + (above ? legend_h + tf_figure_theme_pt (&theme, 2.0) : 0),
                       x_label, y_label, curves->lo, curves->hi, y_max, &layout);
       area = &layout.area;
 
@@ -333,19 +360,18 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
       lines[n_lines++] = (TfPolyline) { likelihood.x, likelihood.y, likelihood.n };
       lines[n_lines++] = (TfPolyline) { null_line.x, null_line.y, null_line.n };
 
-      if (!horizontal)
+      if (!above)
         {
-          legend_inside = tf_legend_place (area, legend_w, legend_h,
-                                           tf_figure_theme_pt (&theme, 4.0),
-                                           lines, n_lines, &legend_x, &legend_y);
-          if (legend_inside)
+          if (tf_legend_place (area, legend_w, legend_h, tf_figure_theme_pt (&theme, 4.0),
+                               lines, n_lines, &legend_x, &legend_y))
             break;
         }
       else
         {
-          legend_inside = FALSE;
-          legend_x = area->x + area->width - legend_w;
-          legend_y = tf_figure_theme_pt (&theme, PAD_PT);
+          /* centred over the plot area, inside the figure */
+          legend_x = area->x + (area->width - legend_w) / 2;
+          legend_x = MAX (MIN (legend_x, width - pad - legend_w), pad);
+          legend_y = pad;
         }
     }
   area = &layout.area;
@@ -434,7 +460,7 @@ tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double 
   tf_axis_draw_bottom (cr, &theme, area, &layout.x_ticks, x_label);
   tf_axis_draw_left (cr, &theme, area, &layout.y_ticks, y_label);
 
-  tf_legend_draw (cr, &theme, entries, n_entries, !legend_inside, legend_x, legend_y);
+  tf_legend_draw (cr, &theme, entries, n_entries, legend_columns, legend_x, legend_y);
 
   if (area_out)
     *area_out = *area;

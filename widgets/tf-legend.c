@@ -9,32 +9,43 @@
 #define ROW_GAP_PT 1.5
 #define COLUMN_GAP_PT 10.0
 
-void
-tf_legend_measure (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
-                   guint n_entries, gboolean horizontal, double *width, double *height)
+#define MAX_ENTRIES 16
+
+/* Column widths and row heights of the grid, user units. */
+static void
+legend_grid (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
+             guint n_entries, guint columns, double *column_w, double *row_h)
 {
   double swatch = tf_figure_theme_pt (theme, SWATCH_PT + 4.0);
-  double pad = tf_figure_theme_pt (theme, PAD_PT);
-  double w = 0, h = 0;
 
-  for (guint i = 0; i < n_entries; i++)
+  for (guint i = 0; i < n_entries && i < MAX_ENTRIES; i++)
     {
       g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size,
                                                                entries[i].markup);
       double lw, lh;
 
       tf_figure_layout_size (layout, &lw, &lh);
-      if (horizontal)
-        {
-          w += swatch + lw + (i > 0 ? tf_figure_theme_pt (theme, COLUMN_GAP_PT) : 0);
-          h = MAX (h, lh);
-        }
-      else
-        {
-          w = MAX (w, swatch + lw);
-          h += lh + (i > 0 ? tf_figure_theme_pt (theme, ROW_GAP_PT) : 0);
-        }
+      column_w[i % columns] = MAX (column_w[i % columns], swatch + lw);
+      row_h[i / columns] = MAX (row_h[i / columns], lh);
     }
+}
+
+void
+tf_legend_measure (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
+                   guint n_entries, guint columns, double *width, double *height)
+{
+  double column_w[MAX_ENTRIES] = { 0 }, row_h[MAX_ENTRIES] = { 0 };
+  double pad = tf_figure_theme_pt (theme, PAD_PT);
+  double w = 0, h = 0;
+  guint rows;
+
+  columns = CLAMP (columns, 1, MAX (MIN (n_entries, MAX_ENTRIES), 1));
+  rows = (MIN (n_entries, MAX_ENTRIES) + columns - 1) / columns;
+  legend_grid (cr, theme, entries, n_entries, columns, column_w, row_h);
+  for (guint c = 0; c < columns; c++)
+    w += column_w[c] + (c > 0 ? tf_figure_theme_pt (theme, COLUMN_GAP_PT) : 0);
+  for (guint r = 0; r < rows; r++)
+    h += row_h[r] + (r > 0 ? tf_figure_theme_pt (theme, ROW_GAP_PT) : 0);
   *width = w + 2 * pad;
   *height = h + 2 * pad;
 }
@@ -120,41 +131,52 @@ tf_legend_place (const TfPlotArea *area, double width, double height, double ins
 
 void
 tf_legend_draw (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
-                guint n_entries, gboolean horizontal, double x, double y)
+                guint n_entries, guint columns, double x, double y)
 {
+  double column_w[MAX_ENTRIES] = { 0 }, row_h[MAX_ENTRIES] = { 0 };
   double pad = tf_figure_theme_pt (theme, PAD_PT);
   double swatch = tf_figure_theme_pt (theme, SWATCH_PT);
-  double cx = x + pad, cy = y + pad;
-  double w, h;
+  double w, h, cy = y + pad;
 
-  tf_legend_measure (cr, theme, entries, n_entries, horizontal, &w, &h);
+  columns = CLAMP (columns, 1, MAX (MIN (n_entries, MAX_ENTRIES), 1));
+  legend_grid (cr, theme, entries, n_entries, columns, column_w, row_h);
+  tf_legend_measure (cr, theme, entries, n_entries, columns, &w, &h);
   cairo_save (cr);
   /* a quiet ground so the text stays legible should a line pass behind */
   tf_figure_theme_set_source_alpha (cr, &theme->background, 0.85);
   cairo_rectangle (cr, x, y, w, h);
   cairo_fill (cr);
 
-  for (guint i = 0; i < n_entries; i++)
+  for (guint i = 0; i < n_entries && i < MAX_ENTRIES; i++)
     {
       g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size,
                                                                entries[i].markup);
-      double lw, lh, mid;
+      guint column = i % columns;
+      double cx = x + pad, lh, line_y;
 
-      tf_figure_layout_size (layout, &lw, &lh);
-      mid = cy + lh / 2;
+      for (guint c = 0; c < column; c++)
+        cx += column_w[c] + tf_figure_theme_pt (theme, COLUMN_GAP_PT);
+      if (column == 0 && i > 0)
+        cy += row_h[i / columns - 1] + tf_figure_theme_pt (theme, ROW_GAP_PT);
+
+      /* the sample sits level with the first line of text */
+      {
+        PangoLayoutIter *iter = pango_layout_get_iter (layout);
+        PangoRectangle line;
+
+        pango_layout_iter_get_line_extents (iter, NULL, &line);
+        lh = (double) line.height / PANGO_SCALE;
+        pango_layout_iter_free (iter);
+      }
+      line_y = cy + lh / 2;
       tf_figure_theme_set_series_line (cr, theme, entries[i].series);
-      cairo_move_to (cr, cx, mid);
-      cairo_line_to (cr, cx + swatch, mid);
+      cairo_move_to (cr, cx, line_y);
+      cairo_line_to (cr, cx + swatch, line_y);
       cairo_stroke (cr);
 
       tf_figure_theme_set_source (cr, &theme->foreground);
       cairo_move_to (cr, cx + swatch + tf_figure_theme_pt (theme, 4.0), cy);
       pango_cairo_show_layout (cr, layout);
-
-      if (horizontal)
-        cx += swatch + tf_figure_theme_pt (theme, 4.0) + lw + tf_figure_theme_pt (theme, COLUMN_GAP_PT);
-      else
-        cy += lh + tf_figure_theme_pt (theme, ROW_GAP_PT);
     }
   cairo_restore (cr);
 }

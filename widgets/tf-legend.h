@@ -20,9 +20,10 @@ typedef struct {
   guint n;
 } TfPolyline;
 
-/* Size of the legend box, user units. horizontal lays the entries out in one row. */
+/* Size of the legend box, user units. The entries are laid out row by row in columns
+ * columns: 1 stacks them, n_entries puts them in one row. */
 void tf_legend_measure (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
-                        guint n_entries, gboolean horizontal, double *width, double *height);
+                        guint n_entries, guint columns, double *width, double *height);
 
 /* Finds a place for a width × height box inside area, inset from its edges, that no
  * polyline crosses: the top corners first, then along the top, then lower down.
@@ -31,6 +32,6 @@ gboolean tf_legend_place (const TfPlotArea *area, double width, double height, d
                           const TfPolyline *lines, guint n_lines, double *x, double *y);
 
 void tf_legend_draw (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
-                     guint n_entries, gboolean horizontal, double x, double y);
+                     guint n_entries, guint columns, double x, double y);
 
 G_END_DECLS
