@@ -22,12 +22,16 @@ about_activated (GSimpleAction *action, GVariant *parameter, gpointer user_data)
   GtkWindow *parent = gtk_application_get_active_window (app);
   static const char *developers[] = { "The Twofold developers", NULL };
   GtkWidget *about;
+  GtkIconTheme *icons = gtk_icon_theme_get_for_display (gdk_display_get_default ());
+  /* uninstalled, the icon theme does not know Twofold's icon: show none rather than a
+   * broken image */
+  const char *icon = gtk_icon_theme_has_icon (icons, TF_APP_ID) ? TF_APP_ID : "";
 
   about = g_object_new (ADW_TYPE_ABOUT_WINDOW,
                         "transient-for", parent,
                         "modal", TRUE,
                         "application-name", _("Twofold"),
-                        "application-icon", TF_APP_ID,
+                        "application-icon", icon,
                         "version", TF_VERSION,
                         "developer-name", _("The Twofold developers"),
                         "developers", developers,
