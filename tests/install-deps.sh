@@ -8,7 +8,7 @@ packages="
   meson ninja-build pkg-config gcc gettext
   libglib2.0-dev libglib2.0-dev-bin libgtk-4-dev libadwaita-1-dev libgsl-dev
   libcairo2-dev libpango1.0-dev
-  desktop-file-utils appstream
+  desktop-file-utils appstream libxml2-utils
   xvfb xauth dbus-x11 fonts-dejavu-core
   python3 python3-scipy python3-mpmath python3-numpy
   poppler-utils imagemagick
