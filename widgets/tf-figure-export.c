@@ -178,8 +178,11 @@ tf_figure_export (const TfAnalysis *analysis, const char *kind, const char *file
       w = width_mm * POINTS_PER_MM;
       h = height_mm * POINTS_PER_MM;
       scale = 1.0;
+      /* The page is given in points (width="240.944882pt" for 85 mm): exact, and the
+       * figure is drawn in the same units as PDF. (A page in mm under a cairo_scale()
+       * shrinks Pango's subscripts.) */
       surface = cairo_svg_surface_create_for_stream (append_bytes, bytes, w, h);
-      cairo_svg_surface_set_document_unit (surface, CAIRO_SVG_UNIT_MM);
+      cairo_svg_surface_set_document_unit (surface, CAIRO_SVG_UNIT_PT);
       break;
     case TF_FIGURE_FORMAT_PDF:
     default:

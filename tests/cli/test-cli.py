@@ -187,8 +187,10 @@ with tempfile.TemporaryDirectory() as tmp:
     code, out, err = run("figure", demo, "--kind", "densities", "--output", svg, "--width-mm", "85")
     check("svg exit 0", code == 0, err)
     root = ET.parse(svg).getroot()
-    check("svg width in mm", root.get("width") in ("85mm", "85.0mm") or root.get("width", "").startswith("85"),
-          root.get("width"))
+    # 85 mm = 85 / 25.4 * 72 pt = 240.944882 pt; cairo writes 6 decimals
+    wattr, hattr = root.get("width"), root.get("height")
+    check("svg width 85 mm", wattr.endswith("pt") and abs(float(wattr[:-2]) - 85 / 25.4 * 72) < 1e-5, wattr)
+    check("svg height 80 mm", hattr.endswith("pt") and abs(float(hattr[:-2]) - 80 / 25.4 * 72) < 1e-5, hattr)
 
     pdf = os.path.join(tmp, "d.pdf")
     code, out, err = run("figure", demo, "--kind", "densities", "--output", pdf,
