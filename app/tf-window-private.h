@@ -19,5 +19,12 @@ TfExplanationPane *tf_window_get_explanation_pane (TfWindow *self);
 const TfAnalysis *tf_window_get_analysis (TfWindow *self);
 /* "analysis" when results are shown, "invalid" when the form needs fixing. */
 const char *tf_window_get_visible_page (TfWindow *self);
+/* Whether the analysis was edited since it was last loaded or saved. */
+gboolean tf_window_get_modified (TfWindow *self);
+/* The subtitle under the title in the header bar. */
+const char *tf_window_get_subtitle (TfWindow *self);
+/* The "Save changes?" dialog while it is shown, else NULL. Its responses are "cancel",
+ * "discard" and "save": adw_message_dialog_response() answers it as a click would. */
+AdwMessageDialog *tf_window_get_save_changes_dialog (TfWindow *self);
 
 G_END_DECLS

@@ -1,7 +1,9 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-window.c: one analysis in a window. Every edit of the form recomputes at once; an
  * analysis that cannot be computed clears the figure, the numbers and the explanations
- * and says what to fix, so nothing stale is ever shown.
+ * and says what to fix, so nothing stale is ever shown. An edit after the last load or
+ * save marks the analysis modified; closing the window or opening another analysis over
+ * it first asks whether to save it, so nothing is lost.
  */
 #include <glib/gi18n.h>
 #include "tf-window.h"
@@ -11,6 +13,13 @@
 
 #define DEMO_RESOURCE "/org/twofold/Twofold/demo/seed-germination.twofold"
 #define FILE_SUFFIX ".twofold"
+
+/* What waits for the answer to "Save changes?" */
+typedef enum {
+  TF_PENDING_NONE,
+  TF_PENDING_CLOSE,
+  TF_PENDING_OPEN
+} TfPendingAction;
 
 struct _TfWindow
 {
@@ -35,18 +44,42 @@ struct _TfWindow
   gboolean is_demo;
   GSettings *settings;          /* NULL when the schema is not installed */
   GtkFileChooserNative *chooser;
+
+  gboolean modified;            /* edited since the last load or save */
+  TfPendingAction pending;      /* what to do once the analysis is saved or discarded */
+  AdwMessageDialog *save_changes_dialog;  /* NULL unless shown; not owned */
+  gboolean close_confirmed;     /* the next close-request closes, unasked */
 };
 
 G_DEFINE_FINAL_TYPE (TfWindow, tf_window, ADW_TYPE_APPLICATION_WINDOW)
 
+static void show_open_chooser (TfWindow *self);
+
+static gboolean
+has_title (TfWindow *self)
+{
+  return self->analysis && self->analysis->title && *self->analysis->title;
+}
+
+/* What the analysis is called: its title, else its file name, else "Untitled Analysis". */
+static char *
+document_name (TfWindow *self)
+{
+  if (has_title (self))
+    return g_strdup (self->analysis->title);
+  if (self->file)
+    return g_file_get_basename (self->file);
+  return g_strdup (_("Untitled Analysis"));
+}
+
 static void
 update_title (TfWindow *self)
 {
-  const char *title = self->analysis && self->analysis->title && *self->analysis->title
-                        ? self->analysis->title : _("Untitled Analysis");
+  const char *title = has_title (self) ? self->analysis->title : _("Untitled Analysis");
   const char *design = tf_design_label (self->analysis ? self->analysis->design
                                                        : TF_DESIGN_ONE_PROPORTION);
   g_autofree char *subtitle = NULL;
+  g_autofree char *shown_title = NULL;
 
   if (self->file)
     {
@@ -60,9 +93,34 @@ update_title (TfWindow *self)
   else
     subtitle = g_strdup (design);
 
-  adw_window_title_set_title (self->window_title, title);
+  if (self->modified)
+    {
+      char *with_state;
+
+      /* TRANSLATORS: window title of an analysis with unsaved changes; the mark is
+       * not the only sign of it: the subtitle says "unsaved changes" */
+      shown_title = g_strdup_printf (_("• %s"), title);
+      /* TRANSLATORS: window subtitle (design and file), then the words that say the
+       * analysis was edited since it was last saved */
+      with_state = g_strdup_printf (_("%s — unsaved changes"), subtitle);
+      g_free (subtitle);
+      subtitle = with_state;
+    }
+  else
+    shown_title = g_strdup (title);
+
+  adw_window_title_set_title (self->window_title, shown_title);
   adw_window_title_set_subtitle (self->window_title, subtitle);
-  gtk_window_set_title (GTK_WINDOW (self), title);
+  gtk_window_set_title (GTK_WINDOW (self), shown_title);
+}
+
+static void
+set_modified (TfWindow *self, gboolean modified)
+{
+  if (self->modified == modified)
+    return;
+  self->modified = modified;
+  update_title (self);
 }
 
 static char *
@@ -122,6 +180,7 @@ static void
 on_form_changed (TfProportionForm *form, TfWindow *self)
 {
   recompute (self);
+  set_modified (self, TRUE);
 }
 
 void
@@ -134,6 +193,7 @@ tf_window_set_analysis (TfWindow *self, const TfAnalysis *analysis, GFile *file)
   self->analysis = tf_analysis_copy (analysis);
   g_set_object (&self->file, file);
   self->is_demo = FALSE;
+  self->modified = FALSE;
   tf_proportion_form_set_analysis (self->form, self->analysis);
   recompute (self);
   update_title (self);
@@ -272,9 +332,8 @@ on_open_response (GtkNativeDialog *dialog, int response, TfWindow *self)
 }
 
 static void
-open_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
+show_open_chooser (TfWindow *self)
 {
-  TfWindow *self = TF_WINDOW (widget);
   g_autoptr (GtkFileFilter) filter = twofold_filter_new ();
 
   if (self->chooser)
@@ -287,6 +346,21 @@ open_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
   chooser_set_folder (self, GTK_FILE_CHOOSER (self->chooser));
   g_signal_connect (self->chooser, "response", G_CALLBACK (on_open_response), self);
   gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
+}
+
+static void ask_save_changes (TfWindow *self, TfPendingAction then);
+
+static void
+open_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
+{
+  TfWindow *self = TF_WINDOW (widget);
+
+  if (self->chooser)
+    return;
+  if (self->modified)
+    ask_save_changes (self, TF_PENDING_OPEN);
+  else
+    show_open_chooser (self);
 }
 
 static gboolean
@@ -312,6 +386,7 @@ save_to (TfWindow *self, GFile *file)
     }
   g_set_object (&self->file, file);
   self->is_demo = FALSE;
+  self->modified = FALSE;
   update_title (self);
   {
     g_autofree char *message = g_strdup_printf (_("Saved “%s”"), basename);
@@ -327,9 +402,35 @@ save_to (TfWindow *self, GFile *file)
   return TRUE;
 }
 
+/* After the analysis was saved (saved TRUE) or not, go on with what waited for it. */
+static void
+continue_pending (TfWindow *self, gboolean saved)
+{
+  TfPendingAction pending = self->pending;
+
+  self->pending = TF_PENDING_NONE;
+  if (!saved)
+    return;
+  switch (pending)
+    {
+    case TF_PENDING_CLOSE:
+      self->close_confirmed = TRUE;
+      gtk_window_close (GTK_WINDOW (self));
+      break;
+    case TF_PENDING_OPEN:
+      show_open_chooser (self);
+      break;
+    case TF_PENDING_NONE:
+    default:
+      break;
+    }
+}
+
 static void
 on_save_response (GtkNativeDialog *dialog, int response, TfWindow *self)
 {
+  gboolean saved = FALSE;
+
   if (response == GTK_RESPONSE_ACCEPT)
     {
       g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
@@ -343,9 +444,10 @@ on_save_response (GtkNativeDialog *dialog, int response, TfWindow *self)
           g_set_object (&file, renamed);
         }
       if (file)
-        save_to (self, file);
+        saved = save_to (self, file);
     }
   g_clear_object (&self->chooser);
+  continue_pending (self, saved);
 }
 
 static char *
@@ -366,7 +468,10 @@ save_as_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
   g_autofree char *name = suggested_name (self);
 
   if (self->chooser)
-    return;
+    {
+      self->pending = TF_PENDING_NONE;
+      return;
+    }
   self->chooser = gtk_file_chooser_native_new (_("Save Analysis"), GTK_WINDOW (self),
                                                GTK_FILE_CHOOSER_ACTION_SAVE,
                                                _("_Save"), _("_Cancel"));
@@ -389,12 +494,91 @@ save_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
     save_to (self, self->file);
 }
 
+/* Unsaved changes */
+
+static void
+on_save_changes_response (AdwMessageDialog *dialog, const char *response, TfWindow *self)
+{
+  TfPendingAction pending = self->pending;
+
+  /* clicking a response closes the dialog already; a response emitted any other way
+   * (adw_message_dialog_response) does not */
+  self->save_changes_dialog = NULL;
+  g_signal_handlers_disconnect_by_func (dialog, on_save_changes_response, self);
+  /* the dialog outlives this handler (the emission holds it) and may outlive the
+   * window, which closes below: a transient parent is not kept alive, so drop it now */
+  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
+  gtk_window_destroy (GTK_WINDOW (dialog));
+
+  if (g_strcmp0 (response, "discard") == 0)
+    continue_pending (self, TRUE);
+  else if (g_strcmp0 (response, "save") == 0)
+    {
+      if (self->file && !self->is_demo)
+        continue_pending (self, save_to (self, self->file));
+      else
+        {
+          /* continue_pending runs when the file chooser answers */
+          self->pending = pending;
+          save_as_action (GTK_WIDGET (self), "win.save-as", NULL);
+        }
+    }
+  else
+    continue_pending (self, FALSE);
+}
+
+/* Asks whether to save the modified analysis, then does then unless cancelled. */
+static void
+ask_save_changes (TfWindow *self, TfPendingAction then)
+{
+  g_autofree char *name = document_name (self);
+  g_autofree char *heading = NULL;
+  GtkWidget *dialog;
+
+  if (self->save_changes_dialog)
+    {
+      self->pending = then;
+      gtk_window_present (GTK_WINDOW (self->save_changes_dialog));
+      return;
+    }
+
+  /* TRANSLATORS: heading of the dialog shown before closing or replacing an analysis
+   * that has unsaved changes; %s is its title or file name */
+  heading = g_strdup_printf (_("Save changes to “%s”?"), name);
+  dialog = adw_message_dialog_new (GTK_WINDOW (self), heading,
+                                   _("The analysis was changed since it was last saved. If you discard the changes, they are lost."));
+  adw_message_dialog_add_responses (ADW_MESSAGE_DIALOG (dialog),
+                                    "cancel", _("_Cancel"),
+                                    "discard", _("_Discard"),
+                                    "save", _("_Save"),
+                                    NULL);
+  adw_message_dialog_set_response_appearance (ADW_MESSAGE_DIALOG (dialog), "discard",
+                                              ADW_RESPONSE_DESTRUCTIVE);
+  adw_message_dialog_set_response_appearance (ADW_MESSAGE_DIALOG (dialog), "save",
+                                              ADW_RESPONSE_SUGGESTED);
+  adw_message_dialog_set_default_response (ADW_MESSAGE_DIALOG (dialog), "cancel");
+  adw_message_dialog_set_close_response (ADW_MESSAGE_DIALOG (dialog), "cancel");
+  g_signal_connect (dialog, "response", G_CALLBACK (on_save_changes_response), self);
+
+  self->pending = then;
+  self->save_changes_dialog = ADW_MESSAGE_DIALOG (dialog);
+  gtk_window_present (GTK_WINDOW (dialog));
+}
+
 /* Window state */
 
 static gboolean
 tf_window_close_request (GtkWindow *window)
 {
   TfWindow *self = TF_WINDOW (window);
+
+  if (self->modified && !self->close_confirmed)
+    {
+      /* also while a file chooser is open: the question comes first */
+      ask_save_changes (self, TF_PENDING_CLOSE);
+      return TRUE;
+    }
+  self->close_confirmed = FALSE;
 
   if (self->settings)
     {
@@ -465,6 +649,27 @@ tf_window_get_visible_page (TfWindow *self)
   return gtk_stack_get_visible_child_name (self->center_stack);
 }
 
+gboolean
+tf_window_get_modified (TfWindow *self)
+{
+  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
+  return self->modified;
+}
+
+const char *
+tf_window_get_subtitle (TfWindow *self)
+{
+  g_return_val_if_fail (TF_IS_WINDOW (self), NULL);
+  return adw_window_title_get_subtitle (self->window_title);
+}
+
+AdwMessageDialog *
+tf_window_get_save_changes_dialog (TfWindow *self)
+{
+  g_return_val_if_fail (TF_IS_WINDOW (self), NULL);
+  return self->save_changes_dialog;
+}
+
 /* GObject */
 
 static void
@@ -472,6 +677,13 @@ tf_window_dispose (GObject *object)
 {
   TfWindow *self = TF_WINDOW (object);
 
+  if (self->save_changes_dialog)
+    {
+      AdwMessageDialog *dialog = g_steal_pointer (&self->save_changes_dialog);
+
+      g_signal_handlers_disconnect_by_func (dialog, on_save_changes_response, self);
+      gtk_window_destroy (GTK_WINDOW (dialog));
+    }
   if (self->chooser)
     {
       gtk_native_dialog_destroy (GTK_NATIVE_DIALOG (self->chooser));

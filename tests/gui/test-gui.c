@@ -226,6 +226,239 @@ test_window_save_and_open (void)
   g_rmdir (dir);
 }
 
+
+static void
+on_destroyed (GtkWidget *widget, gboolean *destroyed)
+{
+  *destroyed = TRUE;
+}
+
+/* Watches a window: *destroyed turns TRUE when it is destroyed. */
+static void
+watch_destroy (TfWindow *window, gboolean *destroyed)
+{
+  *destroyed = FALSE;
+  g_signal_connect (window, "destroy", G_CALLBACK (on_destroyed), destroyed);
+}
+
+static void
+assert_not_modified (TfWindow *window, const char *title)
+{
+  g_assert_false (tf_window_get_modified (window));
+  g_assert_cmpstr (gtk_window_get_title (GTK_WINDOW (window)), ==, title);
+  g_assert_null (strstr (tf_window_get_subtitle (window), "unsaved changes"));
+}
+
+static void
+assert_modified (TfWindow *window, const char *title)
+{
+  g_autofree char *marked = g_strdup_printf ("• %s", title);
+
+  g_assert_true (tf_window_get_modified (window));
+  g_assert_cmpstr (gtk_window_get_title (GTK_WINDOW (window)), ==, marked);
+  /* in words too, not by the mark alone */
+  g_assert_nonnull (strstr (tf_window_get_subtitle (window), "unsaved changes"));
+}
+
+/* The "Save changes?" dialog is up, asking about name. */
+static AdwMessageDialog *
+assert_asks_to_save (TfWindow *window, const char *name)
+{
+  AdwMessageDialog *dialog = tf_window_get_save_changes_dialog (window);
+  g_autofree char *heading = g_strdup_printf ("Save changes to “%s”?", name);
+
+  iterate ();
+  g_assert_nonnull (dialog);
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (dialog)));
+  g_assert_cmpstr (adw_message_dialog_get_heading (dialog), ==, heading);
+  g_assert_true (adw_message_dialog_has_response (dialog, "cancel"));
+  g_assert_true (adw_message_dialog_has_response (dialog, "discard"));
+  g_assert_true (adw_message_dialog_has_response (dialog, "save"));
+  g_assert_cmpstr (adw_message_dialog_get_default_response (dialog), ==, "cancel");
+  g_assert_cmpstr (adw_message_dialog_get_close_response (dialog), ==, "cancel");
+  g_assert_cmpint (adw_message_dialog_get_response_appearance (dialog, "save"), ==,
+                   ADW_RESPONSE_SUGGESTED);
+  g_assert_cmpint (adw_message_dialog_get_response_appearance (dialog, "discard"), ==,
+                   ADW_RESPONSE_DESTRUCTIVE);
+  return dialog;
+}
+
+/* Closes the error dialog over window whose heading starts so; fails when there is none. */
+static void
+destroy_error_dialog (TfWindow *window, const char *heading)
+{
+  GListModel *toplevels = gtk_window_get_toplevels ();  /* not owned */
+  GtkWindow *found = NULL;
+
+  for (guint i = 0; i < g_list_model_get_n_items (toplevels) && !found; i++)
+    {
+      g_autoptr (GtkWindow) toplevel = g_list_model_get_item (toplevels, i);
+
+      if (ADW_IS_MESSAGE_DIALOG (toplevel)
+          && gtk_window_get_transient_for (toplevel) == GTK_WINDOW (window)
+          && g_str_has_prefix (adw_message_dialog_get_heading (ADW_MESSAGE_DIALOG (toplevel)), heading))
+        found = toplevel;
+    }
+  g_assert_nonnull (found);
+  gtk_window_destroy (found);
+  iterate ();
+}
+
+/* Answers the "Save changes?" dialog as a click would; the window may close. */
+static void
+respond (TfWindow *window, const char *response, const gboolean *destroyed)
+{
+  adw_message_dialog_response (tf_window_get_save_changes_dialog (window), response);
+  iterate ();
+  if (!*destroyed)
+    g_assert_null (tf_window_get_save_changes_dialog (window));
+}
+
+/* An edit marks the analysis modified, saving clears it; closing a modified window
+ * asks first: Cancel keeps it open, Save saves and closes. */
+static void
+test_window_modified (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  g_autofree char *dir = g_dir_make_tmp ("twofold-gui-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "modified.twofold", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+  g_autoptr (TfAnalysis) analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  gboolean destroyed;
+  TfWindow *second;
+
+  analysis->successes = 7;
+  analysis->trials = 20;
+  tf_analysis_set_title (analysis, "Seven of twenty");
+  g_assert_true (tf_analysis_save (analysis, path, &error));
+  g_assert_no_error (error);
+
+  g_assert_true (tf_window_open_file (window, file));
+  watch_destroy (window, &destroyed);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  assert_not_modified (window, "Seven of twenty");
+
+  /* An unmodified window would close unasked; an edit marks it. */
+  type_into (window, "Data", "Successes", "8");
+  assert_modified (window, "Seven of twenty");
+
+  /* Saving clears the mark. */
+  g_assert_true (gtk_widget_activate_action (GTK_WIDGET (window), "win.save", NULL));
+  iterate ();
+  assert_not_modified (window, "Seven of twenty");
+
+  /* Save in the dialog goes on only when saving worked: with a field to fix it says why
+   * and the window stays open. */
+  type_into (window, "Data", "Successes", "30");
+  assert_modified (window, "Seven of twenty");
+  gtk_window_close (GTK_WINDOW (window));
+  assert_asks_to_save (window, "Seven of twenty");
+  respond (window, "save", &destroyed);
+  g_assert_false (destroyed);
+  assert_modified (window, "Seven of twenty");
+  destroy_error_dialog (window, "Could Not Save “");
+  type_into (window, "Data", "Successes", "9");
+  assert_modified (window, "Seven of twenty");
+
+  /* Closing asks; Cancel keeps the window and the changes. */
+  gtk_window_close (GTK_WINDOW (window));
+  assert_asks_to_save (window, "Seven of twenty");
+  g_assert_false (destroyed);
+  respond (window, "cancel", &destroyed);
+  g_assert_false (destroyed);
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (window)));
+  assert_modified (window, "Seven of twenty");
+  g_assert_cmpfloat (tf_window_get_analysis (window)->successes, ==, 9);
+
+  /* Open… over it asks too; Cancel leaves the analysis as it was. */
+  g_assert_true (gtk_widget_activate_action (GTK_WIDGET (window), "win.open", NULL));
+  assert_asks_to_save (window, "Seven of twenty");
+  respond (window, "cancel", &destroyed);
+  g_assert_false (destroyed);
+  assert_modified (window, "Seven of twenty");
+
+  /* Closing again, Save: the file gets the edit and the window closes. */
+  gtk_window_close (GTK_WINDOW (window));
+  assert_asks_to_save (window, "Seven of twenty");
+  respond (window, "save", &destroyed);
+  g_assert_true (destroyed);
+
+  second = tf_window_new (NULL);
+  g_assert_true (tf_window_open_file (second, file));
+  g_assert_cmpfloat (tf_window_get_analysis (second)->successes, ==, 9);
+  assert_not_modified (second, "Seven of twenty");
+  gtk_window_destroy (GTK_WINDOW (second));
+  iterate ();
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+/* Discard closes a modified window without saving; an unmodified one closes unasked;
+ * an analysis without a title is named by its file. */
+static void
+test_window_close_discard (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  const char *demo_title = "Seed lot 7: germination against the certified 80 %";
+  g_autofree char *dir = g_dir_make_tmp ("twofold-gui-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "untitled.twofold", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+  g_autoptr (TfAnalysis) analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  g_autofree char *before = NULL, *after = NULL;
+  gboolean destroyed;
+
+  tf_window_open_demo (window);
+  watch_destroy (window, &destroyed);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  assert_not_modified (window, demo_title);
+
+  type_into (window, "Data", "Trials", "12001");
+  assert_modified (window, demo_title);
+  gtk_window_close (GTK_WINDOW (window));
+  assert_asks_to_save (window, demo_title);
+  g_assert_false (destroyed);
+  respond (window, "discard", &destroyed);
+  g_assert_true (destroyed);
+
+  /* Not modified: no question. */
+  window = tf_window_new (NULL);
+  tf_window_open_demo (window);
+  watch_destroy (window, &destroyed);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  gtk_window_close (GTK_WINDOW (window));
+  iterate ();
+  g_assert_true (destroyed);
+
+  /* No title: the dialog names the file; Discard leaves the file as it was. */
+  analysis->successes = 3;
+  analysis->trials = 10;
+  g_assert_true (tf_analysis_save (analysis, path, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (path, &before, NULL, NULL));
+  window = tf_window_new (NULL);
+  g_assert_true (tf_window_open_file (window, file));
+  watch_destroy (window, &destroyed);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  assert_not_modified (window, "Untitled Analysis");
+  type_into (window, "Data", "Successes", "4");
+  assert_modified (window, "Untitled Analysis");
+  gtk_window_close (GTK_WINDOW (window));
+  assert_asks_to_save (window, "untitled.twofold");
+  respond (window, "discard", &destroyed);
+  g_assert_true (destroyed);
+  g_assert_true (g_file_get_contents (path, &after, NULL, NULL));
+  g_assert_cmpstr (after, ==, before);
+
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
 /* Figure */
 
 static void
@@ -413,6 +646,8 @@ main (int argc, char *argv[])
 
   g_test_add_func ("/gui/window/edits", test_window_edits);
   g_test_add_func ("/gui/window/save-and-open", test_window_save_and_open);
+  g_test_add_func ("/gui/window/modified", test_window_modified);
+  g_test_add_func ("/gui/window/close-discard", test_window_close_discard);
   g_test_add_func ("/gui/figure/pixels-light", test_figure_pixels_light);
   g_test_add_func ("/gui/figure/pixels-dark", test_figure_pixels_dark);
   g_test_add_func ("/gui/figure/pdf", test_figure_pdf);
