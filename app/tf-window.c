@@ -157,7 +157,7 @@ recompute (TfWindow *self)
 
   if (self->results)
     {
-      tf_result_list_set_results (self->result_list, self->results);
+      tf_result_list_set_results (self->result_list, self->analysis, self->results);
       tf_plot_view_set_analysis (self->plot_view, self->analysis);
       tf_explanation_pane_set_results (self->explanation_pane, self->analysis, self->results);
       gtk_stack_set_visible_child_name (self->center_stack, "analysis");

@@ -1,7 +1,10 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-result-list.c: one row per number: its label, and its value or "not defined" with
- * the reason both visible and as a tooltip.
+ * the reason both visible and as a tooltip. An interval (ci_low and ci_high, cri_low and
+ * cri_high) is one row, "95% confidence interval (Clopper–Pearson)" with "0.8012 – 0.8153",
+ * whose accessible description names each limit with its number.
  */
+#include <math.h>
 #include <glib/gi18n-lib.h>
 #include <adwaita.h>
 #include "tf-result-list.h"
@@ -16,8 +19,22 @@ struct _TfResultList
   AdwPreferencesGroup *groups[3];
 
   GPtrArray *rows[3];           /* AdwActionRow*, per section, not owned */
-  GHashTable *values;           /* id -> GtkLabel*, not owned */
+  GHashTable *values;           /* id -> GtkLabel*, not owned; both limits share one */
+  GHashTable *titles;           /* id -> AdwPreferencesRow*, not owned */
   GHashTable *subtitles;        /* id -> char* */
+  GHashTable *descriptions;     /* id -> char*, the accessible description, if set */
+};
+
+/* The two limits of an interval that the list shows as one row. */
+typedef struct {
+  const char *low_id;
+  const char *high_id;
+  gboolean credible;
+} TfIntervalIds;
+
+static const TfIntervalIds intervals[] = {
+  { "ci_low", "ci_high", FALSE },
+  { "cri_low", "cri_high", TRUE },
 };
 
 G_DEFINE_FINAL_TYPE (TfResultList, tf_result_list, GTK_TYPE_WIDGET)
@@ -57,24 +74,41 @@ remove_rows (TfResultList *self)
       g_ptr_array_set_size (self->rows[s], 0);
     }
   g_hash_table_remove_all (self->values);
+  g_hash_table_remove_all (self->titles);
   g_hash_table_remove_all (self->subtitles);
+  g_hash_table_remove_all (self->descriptions);
 }
 
 static GtkWidget *
-row_new (TfResultList *self, const TfNumber *number)
+value_label_new (const char *text)
 {
-  GtkWidget *row = adw_action_row_new ();
-  g_autofree char *text = tf_number_format (number);
   GtkWidget *value = gtk_label_new (text);
 
-  adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), number->label);
-  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
-  gtk_widget_add_css_class (row, "tf-number");
   gtk_widget_add_css_class (value, "numeric");
   gtk_label_set_selectable (GTK_LABEL (value), TRUE);
   gtk_label_set_xalign (GTK_LABEL (value), 1.0);
   gtk_widget_set_valign (value, GTK_ALIGN_CENTER);
   gtk_widget_set_focusable (value, FALSE);
+  return value;
+}
+
+static GtkWidget *
+number_row_new (const char *title)
+{
+  GtkWidget *row = adw_action_row_new ();
+
+  adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), title);
+  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
+  gtk_widget_add_css_class (row, "tf-number");
+  return row;
+}
+
+static GtkWidget *
+row_new (TfResultList *self, const TfNumber *number)
+{
+  GtkWidget *row = number_row_new (number->label);
+  g_autofree char *text = tf_number_format (number);
+  GtkWidget *value = value_label_new (text);
 
   if (number->status != TF_STATUS_OK)
     {
@@ -88,13 +122,142 @@ row_new (TfResultList *self, const TfNumber *number)
     }
   adw_action_row_add_suffix (ADW_ACTION_ROW (row), value);
   g_hash_table_insert (self->values, g_strdup (number->id), value);
+  g_hash_table_insert (self->titles, g_strdup (number->id), row);
   return row;
 }
 
+/* The published name of an interval's method, or NULL when the list does not know it
+ * for this design (the title then names the interval and its level only). */
+static const char *
+interval_method (TfDesign design, gboolean credible)
+{
+  if (credible)
+    /* DESIGN.md: cri_low, cri_high are equal-tailed for every design */
+    return _("equal-tailed");
+  switch (design)
+    {
+    case TF_DESIGN_ONE_PROPORTION:
+      return _("Clopper–Pearson");
+    default:
+      return NULL;
+    }
+}
+
+/* "95% confidence interval (Clopper–Pearson)" */
+static char *
+interval_title (double level, TfDesign design, gboolean credible)
+{
+  /* up to 8 decimals of the percentage, no trailing zeros: 95, 99.9, 99.99999 */
+  double percent = round (level * 100.0 * 1e8) / 1e8;
+  g_autofree char *level_text = g_strdup_printf ("%.10g", percent);
+  const char *method = interval_method (design, credible);
+
+  if (credible)
+    return method
+      /* TRANSLATORS: result row: %s is the level in percent, then the interval's kind */
+      ? g_strdup_printf (_("%s%% credible interval (%s)"), level_text, method)
+      /* TRANSLATORS: result row: %s is the level in percent */
+      : g_strdup_printf (_("%s%% credible interval"), level_text);
+  return method
+    /* TRANSLATORS: result row: %s is the level in percent, then the method's published name */
+    ? g_strdup_printf (_("%s%% confidence interval (%s)"), level_text, method)
+    /* TRANSLATORS: result row: %s is the level in percent */
+    : g_strdup_printf (_("%s%% confidence interval"), level_text);
+}
+
+static const char *
+reason_of (const TfNumber *number)
+{
+  return number->reason ? number->reason : _("not defined for this input");
+}
+
+/* One row for both limits: "0.8012 – 0.8153"; a limit that is not defined shows
+ * "not defined" and the row's subtitle says why. */
+static GtkWidget *
+interval_row_new (TfResultList *self, const TfNumber *low, const TfNumber *high,
+                  double level, TfDesign design, gboolean credible)
+{
+  g_autofree char *title = interval_title (level, design, credible);
+  g_autofree char *low_text = tf_number_format (low);
+  g_autofree char *high_text = tf_number_format (high);
+  gboolean low_ok = low->status == TF_STATUS_OK, high_ok = high->status == TF_STATUS_OK;
+  g_autofree char *text = NULL;
+  g_autofree char *description = NULL;
+  g_autofree char *reason = NULL;
+  GtkWidget *row = number_row_new (title);
+  GtkWidget *value;
+
+  if (!low_ok && !high_ok)
+    text = g_strdup (low_text);       /* "not defined", once */
+  else
+    /* TRANSLATORS: an interval: lower limit, en dash, upper limit */
+    text = g_strdup_printf (_("%s – %s"), low_text, high_text);
+  value = value_label_new (text);
+
+  /* TRANSLATORS: accessible description of an interval row: both limits, each named */
+  description = g_strdup_printf (_("Lower limit %s, upper limit %s"), low_text, high_text);
+
+  if (!low_ok && !high_ok)
+    {
+      if (g_strcmp0 (reason_of (low), reason_of (high)) == 0)
+        /* TRANSLATORS: both limits of an interval are not defined; %s says why */
+        reason = g_strdup_printf (_("Neither limit is defined: %s"), reason_of (low));
+      else
+        /* TRANSLATORS: both limits of an interval are not defined, each for its reason */
+        reason = g_strdup_printf (_("Lower limit not defined: %s\nUpper limit not defined: %s"),
+                                  reason_of (low), reason_of (high));
+    }
+  else if (!low_ok)
+    /* TRANSLATORS: the lower limit of an interval is not defined; %s says why */
+    reason = g_strdup_printf (_("Lower limit not defined: %s"), reason_of (low));
+  else if (!high_ok)
+    /* TRANSLATORS: the upper limit of an interval is not defined; %s says why */
+    reason = g_strdup_printf (_("Upper limit not defined: %s"), reason_of (high));
+
+  if (reason)
+    {
+      g_autofree char *full = g_strdup_printf ("%s. %s", description, reason);
+
+      adw_action_row_set_subtitle (ADW_ACTION_ROW (row), reason);
+      gtk_widget_set_tooltip_text (value, reason);
+      gtk_widget_set_tooltip_text (row, reason);
+      if (!low_ok && !high_ok)
+        gtk_widget_add_css_class (value, "dim-label");
+      g_hash_table_insert (self->subtitles, g_strdup (low->id), g_strdup (reason));
+      g_hash_table_insert (self->subtitles, g_strdup (high->id), g_strdup (reason));
+      g_free (description);
+      description = g_steal_pointer (&full);
+    }
+  gtk_accessible_update_property (GTK_ACCESSIBLE (row),
+                                  GTK_ACCESSIBLE_PROPERTY_DESCRIPTION, description, -1);
+  adw_action_row_add_suffix (ADW_ACTION_ROW (row), value);
+  g_hash_table_insert (self->values, g_strdup (low->id), value);
+  g_hash_table_insert (self->values, g_strdup (high->id), value);
+  g_hash_table_insert (self->titles, g_strdup (low->id), row);
+  g_hash_table_insert (self->titles, g_strdup (high->id), row);
+  g_hash_table_insert (self->descriptions, g_strdup (low->id), g_strdup (description));
+  g_hash_table_insert (self->descriptions, g_strdup (high->id), g_strdup (description));
+  return row;
+}
+
+/* The interval that id is a limit of, when results hold both its limits. */
+static const TfIntervalIds *
+interval_of (const TfResults *results, const char *id)
+{
+  for (guint i = 0; i < G_N_ELEMENTS (intervals); i++)
+    if ((g_strcmp0 (id, intervals[i].low_id) == 0 || g_strcmp0 (id, intervals[i].high_id) == 0)
+        && tf_results_lookup (results, intervals[i].low_id)
+        && tf_results_lookup (results, intervals[i].high_id))
+      return &intervals[i];
+  return NULL;
+}
+
 void
-tf_result_list_set_results (TfResultList *self, const TfResults *results)
+tf_result_list_set_results (TfResultList *self, const TfAnalysis *analysis,
+                            const TfResults *results)
 {
   g_return_if_fail (TF_IS_RESULT_LIST (self));
+  g_return_if_fail (analysis != NULL);
   g_return_if_fail (results != NULL);
 
   remove_rows (self);
@@ -102,7 +265,20 @@ tf_result_list_set_results (TfResultList *self, const TfResults *results)
     {
       const TfNumber *number = g_ptr_array_index (results->numbers, i);
       TfResultSection section = tf_result_section_for_number (number);
-      GtkWidget *row = row_new (self, number);
+      const TfIntervalIds *interval = interval_of (results, number->id);
+      GtkWidget *row;
+
+      if (interval)
+        {
+          /* the row goes where the first of its limits is */
+          if (g_hash_table_contains (self->values, number->id))
+            continue;
+          row = interval_row_new (self, tf_results_lookup (results, interval->low_id),
+                                  tf_results_lookup (results, interval->high_id),
+                                  analysis->level, results->design, interval->credible);
+        }
+      else
+        row = row_new (self, number);
 
       adw_preferences_group_add (self->groups[section], row);
       g_ptr_array_add (self->rows[section], row);
@@ -148,6 +324,23 @@ tf_result_list_get_subtitle (TfResultList *self, const char *id)
   return g_hash_table_lookup (self->subtitles, id);
 }
 
+const char *
+tf_result_list_get_title (TfResultList *self, const char *id)
+{
+  AdwPreferencesRow *row;
+
+  g_return_val_if_fail (TF_IS_RESULT_LIST (self), NULL);
+  row = g_hash_table_lookup (self->titles, id);
+  return row ? adw_preferences_row_get_title (row) : NULL;
+}
+
+const char *
+tf_result_list_get_description (TfResultList *self, const char *id)
+{
+  g_return_val_if_fail (TF_IS_RESULT_LIST (self), NULL);
+  return g_hash_table_lookup (self->descriptions, id);
+}
+
 /* The template's root is not bound to a field: unparent whatever is left. */
 static void
 clear_children (GtkWidget *widget)
@@ -176,7 +369,9 @@ tf_result_list_finalize (GObject *object)
   for (guint s = 0; s < G_N_ELEMENTS (self->rows); s++)
     g_clear_pointer (&self->rows[s], g_ptr_array_unref);
   g_clear_pointer (&self->values, g_hash_table_unref);
+  g_clear_pointer (&self->titles, g_hash_table_unref);
   g_clear_pointer (&self->subtitles, g_hash_table_unref);
+  g_clear_pointer (&self->descriptions, g_hash_table_unref);
   G_OBJECT_CLASS (tf_result_list_parent_class)->finalize (object);
 }
 
@@ -211,7 +406,9 @@ tf_result_list_init (TfResultList *self)
   for (guint s = 0; s < G_N_ELEMENTS (self->rows); s++)
     self->rows[s] = g_ptr_array_new ();
   self->values = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
+  self->titles = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
   self->subtitles = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
+  self->descriptions = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_free);
 }
 
 GtkWidget *

@@ -51,7 +51,55 @@ type_into (TfWindow *window, const char *group, const char *key, const char *tex
   iterate ();
 }
 
-/* Every number of expected is in the list with the text the core formats for it. */
+/* The limits the list shows as one row: the other limit of id, or NULL. */
+static const char *
+other_limit (const char *id, gboolean *is_low)
+{
+  static const char *const pairs[][2] = { { "ci_low", "ci_high" }, { "cri_low", "cri_high" } };
+
+  for (guint i = 0; i < G_N_ELEMENTS (pairs); i++)
+    for (guint j = 0; j < 2; j++)
+      if (g_strcmp0 (id, pairs[i][j]) == 0)
+        {
+          *is_low = j == 0;
+          return pairs[i][1 - j];
+        }
+  return NULL;
+}
+
+/* An interval's row as the list should show it, built from tf_number_format() of each
+ * limit: the value, the accessible description and the subtitle (NULL when both are
+ * defined). */
+static void
+expected_interval (const TfNumber *low, const TfNumber *high, char **value,
+                   char **description, char **subtitle)
+{
+  g_autofree char *low_text = tf_number_format (low);
+  g_autofree char *high_text = tf_number_format (high);
+  g_autofree char *limits = g_strdup_printf ("Lower limit %s, upper limit %s", low_text, high_text);
+  gboolean low_ok = low->status == TF_STATUS_OK, high_ok = high->status == TF_STATUS_OK;
+
+  if (!low_ok && !high_ok)
+    *value = g_strdup (low_text);
+  else
+    *value = g_strdup_printf ("%s – %s", low_text, high_text);
+
+  if (!low_ok && !high_ok && g_strcmp0 (low->reason, high->reason) == 0)
+    *subtitle = g_strdup_printf ("Neither limit is defined: %s", low->reason);
+  else if (!low_ok && !high_ok)
+    *subtitle = g_strdup_printf ("Lower limit not defined: %s\nUpper limit not defined: %s",
+                                 low->reason, high->reason);
+  else if (!low_ok)
+    *subtitle = g_strdup_printf ("Lower limit not defined: %s", low->reason);
+  else if (!high_ok)
+    *subtitle = g_strdup_printf ("Upper limit not defined: %s", high->reason);
+  else
+    *subtitle = NULL;
+  *description = *subtitle ? g_strdup_printf ("%s. %s", limits, *subtitle) : g_strdup (limits);
+}
+
+/* Every number of expected is in the list with the text the core formats for it; the
+ * two limits of an interval in one row, "low – high", each limit in its description. */
 static void
 assert_list_shows (TfResultList *list, const TfResults *expected)
 {
@@ -59,11 +107,33 @@ assert_list_shows (TfResultList *list, const TfResults *expected)
   for (guint i = 0; i < expected->numbers->len; i++)
     {
       const TfNumber *number = g_ptr_array_index (expected->numbers, i);
-      g_autofree char *want = tf_number_format (number);
+      gboolean is_low = FALSE;
+      const char *other_id = other_limit (number->id, &is_low);
+      const TfNumber *other = other_id ? tf_results_lookup (expected, other_id) : NULL;
 
-      g_assert_cmpstr (tf_result_list_get_value_text (list, number->id), ==, want);
-      if (number->status != TF_STATUS_OK)
-        g_assert_cmpstr (tf_result_list_get_subtitle (list, number->id), ==, number->reason);
+      if (other)
+        {
+          g_autofree char *value = NULL, *description = NULL, *subtitle = NULL;
+
+          expected_interval (is_low ? number : other, is_low ? other : number,
+                             &value, &description, &subtitle);
+          g_assert_cmpstr (tf_result_list_get_value_text (list, number->id), ==, value);
+          g_assert_cmpstr (tf_result_list_get_description (list, number->id), ==, description);
+          g_assert_cmpstr (tf_result_list_get_subtitle (list, number->id), ==, subtitle);
+          /* one row for both */
+          g_assert_cmpstr (tf_result_list_get_title (list, number->id), ==,
+                           tf_result_list_get_title (list, other_id));
+          continue;
+        }
+
+      {
+        g_autofree char *want = tf_number_format (number);
+
+        g_assert_cmpstr (tf_result_list_get_value_text (list, number->id), ==, want);
+        g_assert_cmpstr (tf_result_list_get_title (list, number->id), ==, number->label);
+        if (number->status != TF_STATUS_OK)
+          g_assert_cmpstr (tf_result_list_get_subtitle (list, number->id), ==, number->reason);
+      }
     }
 }
 
@@ -101,6 +171,11 @@ test_window_edits (void)
   g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
   demo_results = compute_or_fail (tf_window_get_analysis (window));
   assert_list_shows (list, demo_results);
+  /* the demo's Level is 0.95; one proportion's confidence interval is Clopper–Pearson's */
+  g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==,
+                   "95% confidence interval (Clopper–Pearson)");
+  g_assert_cmpstr (tf_result_list_get_title (list, "cri_high"), ==,
+                   "95% credible interval (equal-tailed)");
   g_assert_nonnull (tf_result_list_get_value_text (list, "p_value"));
   g_assert_nonnull (tf_result_list_get_value_text (list, "posterior_null"));
   g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
@@ -459,6 +534,63 @@ test_window_close_discard (void)
   g_rmdir (dir);
 }
 
+/* The list on its own, fed results made by hand so that limits can be undefined (the
+ * numbers are placeholders for the display, not check values of any method). */
+static void
+test_result_list_intervals (void)
+{
+  TfResultList *list = TF_RESULT_LIST (g_object_ref_sink (tf_result_list_new ()));
+  g_autoptr (TfAnalysis) analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  g_autoptr (TfResults) results = tf_results_new (TF_DESIGN_ONE_PROPORTION);
+  const char *why = "the level leaves no room above the estimate";
+
+  tf_results_add (results, "p_value", "p-value", TF_MEASURE_TAIL_PROBABILITY, 0.04);
+  tf_results_add (results, "ci_low", "Confidence interval, lower", TF_MEASURE_CONFIDENCE_LIMIT, 0.25);
+  tf_results_add_undefined (results, "ci_high", "Confidence interval, upper",
+                            TF_MEASURE_CONFIDENCE_LIMIT, why);
+  tf_results_add_undefined (results, "cri_low", "Credible interval, lower",
+                            TF_MEASURE_CREDIBLE_LIMIT, why);
+  tf_results_add_undefined (results, "cri_high", "Credible interval, upper",
+                            TF_MEASURE_CREDIBLE_LIMIT, why);
+  tf_results_add (results, "posterior_mean", "Posterior mean", TF_MEASURE_ESTIMATE, 0.3);
+  analysis->level = 0.999;
+
+  tf_result_list_set_results (list, analysis, results);
+  assert_list_shows (list, results);
+  /* and the strings themselves, as a reader sees them */
+  g_assert_cmpstr (tf_result_list_get_title (list, "ci_high"), ==,
+                   "99.9% confidence interval (Clopper–Pearson)");
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_high"), ==, "0.25 – not defined");
+  g_assert_cmpstr (tf_result_list_get_subtitle (list, "ci_low"), ==,
+                   "Upper limit not defined: the level leaves no room above the estimate");
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "cri_low"), ==, "not defined");
+  g_assert_cmpstr (tf_result_list_get_subtitle (list, "cri_high"), ==,
+                   "Neither limit is defined: the level leaves no room above the estimate");
+  g_assert_cmpstr (tf_result_list_get_description (list, "ci_low"), ==,
+                   "Lower limit 0.25, upper limit not defined. "
+                   "Upper limit not defined: the level leaves no room above the estimate");
+  g_assert_null (tf_result_list_get_description (list, "p_value"));
+
+  /* A lone limit, without its partner, keeps a row of its own. */
+  {
+    g_autoptr (TfResults) lone = tf_results_new (TF_DESIGN_ONE_PROPORTION);
+
+    tf_results_add (lone, "ci_low", "Confidence interval, lower", TF_MEASURE_CONFIDENCE_LIMIT, 0.25);
+    tf_result_list_set_results (list, analysis, lone);
+    assert_list_shows (list, lone);
+    g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_low"), ==, "0.25");
+    g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==, "Confidence interval, lower");
+  }
+
+  /* Cleared, nothing is left to read back. */
+  tf_result_list_clear (list, "Fix the Marked Field", "A field needs fixing.");
+  g_assert_false (tf_result_list_has_results (list));
+  g_assert_null (tf_result_list_get_value_text (list, "ci_low"));
+  g_assert_null (tf_result_list_get_title (list, "ci_low"));
+  g_assert_null (tf_result_list_get_description (list, "ci_low"));
+  g_object_unref (list);
+}
+
 /* Figure */
 
 static void
@@ -648,6 +780,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/gui/window/save-and-open", test_window_save_and_open);
   g_test_add_func ("/gui/window/modified", test_window_modified);
   g_test_add_func ("/gui/window/close-discard", test_window_close_discard);
+  g_test_add_func ("/gui/result-list/intervals", test_result_list_intervals);
   g_test_add_func ("/gui/figure/pixels-light", test_figure_pixels_light);
   g_test_add_func ("/gui/figure/pixels-dark", test_figure_pixels_dark);
   g_test_add_func ("/gui/figure/pdf", test_figure_pdf);
