@@ -143,6 +143,24 @@ interval_method (TfDesign design, gboolean credible)
     }
 }
 
+/* A name joined by dashes ("Clopper–Pearson") that a narrow row wraps before or after,
+ * never at the dash itself: a word joiner (U+2060) follows each en dash and hyphen. */
+static char *
+unbreakable_name (const char *name)
+{
+  GString *out = g_string_new (NULL);
+
+  for (const char *p = name; *p; p = g_utf8_next_char (p))
+    {
+      gunichar c = g_utf8_get_char (p);
+
+      g_string_append_unichar (out, c);
+      if (c == 0x2013 || c == '-')
+        g_string_append_unichar (out, 0x2060);
+    }
+  return g_string_free (out, FALSE);
+}
+
 /* "95% confidence interval (Clopper–Pearson)" */
 static char *
 interval_title (double level, TfDesign design, gboolean credible)
@@ -150,7 +168,8 @@ interval_title (double level, TfDesign design, gboolean credible)
   /* up to 8 decimals of the percentage, no trailing zeros: 95, 99.9, 99.99999 */
   double percent = round (level * 100.0 * 1e8) / 1e8;
   g_autofree char *level_text = g_strdup_printf ("%.10g", percent);
-  const char *method = interval_method (design, credible);
+  const char *name = interval_method (design, credible);
+  g_autofree char *method = name ? unbreakable_name (name) : NULL;
 
   if (credible)
     return method

@@ -171,11 +171,12 @@ test_window_edits (void)
   g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
   demo_results = compute_or_fail (tf_window_get_analysis (window));
   assert_list_shows (list, demo_results);
-  /* the demo's Level is 0.95; one proportion's confidence interval is Clopper–Pearson's */
+  /* the demo's Level is 0.95; one proportion's confidence interval is Clopper–Pearson's.
+   * A word joiner (U+2060) after the dash keeps the name whole when the row wraps. */
   g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==,
-                   "95% confidence interval (Clopper–Pearson)");
+                   "95% confidence interval (Clopper–\u2060Pearson)");
   g_assert_cmpstr (tf_result_list_get_title (list, "cri_high"), ==,
-                   "95% credible interval (equal-tailed)");
+                   "95% credible interval (equal-\u2060tailed)");
   g_assert_nonnull (tf_result_list_get_value_text (list, "p_value"));
   g_assert_nonnull (tf_result_list_get_value_text (list, "posterior_null"));
   g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
@@ -559,7 +560,7 @@ test_result_list_intervals (void)
   assert_list_shows (list, results);
   /* and the strings themselves, as a reader sees them */
   g_assert_cmpstr (tf_result_list_get_title (list, "ci_high"), ==,
-                   "99.9% confidence interval (Clopper–Pearson)");
+                   "99.9% confidence interval (Clopper–\u2060Pearson)");
   g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_high"), ==, "0.25 – not defined");
   g_assert_cmpstr (tf_result_list_get_subtitle (list, "ci_low"), ==,
                    "Upper limit not defined: the level leaves no room above the estimate");
