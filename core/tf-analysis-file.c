@@ -105,6 +105,66 @@ reader_number (Reader *r, const char *group, const char *key, gboolean required,
   return value;
 }
 
+/* A list of numbers separated by ';' (DESIGN.md), each item checked like a number. */
+static GArray *
+reader_list (Reader *r, const char *group, const char *key)
+{
+  g_autofree char *text = reader_string (r, group, key);
+  g_auto (GStrv) items = NULL;
+  g_autoptr (GArray) values = NULL;
+  guint count = 0;
+
+  if (text == NULL)
+    return NULL;
+  items = g_strsplit (text, ";", -1);
+  values = g_array_new (FALSE, FALSE, sizeof (double));
+  for (guint i = 0; items[i]; i++)
+    {
+      char *item = g_strstrip (items[i]);
+      char *end = NULL;
+      double v;
+
+      if (*item == '\0' && items[i + 1] == NULL && i > 0)
+        break;  /* a trailing ';' */
+      errno = 0;
+      v = g_ascii_strtod (item, &end);
+      if (*item == '\0' || end == item || *end != '\0' || !isfinite (v)
+          || (errno == ERANGE && fabs (v) > 1.0) || g_ascii_strncasecmp (item, "0x", 2) == 0)
+        {
+          g_ptr_array_add (r->problems,
+                           tf_problem_new (group, key,
+                                           _("Item %u of the list, “%s”, is not a finite number (separate values with ';' and write decimals with a point)."),
+                                           i + 1, item));
+          return NULL;
+        }
+      g_array_append_val (values, v);
+      count++;
+    }
+  if (count == 0)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key, _("The list is empty; give the values separated by ';'.")));
+      return NULL;
+    }
+  return g_steal_pointer (&values);
+}
+
+static gboolean
+reader_boolean (Reader *r, const char *group, const char *key, gboolean fallback)
+{
+  g_autofree char *text = reader_string (r, group, key);
+
+  if (text == NULL)
+    return fallback;
+  if (g_str_equal (text, "true"))
+    return TRUE;
+  if (g_str_equal (text, "false"))
+    return FALSE;
+  g_ptr_array_add (r->problems,
+                   tf_problem_new (group, key, _("“%s” is not allowed here; use true or false."), text));
+  return fallback;
+}
+
 /* One of a list of words. */
 static void
 reader_word (Reader *r, const char *group, const char *key, gboolean required,
@@ -132,6 +192,16 @@ WORD_PARSER (parse_direction, TfDirection, tf_direction_from_string)
 WORD_PARSER (parse_prior, TfPriorFamily, tf_prior_family_from_string)
 WORD_PARSER (parse_null_kind, TfNullKind, tf_null_kind_from_string)
 
+/* The three summary keys of a sample: its size, mean and SD. */
+static void
+read_summaries (Reader *r, const char *n_key, const char *mean_key, const char *sd_key,
+                        double *n, double *mean, double *sd)
+{
+  *n = reader_number (r, "Data", n_key, TRUE, *n);
+  *mean = reader_number (r, "Data", mean_key, TRUE, *mean);
+  *sd = reader_number (r, "Data", sd_key, TRUE, *sd);
+}
+
 static void
 read_data (Reader *r, TfAnalysis *a)
 {
@@ -141,10 +211,65 @@ read_data (Reader *r, TfAnalysis *a)
       a->successes = reader_number (r, "Data", "Successes", TRUE, a->successes);
       a->trials = reader_number (r, "Data", "Trials", TRUE, a->trials);
       break;
+    case TF_DESIGN_TWO_PROPORTIONS:
+      a->successes_a = reader_number (r, "Data", "SuccessesA", TRUE, a->successes_a);
+      a->trials_a = reader_number (r, "Data", "TrialsA", TRUE, a->trials_a);
+      a->successes_b = reader_number (r, "Data", "SuccessesB", TRUE, a->successes_b);
+      a->trials_b = reader_number (r, "Data", "TrialsB", TRUE, a->trials_b);
+      break;
+    case TF_DESIGN_ONE_MEAN:
+      if (g_key_file_has_key (r->key_file, "Data", "Values", NULL))
+        tf_analysis_set_values (&a->values, reader_list (r, "Data", "Values"));
+      else
+        read_summaries (r, "N", "Mean", "SD", &a->n, &a->mean, &a->sd);
+      if (g_key_file_has_key (r->key_file, "Data", "KnownSD", NULL))
+        {
+          a->has_known_sd = TRUE;
+          a->known_sd = reader_number (r, "Data", "KnownSD", TRUE, 1.0);
+        }
+      break;
+    case TF_DESIGN_PAIRED_MEANS:
+      if (g_key_file_has_key (r->key_file, "Data", "ValuesA", NULL)
+          || g_key_file_has_key (r->key_file, "Data", "ValuesB", NULL))
+        {
+          tf_analysis_set_values (&a->values_a, reader_list (r, "Data", "ValuesA"));
+          tf_analysis_set_values (&a->values_b, reader_list (r, "Data", "ValuesB"));
+          if (!g_key_file_has_key (r->key_file, "Data", "ValuesA", NULL))
+            g_ptr_array_add (r->problems, tf_problem_new ("Data", "ValuesA",
+                                                          _("ValuesB is given, so ValuesA is needed too.")));
+          if (!g_key_file_has_key (r->key_file, "Data", "ValuesB", NULL))
+            g_ptr_array_add (r->problems, tf_problem_new ("Data", "ValuesB",
+                                                          _("ValuesA is given, so ValuesB is needed too.")));
+        }
+      else
+        read_summaries (r, "N", "MeanDiff", "SDDiff", &a->n, &a->mean, &a->sd);
+      break;
+    case TF_DESIGN_TWO_MEANS:
+      if (g_key_file_has_key (r->key_file, "Data", "ValuesA", NULL))
+        tf_analysis_set_values (&a->values_a, reader_list (r, "Data", "ValuesA"));
+      else
+        read_summaries (r, "NA", "MeanA", "SDA", &a->n_a, &a->mean_a, &a->sd_a);
+      if (g_key_file_has_key (r->key_file, "Data", "ValuesB", NULL))
+        tf_analysis_set_values (&a->values_b, reader_list (r, "Data", "ValuesB"));
+      else
+        read_summaries (r, "NB", "MeanB", "SDB", &a->n_b, &a->mean_b, &a->sd_b);
+      a->equal_variances = reader_boolean (r, "Data", "EqualVariances", a->equal_variances);
+      break;
+    case TF_DESIGN_ONE_RATE:
+      a->events = reader_number (r, "Data", "Events", TRUE, a->events);
+      a->exposure = reader_number (r, "Data", "Exposure", TRUE, a->exposure);
+      break;
+    case TF_DESIGN_TWO_RATES:
+      a->events_a = reader_number (r, "Data", "EventsA", TRUE, a->events_a);
+      a->exposure_a = reader_number (r, "Data", "ExposureA", TRUE, a->exposure_a);
+      a->events_b = reader_number (r, "Data", "EventsB", TRUE, a->events_b);
+      a->exposure_b = reader_number (r, "Data", "ExposureB", TRUE, a->exposure_b);
+      break;
+    case TF_N_DESIGNS:
     default:
-      /* Refused by validation, which says the design is not available yet. */
       break;
     }
+  tf_analysis_summarise_values (a);
 }
 
 TfAnalysis *
@@ -275,6 +400,97 @@ set_number (GKeyFile *key_file, const char *group, const char *key, double value
   g_key_file_set_value (key_file, group, key, text);
 }
 
+static void
+set_list (GKeyFile *key_file, const char *group, const char *key, const GArray *values)
+{
+  g_autoptr (GString) text = g_string_new (NULL);
+
+  for (guint i = 0; i < values->len; i++)
+    {
+      g_autofree char *item = tf_format_double (g_array_index (values, double, i));
+
+      if (i > 0)
+        g_string_append_c (text, ';');
+      g_string_append (text, item);
+    }
+  g_key_file_set_value (key_file, group, key, text->str);
+}
+
+static void
+write_data (GKeyFile *k, const TfAnalysis *a)
+{
+  switch (a->design)
+    {
+    case TF_DESIGN_ONE_PROPORTION:
+      set_number (k, "Data", "Successes", a->successes);
+      set_number (k, "Data", "Trials", a->trials);
+      break;
+    case TF_DESIGN_TWO_PROPORTIONS:
+      set_number (k, "Data", "SuccessesA", a->successes_a);
+      set_number (k, "Data", "TrialsA", a->trials_a);
+      set_number (k, "Data", "SuccessesB", a->successes_b);
+      set_number (k, "Data", "TrialsB", a->trials_b);
+      break;
+    case TF_DESIGN_ONE_MEAN:
+      if (a->values)
+        set_list (k, "Data", "Values", a->values);
+      else
+        {
+          set_number (k, "Data", "N", a->n);
+          set_number (k, "Data", "Mean", a->mean);
+          set_number (k, "Data", "SD", a->sd);
+        }
+      if (a->has_known_sd)
+        set_number (k, "Data", "KnownSD", a->known_sd);
+      break;
+    case TF_DESIGN_PAIRED_MEANS:
+      if (a->values_a && a->values_b)
+        {
+          set_list (k, "Data", "ValuesA", a->values_a);
+          set_list (k, "Data", "ValuesB", a->values_b);
+        }
+      else
+        {
+          set_number (k, "Data", "N", a->n);
+          set_number (k, "Data", "MeanDiff", a->mean);
+          set_number (k, "Data", "SDDiff", a->sd);
+        }
+      break;
+    case TF_DESIGN_TWO_MEANS:
+      if (a->values_a)
+        set_list (k, "Data", "ValuesA", a->values_a);
+      else
+        {
+          set_number (k, "Data", "NA", a->n_a);
+          set_number (k, "Data", "MeanA", a->mean_a);
+          set_number (k, "Data", "SDA", a->sd_a);
+        }
+      if (a->values_b)
+        set_list (k, "Data", "ValuesB", a->values_b);
+      else
+        {
+          set_number (k, "Data", "NB", a->n_b);
+          set_number (k, "Data", "MeanB", a->mean_b);
+          set_number (k, "Data", "SDB", a->sd_b);
+        }
+      g_key_file_set_value (k, "Data", "EqualVariances", a->equal_variances ? "true" : "false");
+      break;
+    case TF_DESIGN_ONE_RATE:
+      set_number (k, "Data", "Events", a->events);
+      set_number (k, "Data", "Exposure", a->exposure);
+      break;
+    case TF_DESIGN_TWO_RATES:
+      set_number (k, "Data", "EventsA", a->events_a);
+      set_number (k, "Data", "ExposureA", a->exposure_a);
+      set_number (k, "Data", "EventsB", a->events_b);
+      set_number (k, "Data", "ExposureB", a->exposure_b);
+      break;
+    case TF_N_DESIGNS:
+    default:
+      break;
+    }
+}
+
 GKeyFile *
 tf_analysis_to_key_file (const TfAnalysis *a)
 {
@@ -286,15 +502,7 @@ tf_analysis_to_key_file (const TfAnalysis *a)
   if (a->title)
     g_key_file_set_string (key_file, "Analysis", "Title", a->title);
 
-  switch (a->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      set_number (key_file, "Data", "Successes", a->successes);
-      set_number (key_file, "Data", "Trials", a->trials);
-      break;
-    default:
-      break;
-    }
+  write_data (key_file, a);
 
   g_key_file_set_value (key_file, "Null", "Kind", tf_null_kind_to_string (a->null_kind));
   if (a->null_kind == TF_NULL_POINT)

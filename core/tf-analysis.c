@@ -73,6 +73,9 @@ tf_analysis_reset (TfAnalysis *analysis, TfDesign design)
   GKeyFile *source = analysis->source;
 
   g_free (analysis->title);
+  g_clear_pointer (&analysis->values, g_array_unref);
+  g_clear_pointer (&analysis->values_a, g_array_unref);
+  g_clear_pointer (&analysis->values_b, g_array_unref);
   *analysis = (TfAnalysis) {
     .design = design,
     .title = NULL,
@@ -94,6 +97,7 @@ tf_analysis_reset (TfAnalysis *analysis, TfDesign design)
     .prior_rate = 1.0,
     .prior_null = 0.5,
     .level = 0.95,
+    .equal_variances = FALSE,
     .source = source,
   };
   if (design == TF_DESIGN_ONE_PROPORTION)
@@ -110,6 +114,73 @@ tf_analysis_new (TfDesign design)
 
   tf_analysis_reset (analysis, design);
   return analysis;
+}
+
+static GArray *
+values_copy (const GArray *values)
+{
+  GArray *copy;
+
+  if (values == NULL)
+    return NULL;
+  copy = g_array_sized_new (FALSE, FALSE, sizeof (double), values->len);
+  g_array_append_vals (copy, values->data, values->len);
+  return copy;
+}
+
+void
+tf_analysis_set_values (GArray **slot, GArray *values)
+{
+  g_clear_pointer (slot, g_array_unref);
+  *slot = values;
+}
+
+/* Welford 1962: running mean and sum of squared deviations, one pass. */
+static void
+summarise (const double *x, guint n, double *count, double *mean, double *sd)
+{
+  double m = 0.0, s = 0.0;
+
+  for (guint i = 0; i < n; i++)
+    {
+      double d = x[i] - m;
+
+      m += d / (double) (i + 1);
+      s += d * (x[i] - m);
+    }
+  *count = n;
+  *mean = m;
+  *sd = n > 1 ? sqrt (s / (double) (n - 1)) : 0.0;
+}
+
+void
+tf_analysis_summarise_values (TfAnalysis *a)
+{
+  switch (a->design)
+    {
+    case TF_DESIGN_ONE_MEAN:
+      if (a->values)
+        summarise ((double *) a->values->data, a->values->len, &a->n, &a->mean, &a->sd);
+      break;
+    case TF_DESIGN_PAIRED_MEANS:
+      if (a->values_a && a->values_b && a->values_a->len == a->values_b->len)
+        {
+          g_autofree double *d = g_new (double, a->values_a->len);
+
+          for (guint i = 0; i < a->values_a->len; i++)
+            d[i] = g_array_index (a->values_a, double, i) - g_array_index (a->values_b, double, i);
+          summarise (d, a->values_a->len, &a->n, &a->mean, &a->sd);
+        }
+      break;
+    case TF_DESIGN_TWO_MEANS:
+      if (a->values_a)
+        summarise ((double *) a->values_a->data, a->values_a->len, &a->n_a, &a->mean_a, &a->sd_a);
+      if (a->values_b)
+        summarise ((double *) a->values_b->data, a->values_b->len, &a->n_b, &a->mean_b, &a->sd_b);
+      break;
+    default:
+      break;
+    }
 }
 
 static GKeyFile *
@@ -134,6 +205,9 @@ tf_analysis_copy (const TfAnalysis *analysis)
   *copy = *analysis;
   copy->title = g_strdup (analysis->title);
   copy->source = analysis->source ? key_file_copy (analysis->source) : NULL;
+  copy->values = values_copy (analysis->values);
+  copy->values_a = values_copy (analysis->values_a);
+  copy->values_b = values_copy (analysis->values_b);
   return copy;
 }
 
@@ -144,6 +218,9 @@ tf_analysis_free (TfAnalysis *analysis)
     return;
   g_free (analysis->title);
   g_clear_pointer (&analysis->source, g_key_file_unref);
+  g_clear_pointer (&analysis->values, g_array_unref);
+  g_clear_pointer (&analysis->values_a, g_array_unref);
+  g_clear_pointer (&analysis->values_b, g_array_unref);
   g_free (analysis);
 }
 

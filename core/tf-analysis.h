@@ -47,6 +47,28 @@ typedef struct {
   double successes;
   double trials;
 
+  /* [Data], two proportions: groups A and B */
+  double successes_a, trials_a;
+  double successes_b, trials_b;
+
+  /* [Data], means, from summaries: one mean (N, Mean, SD), paired means (N, MeanDiff,
+   * SDDiff, held in n, mean, sd), two means (NA, MeanA, SDA, NB, MeanB, SDB). When raw
+   * values are given instead (Values, or ValuesA + ValuesB), they are kept here and the
+   * summaries are computed from them by tf_analysis_summarise_values(). */
+  double n, mean, sd;
+  double n_a, mean_a, sd_a;
+  double n_b, mean_b, sd_b;
+  GArray *values;               /* of double; NULL when summaries were given */
+  GArray *values_a, *values_b;
+  gboolean has_known_sd;        /* KnownSD: the SD is known (a z test) */
+  double known_sd;
+  gboolean equal_variances;     /* two means: Student (TRUE) or Welch (FALSE) */
+
+  /* [Data], rates: events over exposure */
+  double events, exposure;
+  double events_a, exposure_a;
+  double events_b, exposure_b;
+
   /* [Null] */
   TfNullKind null_kind;
   double null_value;
@@ -86,6 +108,15 @@ G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfAnalysis, tf_analysis_free)
 void tf_analysis_reset (TfAnalysis *analysis, TfDesign design);
 
 void tf_analysis_set_title (TfAnalysis *analysis, const char *title);
+
+/* Replaces a list of raw values (takes ownership of values, which may be NULL). */
+void tf_analysis_set_values (GArray **slot, GArray *values);
+
+/* When raw values are present, computes n, mean and SD from them (Welford 1962, one
+ * pass, stable): Values → n, mean, sd; paired ValuesA + ValuesB → n, mean, sd of the
+ * differences A − B; two means ValuesA, ValuesB → n_a, mean_a, sd_a, n_b, ... Lists of
+ * unequal length for paired means are left to validation. */
+void tf_analysis_summarise_values (TfAnalysis *analysis);
 
 /* Appends one TfProblem per thing wrong with the analysis to problems (a GPtrArray
  * freeing with tf_problem_free). Returns TRUE when nothing was wrong. */
