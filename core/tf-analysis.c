@@ -2,7 +2,7 @@
  * tf-analysis.c: the analysis as the user set it, its defaults and its validation.
  */
 #include "tf-analysis.h"
-#include "tf-one-proportion.h"
+#include "tf-design.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -250,30 +250,17 @@ validate_common (const TfAnalysis *analysis, GPtrArray *problems)
 gboolean
 tf_analysis_validate (const TfAnalysis *analysis, GPtrArray *problems)
 {
+  const TfDesignClass *klass = tf_design_class (analysis->design);
   guint before = problems->len;
 
-  switch (analysis->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      tf_one_proportion_validate (analysis, problems);
-      break;
-    case TF_DESIGN_TWO_PROPORTIONS:
-    case TF_DESIGN_ONE_MEAN:
-    case TF_DESIGN_PAIRED_MEANS:
-    case TF_DESIGN_TWO_MEANS:
-    case TF_DESIGN_ONE_RATE:
-    case TF_DESIGN_TWO_RATES:
-      g_ptr_array_add (problems,
-                       tf_problem_new ("Analysis", "Design",
-                                       _("The design “%s” is not available in this version of Twofold; only one-proportion is."),
-                                       tf_design_to_string (analysis->design)));
-      break;
-    case TF_N_DESIGNS:
-    default:
-      g_ptr_array_add (problems,
-                       tf_problem_new ("Analysis", "Design", _("The design is not known.")));
-      break;
-    }
+  if (klass == NULL)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Analysis", "Design",
+                                     _("The design “%s” is not available in this version of Twofold."),
+                                     (guint) analysis->design < TF_N_DESIGNS
+                                     ? tf_design_to_string (analysis->design) : "?"));
+  else
+    klass->validate (analysis, problems);
   validate_common (analysis, problems);
   return problems->len == before;
 }

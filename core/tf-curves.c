@@ -2,36 +2,56 @@
  * tf-curves.c: curves for figures, computed on demand from a valid analysis.
  */
 #include "tf-curves.h"
-#include "tf-one-proportion.h"
+#include "tf-design.h"
 
-#include <math.h>
+#include <glib/gi18n-lib.h>
 
-TfDensityCurves *
-tf_density_curves_new (const TfAnalysis *analysis, guint n_points, GPtrArray *problems)
+/* The design's class when the analysis is valid, else NULL with problems filled. */
+static const TfDesignClass *
+valid_class (const TfAnalysis *analysis, GPtrArray *problems)
 {
   g_autoptr (GPtrArray) own = NULL;
-  TfDensityCurves *curves;
 
-  g_return_val_if_fail (n_points >= 2, NULL);
   if (problems == NULL)
     problems = own = tf_problem_list_new ();
   if (!tf_analysis_validate (analysis, problems))
     return NULL;
+  return tf_design_class (analysis->design);
+}
 
+static void
+set_why_not (char **why_not, char *text)
+{
+  if (why_not)
+    *why_not = text;
+  else
+    g_free (text);
+}
+
+static char *
+not_provided (const TfAnalysis *analysis, const char *what)
+{
+  /* TRANSLATORS: the first %s is a figure ("the sensitivity curve"), the second a design */
+  return g_strdup_printf (_("%s is not available for the %s design in this version."),
+                          what, tf_design_label (analysis->design));
+}
+
+TfDensityCurves *
+tf_density_curves_new (const TfAnalysis *analysis, guint n_points, GPtrArray *problems)
+{
+  const TfDesignClass *klass = valid_class (analysis, problems);
+  TfDensityCurves *curves;
+
+  g_return_val_if_fail (n_points >= 2, NULL);
+  if (klass == NULL || klass->densities == NULL)
+    return NULL;
   curves = g_new0 (TfDensityCurves, 1);
   curves->n = n_points;
   curves->x = g_new0 (double, n_points);
   curves->prior = g_new0 (double, n_points);
   curves->posterior = g_new0 (double, n_points);
   curves->likelihood = g_new0 (double, n_points);
-  switch (analysis->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      tf_one_proportion_densities (analysis, curves);
-      break;
-    default:
-      g_assert_not_reached ();  /* validation refuses the others */
-    }
+  klass->densities (analysis, curves);
   return curves;
 }
 
@@ -46,4 +66,171 @@ tf_density_curves_free (TfDensityCurves *curves)
   g_free (curves->likelihood);
   g_free (curves->parameter_markup);
   g_free (curves);
+}
+
+static TfEvidenceCurve *
+evidence_curve_new (guint n_points)
+{
+  TfEvidenceCurve *curve = g_new0 (TfEvidenceCurve, 1);
+
+  curve->n = n_points;
+  curve->x = g_new0 (double, n_points);
+  curve->log_bf01 = g_new0 (double, n_points);
+  curve->posterior_null = g_new0 (double, n_points);
+  return curve;
+}
+
+typedef gboolean (*EvidenceHook) (const TfAnalysis *, TfEvidenceCurve *, char **);
+
+static TfEvidenceCurve *
+evidence_curve_run (const TfAnalysis *analysis, guint n_points, GPtrArray *problems,
+                    char **why_not, gboolean sensitivity)
+{
+  const TfDesignClass *klass = valid_class (analysis, problems);
+  EvidenceHook hook;
+  TfEvidenceCurve *curve;
+  char *reason = NULL;
+
+  g_return_val_if_fail (n_points >= 2, NULL);
+  if (klass == NULL)
+    return NULL;
+  hook = sensitivity ? klass->sensitivity : klass->sample_size;
+  if (hook == NULL)
+    {
+      set_why_not (why_not, not_provided (analysis, sensitivity ? _("The sensitivity curve")
+                                                                : _("The sample-size curve")));
+      return NULL;
+    }
+  curve = evidence_curve_new (n_points);
+  if (!hook (analysis, curve, &reason))
+    {
+      tf_evidence_curve_free (curve);
+      set_why_not (why_not, reason);
+      return NULL;
+    }
+  return curve;
+}
+
+TfEvidenceCurve *
+tf_sensitivity_curve_new (const TfAnalysis *analysis, guint n_points, GPtrArray *problems,
+                          char **why_not)
+{
+  return evidence_curve_run (analysis, n_points, problems, why_not, TRUE);
+}
+
+TfEvidenceCurve *
+tf_sample_size_curve_new (const TfAnalysis *analysis, guint n_points, GPtrArray *problems,
+                          char **why_not)
+{
+  return evidence_curve_run (analysis, n_points, problems, why_not, FALSE);
+}
+
+void
+tf_evidence_curve_free (TfEvidenceCurve *curve)
+{
+  if (curve == NULL)
+    return;
+  g_free (curve->x);
+  g_free (curve->log_bf01);
+  g_free (curve->posterior_null);
+  g_free (curve->x_markup);
+  g_free (curve);
+}
+
+void
+tf_null_distribution_allocate (TfNullDistribution *dist, guint n)
+{
+  g_free (dist->x);
+  g_free (dist->mass);
+  g_free (dist->in_tail);
+  dist->n = n;
+  dist->x = g_new0 (double, n);
+  dist->mass = g_new0 (double, n);
+  dist->in_tail = g_new0 (gboolean, n);
+}
+
+TfNullDistribution *
+tf_null_distribution_new (const TfAnalysis *analysis, guint n_points, GPtrArray *problems,
+                          char **why_not)
+{
+  const TfDesignClass *klass = valid_class (analysis, problems);
+  TfNullDistribution *dist;
+  char *reason = NULL;
+
+  if (klass == NULL)
+    return NULL;
+  if (klass->null_distribution == NULL)
+    {
+      set_why_not (why_not, not_provided (analysis, _("The null distribution")));
+      return NULL;
+    }
+  dist = g_new0 (TfNullDistribution, 1);
+  tf_null_distribution_allocate (dist, MAX (n_points, 2));
+  if (!klass->null_distribution (analysis, dist, &reason))
+    {
+      tf_null_distribution_free (dist);
+      set_why_not (why_not, reason);
+      return NULL;
+    }
+  return dist;
+}
+
+void
+tf_null_distribution_free (TfNullDistribution *dist)
+{
+  if (dist == NULL)
+    return;
+  g_free (dist->x);
+  g_free (dist->mass);
+  g_free (dist->in_tail);
+  g_free (dist->x_markup);
+  g_free (dist);
+}
+
+void
+tf_model_probabilities_allocate (TfModelProbabilities *models, guint n)
+{
+  if (models->names_markup)
+    g_strfreev (models->names_markup);
+  g_free (models->prior);
+  g_free (models->posterior);
+  models->n = n;
+  models->names_markup = g_new0 (char *, n + 1);
+  models->prior = g_new0 (double, n);
+  models->posterior = g_new0 (double, n);
+}
+
+TfModelProbabilities *
+tf_model_probabilities_new (const TfAnalysis *analysis, GPtrArray *problems, char **why_not)
+{
+  const TfDesignClass *klass = valid_class (analysis, problems);
+  TfModelProbabilities *models;
+  char *reason = NULL;
+
+  if (klass == NULL)
+    return NULL;
+  if (klass->model_probabilities == NULL)
+    {
+      set_why_not (why_not, not_provided (analysis, _("The model probabilities")));
+      return NULL;
+    }
+  models = g_new0 (TfModelProbabilities, 1);
+  if (!klass->model_probabilities (analysis, models, &reason))
+    {
+      tf_model_probabilities_free (models);
+      set_why_not (why_not, reason);
+      return NULL;
+    }
+  return models;
+}
+
+void
+tf_model_probabilities_free (TfModelProbabilities *models)
+{
+  if (models == NULL)
+    return;
+  g_strfreev (models->names_markup);
+  g_free (models->prior);
+  g_free (models->posterior);
+  g_free (models);
 }

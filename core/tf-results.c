@@ -3,7 +3,7 @@
  */
 #include "tf-results.h"
 #include "tf-analysis-file.h"
-#include "tf-one-proportion.h"
+#include "tf-design.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -135,14 +135,7 @@ tf_analysis_compute (const TfAnalysis *analysis, GPtrArray *problems)
     return NULL;
 
   results = tf_results_new (analysis->design);
-  switch (analysis->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      tf_one_proportion_compute (analysis, results);
-      break;
-    default:
-      g_assert_not_reached ();  /* validation refuses the others */
-    }
+  tf_design_class (analysis->design)->compute (analysis, results);
   return results;
 }
 

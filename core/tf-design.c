@@ -1,0 +1,31 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-design.c: the designs this version of Twofold computes.
+ */
+#include "tf-design.h"
+#include "tf-one-proportion.h"
+
+static const TfDesignClass one_proportion = {
+  .design = TF_DESIGN_ONE_PROPORTION,
+  .validate = tf_one_proportion_validate,
+  .compute = tf_one_proportion_compute,
+  .densities = tf_one_proportion_densities,
+};
+
+const TfDesignClass *
+tf_design_class (TfDesign design)
+{
+  switch (design)
+    {
+    case TF_DESIGN_ONE_PROPORTION:
+      return &one_proportion;
+    case TF_DESIGN_TWO_PROPORTIONS:
+    case TF_DESIGN_ONE_MEAN:
+    case TF_DESIGN_PAIRED_MEANS:
+    case TF_DESIGN_TWO_MEANS:
+    case TF_DESIGN_ONE_RATE:
+    case TF_DESIGN_TWO_RATES:
+    case TF_N_DESIGNS:
+    default:
+      return NULL;
+    }
+}
