@@ -4,14 +4,14 @@
 #pragma once
 
 #include "tf-window.h"
-#include "tf-proportion-form.h"
+#include "tf-analysis-form.h"
 #include "tf-plot-view.h"
 #include "tf-result-list.h"
 #include "tf-explanation-pane.h"
 
 G_BEGIN_DECLS
 
-TfProportionForm *tf_window_get_form (TfWindow *self);
+TfAnalysisForm *tf_window_get_form (TfWindow *self);
 TfPlotView *tf_window_get_plot_view (TfWindow *self);
 TfResultList *tf_window_get_result_list (TfWindow *self);
 TfExplanationPane *tf_window_get_explanation_pane (TfWindow *self);

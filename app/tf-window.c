@@ -10,6 +10,7 @@
 #include "tf-window-private.h"
 #include "tf-analysis-file.h"
 #include "tf-results.h"
+#include "tf-design.h"
 
 #define DEMO_RESOURCE "/org/twofold/Twofold/demo/seed-germination.twofold"
 #define FILE_SUFFIX ".twofold"
@@ -30,7 +31,7 @@ struct _TfWindow
   AdwToastOverlay *toast_overlay;
   AdwFlap *flap;
   GtkToggleButton *explanations_button;
-  TfProportionForm *form;
+  TfAnalysisForm *form;
   GtkStack *center_stack;
   GtkPaned *paned;
   TfPlotView *plot_view;
@@ -40,6 +41,7 @@ struct _TfWindow
 
   TfAnalysis *analysis;         /* the document, as the form last set it */
   TfResults *results;           /* NULL while the analysis cannot be computed */
+  gboolean savable;             /* every field parsed and only the design is missing */
   GFile *file;                  /* NULL for the demo and new analyses */
   gboolean is_demo;
   GSettings *settings;          /* NULL when the schema is not installed */
@@ -114,15 +116,6 @@ update_title (TfWindow *self)
   gtk_window_set_title (GTK_WINDOW (self), shown_title);
 }
 
-static void
-set_modified (TfWindow *self, gboolean modified)
-{
-  if (self->modified == modified)
-    return;
-  self->modified = modified;
-  update_title (self);
-}
-
 static char *
 problems_to_text (GPtrArray *problems, gboolean with_fields)
 {
@@ -144,16 +137,46 @@ problems_to_text (GPtrArray *problems, gboolean with_fields)
   return g_string_free (text, FALSE);
 }
 
+/* Whether problems are only that this version does not compute the design: such an
+ * analysis can still be saved, for a version that does. */
+static gboolean
+only_design_missing (GPtrArray *problems)
+{
+  for (guint i = 0; i < problems->len; i++)
+    {
+      const TfProblem *problem = g_ptr_array_index (problems, i);
+
+      if (g_strcmp0 (problem->group, "Analysis") != 0 || g_strcmp0 (problem->key, "Design") != 0)
+        return FALSE;
+    }
+  return TRUE;
+}
+
 static void
 recompute (TfWindow *self)
 {
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
   g_autofree char *description = NULL;
+  gboolean parsed;
 
   g_clear_pointer (&self->results, tf_results_free);
-  if (tf_proportion_form_apply (self->form, self->analysis, problems))
+  parsed = tf_analysis_form_apply (self->form, self->analysis, problems);
+  if (parsed)
     self->results = tf_analysis_compute (self->analysis, problems);
-  tf_proportion_form_show_problems (self->form, problems);
+  else if (tf_design_class (self->analysis->design) == NULL)
+    {
+      /* the fields to fix, and that the design is not computed in this version */
+      g_autoptr (GPtrArray) checks = tf_problem_list_new ();
+      const TfProblem *design;
+
+      tf_analysis_validate (self->analysis, checks);
+      design = tf_problem_list_find (checks, "Analysis", "Design");
+      if (design)
+        g_ptr_array_add (problems, tf_problem_new (design->group, design->key, "%s",
+                                                   design->message));
+    }
+  self->savable = self->results != NULL || (parsed && only_design_missing (problems));
+  tf_analysis_form_show_problems (self->form, problems);
 
   if (self->results)
     {
@@ -168,33 +191,49 @@ recompute (TfWindow *self)
     g_ptr_array_add (problems, tf_problem_new ("", "", "%s",
                                                _("The analysis could not be computed.")));
   description = problems_to_text (problems, FALSE);
+  if (parsed && only_design_missing (problems))
+    {
+      adw_status_page_set_title (self->invalid_page, _("Not Computed in This Version"));
+      tf_result_list_clear (self->result_list, _("Not Computed in This Version"), description);
+      tf_explanation_pane_clear (self->explanation_pane,
+                                 _("This version of Twofold does not compute this design: there is nothing to explain yet."));
+    }
+  else
+    {
+      adw_status_page_set_title (self->invalid_page, _("Fix the Marked Field"));
+      tf_result_list_clear (self->result_list, _("Fix the Marked Field"), description);
+      tf_explanation_pane_clear (self->explanation_pane,
+                                 _("Fix the field marked in the form: the explanations come back with the results."));
+    }
   adw_status_page_set_description (self->invalid_page, description);
-  tf_result_list_clear (self->result_list, _("Fix the Marked Field"), description);
   tf_plot_view_set_analysis (self->plot_view, NULL);
-  tf_explanation_pane_clear (self->explanation_pane,
-                             _("Fix the field marked in the form: the explanations come back with the results."));
   gtk_stack_set_visible_child_name (self->center_stack, "invalid");
 }
 
 static void
-on_form_changed (TfProportionForm *form, TfWindow *self)
+on_form_changed (TfAnalysisForm *form, TfWindow *self)
 {
   recompute (self);
-  set_modified (self, TRUE);
+  self->modified = TRUE;
+  update_title (self);    /* the design may have changed too */
 }
 
 void
 tf_window_set_analysis (TfWindow *self, const TfAnalysis *analysis, GFile *file)
 {
+  TfAnalysis *copy;
+
   g_return_if_fail (TF_IS_WINDOW (self));
   g_return_if_fail (analysis != NULL);
 
+  /* copied first: analysis may be the window's own */
+  copy = tf_analysis_copy (analysis);
   g_clear_pointer (&self->analysis, tf_analysis_free);
-  self->analysis = tf_analysis_copy (analysis);
+  self->analysis = copy;
   g_set_object (&self->file, file);
   self->is_demo = FALSE;
   self->modified = FALSE;
-  tf_proportion_form_set_analysis (self->form, self->analysis);
+  tf_analysis_form_set_analysis (self->form, self->analysis);
   recompute (self);
   update_title (self);
 }
@@ -216,6 +255,25 @@ file_display_name (GFile *file)
   return path ? g_filename_display_name (path) : g_file_get_parse_name (file);
 }
 
+/* A file that reads well but whose values need fixing (or whose design this version does
+ * not compute) opens with the fields marked, so that it can be put right; NULL when it
+ * does not read as an analysis at all. */
+static TfAnalysis *
+load_to_fix (const char *path)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (GKeyFile) key_file = g_key_file_new ();
+  g_autofree char *data = NULL;
+  gsize length = 0;
+
+  if (!g_file_get_contents (path, &data, &length, NULL)
+      || !g_utf8_validate (data, (gssize) length, NULL)
+      || !g_key_file_load_from_data (key_file, data, length, G_KEY_FILE_KEEP_COMMENTS, NULL)
+      || !g_key_file_has_group (key_file, "Analysis"))
+    return NULL;
+  return tf_analysis_from_key_file (key_file, problems);
+}
+
 gboolean
 tf_window_open_file (TfWindow *self, GFile *file)
 {
@@ -233,6 +291,8 @@ tf_window_open_file (TfWindow *self, GFile *file)
       return FALSE;
     }
   analysis = tf_analysis_load (path, problems);
+  if (analysis == NULL)
+    analysis = load_to_fix (path);
   if (analysis == NULL)
     {
       g_autofree char *heading = g_strdup_printf (_("Could Not Open “%s”"), name);
@@ -371,7 +431,7 @@ save_to (TfWindow *self, GFile *file)
   g_autofree char *name = file_display_name (file);
   g_autofree char *basename = g_file_get_basename (file);
 
-  if (self->results == NULL)
+  if (!self->savable)
     {
       g_autofree char *heading = g_strdup_printf (_("Could Not Save “%s”"), name);
       show_error (self, heading,
@@ -613,7 +673,7 @@ load_settings (TfWindow *self)
 
 /* Accessors for the tests */
 
-TfProportionForm *
+TfAnalysisForm *
 tf_window_get_form (TfWindow *self)
 {
   return self->form;
@@ -716,7 +776,7 @@ tf_window_class_init (TfWindowClass *klass)
   object_class->finalize = tf_window_finalize;
   window_class->close_request = tf_window_close_request;
 
-  g_type_ensure (TF_TYPE_PROPORTION_FORM);
+  g_type_ensure (TF_TYPE_ANALYSIS_FORM);
   g_type_ensure (TF_TYPE_PLOT_VIEW);
   g_type_ensure (TF_TYPE_RESULT_LIST);
   g_type_ensure (TF_TYPE_EXPLANATION_PANE);
@@ -753,7 +813,7 @@ tf_window_init (TfWindow *self)
   load_settings (self);
 
   self->analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
-  tf_proportion_form_set_analysis (self->form, self->analysis);
+  tf_analysis_form_set_analysis (self->form, self->analysis);
   recompute (self);
   update_title (self);
 }
