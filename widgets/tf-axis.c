@@ -20,6 +20,14 @@ tf_plot_area_map_y (const TfPlotArea *area, double value)
   return area->y + area->height - (span > 0 ? (value - area->y_lo) / span : 0.5) * area->height;
 }
 
+double
+tf_plot_area_unmap_x (const TfPlotArea *area, double x)
+{
+  double c = area->width > 0 ? area->x_lo + (x - area->x) / area->width * (area->x_hi - area->x_lo)
+                             : area->x_lo;
+  return area->x_log ? pow (10.0, c) : c;
+}
+
 /* Heckbert (1990), "Nice numbers for graph labels", Graphics Gems I, pp. 61-63. */
 double
 tf_nice_number (double x, gboolean round)
@@ -77,6 +85,46 @@ tf_ticks_compute (TfTicks *ticks, double lo, double hi, guint target, gboolean l
   ticks->step = step;
   ticks->n = last + eps >= first ? (guint) floor ((last - first) / step + 0.5) + 1 : 0;
   ticks->n_frac = (int) MAX (-floor (log10 (step) + 1e-9), 0);
+  ticks->log = FALSE;
+  ticks->minor = FALSE;
+}
+
+/* Heckbert (1990) nice numbers applied to the exponent: decade steps of 1, 2, 5, 10... */
+void
+tf_ticks_compute_log (TfTicks *ticks, double lo10, double hi10, guint target, gboolean loose)
+{
+  double step, first, last;
+
+  if (!isfinite (lo10) || !isfinite (hi10))
+    lo10 = -1, hi10 = 1;
+  if (hi10 < lo10)
+    {
+      double t = lo10;
+      lo10 = hi10;
+      hi10 = t;
+    }
+  if (hi10 - lo10 < 1e-9)
+    {
+      lo10 -= 0.5;
+      hi10 += 0.5;
+    }
+  target = CLAMP (target, 2, 12);
+  step = MAX (1.0, tf_nice_number ((hi10 - lo10) / (target - 1), TRUE));
+  if (loose)
+    {
+      lo10 = floor (lo10 / step + 1e-9) * step;
+      hi10 = ceil (hi10 / step - 1e-9) * step;
+    }
+  first = ceil (lo10 / step - 1e-9) * step;
+  last = floor (hi10 / step + 1e-9) * step;
+  ticks->lo = lo10;
+  ticks->hi = hi10;
+  ticks->first = first;
+  ticks->step = step;
+  ticks->n = last + 1e-9 >= first ? (guint) floor ((last - first) / step + 0.5) + 1 : 0;
+  ticks->n_frac = 0;
+  ticks->log = TRUE;
+  ticks->minor = step == 1 && hi10 - lo10 <= 6.5;
 }
 
 double
@@ -93,7 +141,19 @@ char *
 tf_ticks_label (const TfTicks *ticks, guint i)
 {
   double v = tf_ticks_value (ticks, i);
-  g_autofree char *text = g_strdup_printf ("%.*f", ticks->n_frac, fabs (v));
+  g_autofree char *text = NULL;
+
+  if (ticks->log)
+    {
+      int k = (int) lround (v);
+
+      if (k >= -3 && k <= 3)
+        return g_strdup_printf ("%.*f", MAX (-k, 0), pow (10.0, k));
+      if (k < 0)
+        return g_strdup_printf ("10<sup>\u2212%d</sup>", -k);
+      return g_strdup_printf ("10<sup>%d</sup>", k);
+    }
+  text = g_strdup_printf ("%.*f", ticks->n_frac, fabs (v));
 
   if (v < 0)
     return g_strconcat ("\u2212", text, NULL);
@@ -136,9 +196,27 @@ double
 tf_axis_bottom_extent (cairo_t *cr, const TfFigureTheme *theme, const char *label_markup)
 {
   g_autoptr (PangoLayout) digits = tf_figure_theme_layout (cr, theme, theme->text_size, "0.9");
-  double tick_h, label_h = 0;
+  double tick_h;
 
   tf_figure_layout_size (digits, NULL, &tick_h);
+  return tf_axis_bottom_extent_ticks (cr, theme, NULL, label_markup) + tick_h;
+}
+
+double
+tf_axis_bottom_extent_ticks (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
+                             const char *label_markup)
+{
+  double tick_h = 0, label_h = 0;
+
+  for (guint i = 0; ticks && i < ticks->n; i++)
+    {
+      g_autofree char *text = tf_ticks_label (ticks, i);
+      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
+      double h;
+
+      tf_figure_layout_size (layout, NULL, &h);
+      tick_h = MAX (tick_h, h);
+    }
   if (label_markup)
     {
       g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
@@ -154,6 +232,69 @@ draw_layout_at (cairo_t *cr, PangoLayout *layout, double x, double y)
 {
   cairo_move_to (cr, x, y);
   pango_cairo_show_layout (cr, layout);
+}
+
+/* Minor ticks of a log axis at 2..9 times each decade inside [lo, hi]; calls back with
+ * each coordinate. */
+static guint
+minor_ticks (const TfTicks *ticks, double *out, guint max)
+{
+  guint n = 0;
+
+  if (!ticks->log || !ticks->minor)
+    return 0;
+  for (double d = floor (ticks->lo); d < ticks->hi && n < max; d += 1)
+    for (int m = 2; m <= 9 && n < max; m++)
+      {
+        double c = d + log10 (m);
+        if (c >= ticks->lo - 1e-9 && c <= ticks->hi + 1e-9)
+          out[n++] = c;
+      }
+  return n;
+}
+
+static void
+draw_bottom_ticks (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                   const TfTicks *ticks)
+{
+  double base = area->y + area->height;
+  double tick = tf_figure_theme_pt (theme, theme->tick_length);
+  double minor[64];
+  guint n_minor = minor_ticks (ticks, minor, G_N_ELEMENTS (minor));
+
+  for (guint i = 0; i < ticks->n; i++)
+    {
+      double x = tf_plot_area_map_x (area, tf_ticks_value (ticks, i));
+      cairo_move_to (cr, x, base);
+      cairo_line_to (cr, x, base + tick);
+    }
+  cairo_stroke (cr);
+  for (guint i = 0; i < n_minor; i++)
+    {
+      double x = tf_plot_area_map_x (area, minor[i]);
+      cairo_move_to (cr, x, base);
+      cairo_line_to (cr, x, base + tick * 0.55);
+    }
+  cairo_stroke (cr);
+}
+
+void
+tf_axis_draw_bottom_bare (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                          const TfTicks *ticks)
+{
+  double base = area->y + area->height;
+
+  cairo_save (cr);
+  tf_figure_theme_set_source (cr, &theme->foreground);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
+  cairo_set_dash (cr, NULL, 0, 0);
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
+  cairo_move_to (cr, area->x, base);
+  cairo_line_to (cr, area->x + area->width, base);
+  cairo_stroke (cr);
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+  draw_bottom_ticks (cr, theme, area, ticks);
+  cairo_restore (cr);
 }
 
 void
@@ -176,6 +317,7 @@ tf_axis_draw_bottom (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *
   cairo_stroke (cr);
 
   cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+  draw_bottom_ticks (cr, theme, area, ticks);
   for (guint i = 0; i < ticks->n; i++)
     {
       double v = tf_ticks_value (ticks, i);
@@ -184,9 +326,6 @@ tf_axis_draw_bottom (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *
       g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
       double w, h;
 
-      cairo_move_to (cr, x, base);
-      cairo_line_to (cr, x, base + tick);
-      cairo_stroke (cr);
       tf_figure_layout_size (layout, &w, &h);
       tick_h = MAX (tick_h, h);
       draw_layout_at (cr, layout, x - w / 2, label_top);
@@ -242,6 +381,18 @@ tf_axis_draw_left (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *ar
       widest = MAX (widest, w);
       draw_layout_at (cr, layout, area->x - tick - gap - w, y - h / 2);
     }
+  {
+    double minor[64];
+    guint n_minor = minor_ticks (ticks, minor, G_N_ELEMENTS (minor));
+
+    for (guint i = 0; i < n_minor; i++)
+      {
+        double y = tf_plot_area_map_y (area, minor[i]);
+        cairo_move_to (cr, area->x, y);
+        cairo_line_to (cr, area->x - tick * 0.55, y);
+      }
+    cairo_stroke (cr);
+  }
 
   if (label_markup)
     {

@@ -15,17 +15,10 @@
 
 G_DEFINE_QUARK (tf-figure-error-quark, tf_figure_error)
 
-static const char *const figure_kinds[] = {
-  "densities", "sensitivity", "sample-size", "null-distribution", "model-probabilities",
-};
-
 gboolean
 tf_figure_kind_is_known (const char *kind)
 {
-  for (guint i = 0; i < G_N_ELEMENTS (figure_kinds); i++)
-    if (g_strcmp0 (kind, figure_kinds[i]) == 0)
-      return TRUE;
-  return FALSE;
+  return tf_figure_kind_from_string (kind, NULL);
 }
 
 gboolean
@@ -103,25 +96,40 @@ png_set_resolution (GByteArray *png, double dpi)
 }
 
 /* Draws one figure kind on cr, in a box of width × height user units at scale units a
- * point. Only the densities figure exists so far. */
+ * point; a kind that does not apply draws its reason and sets NOT_APPLICABLE with it. */
 static gboolean
 draw_kind (cairo_t *cr, const char *kind, double width, double height, double scale,
-           const TfAnalysis *analysis, GError **error)
+           const TfAnalysis *analysis, const TfFigureOptions *options, GError **error)
 {
-  if (g_str_equal (kind, "densities"))
+  g_autofree char *why_not = NULL;
+  TfFigureKind k;
+
+  if (!tf_figure_kind_from_string (kind, &k))
     {
-      tf_figure_draw_densities (cr, width, height, scale, analysis, TF_FIGURE_STYLE_LIGHT);
-      return TRUE;
+      g_set_error (error, TF_FIGURE_ERROR, TF_FIGURE_ERROR_UNKNOWN_KIND,
+                   _("“%s” is not a figure kind."), kind);
+      return FALSE;
     }
+  if (tf_figure_draw_kind (cr, k, width, height, scale, analysis, options, NULL, &why_not))
+    return TRUE;
   g_set_error (error, TF_FIGURE_ERROR, TF_FIGURE_ERROR_NOT_APPLICABLE,
-               _("The “%s” figure is not available in this version of Twofold; “densities” is."),
-               kind);
+               /* TRANSLATORS: %s is a figure kind ("sensitivity"), then the reason */
+               _("The “%s” figure does not apply: %s"), kind,
+               why_not && *why_not ? why_not : _("no reason given."));
   return FALSE;
 }
 
 gboolean
 tf_figure_export (const TfAnalysis *analysis, const char *kind, const char *filename,
                   double width_mm, double height_mm, double dpi, GError **error)
+{
+  return tf_figure_export_full (analysis, kind, filename, width_mm, height_mm, dpi, NULL, error);
+}
+
+gboolean
+tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char *filename,
+                       double width_mm, double height_mm, double dpi,
+                       const TfFigureOptions *options, GError **error)
 {
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
   g_autoptr (GByteArray) bytes = g_byte_array_new ();
@@ -201,7 +209,7 @@ tf_figure_export (const TfAnalysis *analysis, const char *kind, const char *file
       cairo_set_source_rgb (cr, 1, 1, 1);
       cairo_paint (cr);
     }
-  drawn = draw_kind (cr, kind, w, h, scale, analysis, error);
+  drawn = draw_kind (cr, kind, w, h, scale, analysis, options, error);
   cairo_destroy (cr);
   if (format == TF_FIGURE_FORMAT_PNG && drawn)
     {

@@ -6,6 +6,7 @@
 
 #include <glib.h>
 #include "tf-analysis.h"
+#include "tf-figure.h"
 
 G_BEGIN_DECLS
 
@@ -42,5 +43,9 @@ gboolean tf_figure_kind_is_known (const char *kind);
  * millimetres asked. Sizes from 10 to 1000 mm, dpi from 50 to 2400. */
 gboolean tf_figure_export (const TfAnalysis *analysis, const char *kind, const char *filename,
                            double width_mm, double height_mm, double dpi, GError **error);
+/* The same in a style and with an evidence scale (options NULL: light, Kass & Raftery). */
+gboolean tf_figure_export_full (const TfAnalysis *analysis, const char *kind,
+                                const char *filename, double width_mm, double height_mm,
+                                double dpi, const TfFigureOptions *options, GError **error);
 
 G_END_DECLS

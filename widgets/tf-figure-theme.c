@@ -15,6 +15,8 @@ static const TfColour light_series[TF_N_SERIES] = {
   [TF_SERIES_POSTERIOR] = OKABE_ITO (0x0072B2),   /* blue */
   [TF_SERIES_LIKELIHOOD] = OKABE_ITO (0x009E73),  /* bluish green */
   [TF_SERIES_NULL] = { 0.0, 0.0, 0.0, 0.80 },     /* black */
+  [TF_SERIES_EVIDENCE] = OKABE_ITO (0x0072B2),    /* blue */
+  [TF_SERIES_TAIL] = OKABE_ITO (0xD55E00),        /* vermillion */
 };
 
 /* On a dark ground the lighter members of the same palette. */
@@ -23,6 +25,19 @@ static const TfColour dark_series[TF_N_SERIES] = {
   [TF_SERIES_POSTERIOR] = OKABE_ITO (0x56B4E9),   /* sky blue */
   [TF_SERIES_LIKELIHOOD] = OKABE_ITO (0x009E73),  /* bluish green */
   [TF_SERIES_NULL] = { 1.0, 1.0, 1.0, 0.85 },
+  [TF_SERIES_EVIDENCE] = OKABE_ITO (0x56B4E9),    /* sky blue */
+  [TF_SERIES_TAIL] = OKABE_ITO (0xE69F00),        /* orange */
+};
+
+/* Print: greys a photocopier keeps apart, with dash patterns and markers carrying the
+ * difference as well. */
+static const TfColour print_series[TF_N_SERIES] = {
+  [TF_SERIES_PRIOR] = { 0.45, 0.45, 0.45, 1.0 },
+  [TF_SERIES_POSTERIOR] = { 0.0, 0.0, 0.0, 1.0 },
+  [TF_SERIES_LIKELIHOOD] = { 0.30, 0.30, 0.30, 1.0 },
+  [TF_SERIES_NULL] = { 0.0, 0.0, 0.0, 0.85 },
+  [TF_SERIES_EVIDENCE] = { 0.0, 0.0, 0.0, 1.0 },
+  [TF_SERIES_TAIL] = { 0.25, 0.25, 0.25, 1.0 },
 };
 
 void
@@ -45,7 +60,10 @@ tf_figure_theme_init (TfFigureTheme *theme, TfFigureStyle style, double scale)
       theme->muted = (TfColour) { 0.13, 0.13, 0.13, 0.62 };
     }
   for (guint i = 0; i < TF_N_SERIES; i++)
-    theme->series[i] = dark ? dark_series[i] : light_series[i];
+    theme->series[i] = dark ? dark_series[i]
+                       : style == TF_FIGURE_STYLE_PRINT ? print_series[i] : light_series[i];
+  theme->reference = theme->foreground;
+  theme->reference.a = 0.38;
 
   theme->font_family = "Sans";
   theme->text_size = 8.0;
@@ -99,7 +117,13 @@ tf_figure_theme_set_series_line (cairo_t *cr, const TfFigureTheme *theme, TfSeri
         cairo_set_dash (cr, dash, G_N_ELEMENTS (dash), 0);
       }
       break;
+    case TF_SERIES_EVIDENCE:
+      cairo_set_line_width (cr, 1.5 * s);
+      cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
+      cairo_set_dash (cr, NULL, 0, 0);
+      break;
     case TF_SERIES_NULL:
+    case TF_SERIES_TAIL:
     case TF_N_SERIES:
     default:
       cairo_set_line_width (cr, 0.9 * s);
@@ -107,6 +131,96 @@ tf_figure_theme_set_series_line (cairo_t *cr, const TfFigureTheme *theme, TfSeri
       cairo_set_dash (cr, NULL, 0, 0);
       break;
     }
+}
+
+TfMarker
+tf_figure_theme_series_marker (const TfFigureTheme *theme, TfSeries series)
+{
+  if (theme->style != TF_FIGURE_STYLE_PRINT)
+    return TF_MARKER_NONE;
+  switch (series)
+    {
+    case TF_SERIES_PRIOR:
+      return TF_MARKER_SQUARE;
+    case TF_SERIES_POSTERIOR:
+      return TF_MARKER_CIRCLE;
+    case TF_SERIES_LIKELIHOOD:
+      return TF_MARKER_TRIANGLE;
+    case TF_SERIES_EVIDENCE:
+      return TF_MARKER_DIAMOND;
+    case TF_SERIES_NULL:
+    case TF_SERIES_TAIL:
+    case TF_N_SERIES:
+    default:
+      return TF_MARKER_NONE;
+    }
+}
+
+void
+tf_figure_theme_draw_marker (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                             double x, double y)
+{
+  double r = tf_figure_theme_pt (theme, 2.1);
+
+  cairo_save (cr);
+  cairo_new_path (cr);
+  switch (tf_figure_theme_series_marker (theme, series))
+    {
+    case TF_MARKER_CIRCLE:
+      cairo_arc (cr, x, y, r, 0, 2 * G_PI);
+      break;
+    case TF_MARKER_SQUARE:
+      cairo_rectangle (cr, x - r * 0.85, y - r * 0.85, 1.7 * r, 1.7 * r);
+      break;
+    case TF_MARKER_TRIANGLE:
+      cairo_move_to (cr, x, y - 1.1 * r);
+      cairo_line_to (cr, x + r, y + 0.75 * r);
+      cairo_line_to (cr, x - r, y + 0.75 * r);
+      cairo_close_path (cr);
+      break;
+    case TF_MARKER_DIAMOND:
+      cairo_move_to (cr, x, y - 1.2 * r);
+      cairo_line_to (cr, x + r, y);
+      cairo_line_to (cr, x, y + 1.2 * r);
+      cairo_line_to (cr, x - r, y);
+      cairo_close_path (cr);
+      break;
+    case TF_MARKER_NONE:
+    default:
+      cairo_restore (cr);
+      return;
+    }
+  tf_figure_theme_set_source (cr, &theme->background);
+  cairo_fill_preserve (cr);
+  tf_figure_theme_set_source (cr, &theme->series[series]);
+  cairo_set_dash (cr, NULL, 0, 0);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, 0.9));
+  cairo_stroke (cr);
+  cairo_restore (cr);
+}
+
+void
+tf_figure_theme_fill_hatched (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                              double alpha)
+{
+  double x0, y0, x1, y1, gap = tf_figure_theme_pt (theme, 3.0);
+
+  cairo_save (cr);
+  tf_figure_theme_set_source_alpha (cr, &theme->series[series], alpha);
+  cairo_fill_preserve (cr);
+  cairo_path_extents (cr, &x0, &y0, &x1, &y1);
+  cairo_clip (cr);
+  tf_figure_theme_set_source_alpha (cr, &theme->series[series], 0.75);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, 0.5));
+  cairo_set_dash (cr, NULL, 0, 0);
+  for (double d = x0 - (y1 - y0); d < x1; d += gap)
+    {
+      cairo_move_to (cr, d, y1);
+      cairo_line_to (cr, d + (y1 - y0), y0);
+    }
+  cairo_stroke (cr);
+  cairo_restore (cr);
+  cairo_new_path (cr);
 }
 
 PangoLayout *

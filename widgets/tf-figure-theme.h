@@ -20,8 +20,20 @@ typedef enum {
   TF_SERIES_POSTERIOR,
   TF_SERIES_LIKELIHOOD,
   TF_SERIES_NULL,
+  TF_SERIES_EVIDENCE,           /* BF and P(null | data) curves */
+  TF_SERIES_TAIL,               /* the outcomes counted in a p-value */
   TF_N_SERIES
 } TfSeries;
+
+/* Marker shapes, drawn along lines in the print style so that series differ by more
+ * than their grey and dash. */
+typedef enum {
+  TF_MARKER_NONE,
+  TF_MARKER_CIRCLE,
+  TF_MARKER_SQUARE,
+  TF_MARKER_TRIANGLE,
+  TF_MARKER_DIAMOND
+} TfMarker;
 
 typedef struct {
   TfFigureStyle style;
@@ -29,6 +41,7 @@ typedef struct {
   TfColour background;
   TfColour foreground;          /* text, axes */
   TfColour muted;               /* secondary text */
+  TfColour reference;           /* quiet reference lines and their labels */
   TfColour series[TF_N_SERIES];
   const char *font_family;
   double text_size;             /* pt: tick labels, legend */
@@ -51,6 +64,18 @@ void tf_figure_theme_set_source_alpha (cairo_t *cr, const TfColour *colour, doub
 
 /* Sets colour, width, dash pattern and caps of one series' line. */
 void tf_figure_theme_set_series_line (cairo_t *cr, const TfFigureTheme *theme, TfSeries series);
+
+/* The marker of a series in this style (TF_MARKER_NONE unless the style is print). */
+TfMarker tf_figure_theme_series_marker (const TfFigureTheme *theme, TfSeries series);
+/* Draws the series' marker centred at x, y (user units), solid line, filled with the
+ * background so that it reads over the line. */
+void tf_figure_theme_draw_marker (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                                  double x, double y);
+
+/* Fills the current path with the series' colour at alpha and diagonal hatching over it
+ * (so that a shaded area reads without its colour); clears the path. */
+void tf_figure_theme_fill_hatched (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                                   double alpha);
 
 /* A layout for Pango markup at size_pt points in the theme's font. */
 PangoLayout *tf_figure_theme_layout (cairo_t *cr, const TfFigureTheme *theme,

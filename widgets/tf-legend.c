@@ -96,6 +96,13 @@ count_hits (const TfPolyline *lines, guint n_lines,
 }
 
 gboolean
+tf_legend_box_is_clear (const TfPolyline *lines, guint n_lines, double left, double top,
+                        double right, double bottom)
+{
+  return count_hits (lines, n_lines, left, top, right, bottom) == 0;
+}
+
+gboolean
 tf_legend_place (const TfPlotArea *area, double width, double height, double inset,
                  const TfPolyline *lines, guint n_lines, double *x, double *y)
 {
@@ -169,10 +176,41 @@ tf_legend_draw (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *en
         pango_layout_iter_free (iter);
       }
       line_y = cy + lh / 2;
-      tf_figure_theme_set_series_line (cr, theme, entries[i].series);
-      cairo_move_to (cr, cx, line_y);
-      cairo_line_to (cr, cx + swatch, line_y);
-      cairo_stroke (cr);
+      switch (entries[i].swatch)
+        {
+        case TF_SWATCH_FILLED:
+        case TF_SWATCH_OUTLINE:
+        case TF_SWATCH_HATCHED:
+          {
+            double bh = lh * 0.62, bw = swatch * 0.7, bx = cx + (swatch - bw) / 2;
+
+            cairo_new_path (cr);
+            cairo_rectangle (cr, bx, line_y - bh / 2, bw, bh);
+            if (entries[i].swatch == TF_SWATCH_FILLED)
+              {
+                tf_figure_theme_set_source (cr, &theme->series[entries[i].series]);
+                cairo_fill (cr);
+              }
+            else if (entries[i].swatch == TF_SWATCH_HATCHED)
+              tf_figure_theme_fill_hatched (cr, theme, entries[i].series, 0.18);
+            else
+              {
+                tf_figure_theme_set_source (cr, &theme->series[entries[i].series]);
+                cairo_set_dash (cr, NULL, 0, 0);
+                cairo_set_line_width (cr, tf_figure_theme_pt (theme, 1.2));
+                cairo_stroke (cr);
+              }
+          }
+          break;
+        case TF_SWATCH_LINE:
+        default:
+          tf_figure_theme_set_series_line (cr, theme, entries[i].series);
+          cairo_move_to (cr, cx, line_y);
+          cairo_line_to (cr, cx + swatch, line_y);
+          cairo_stroke (cr);
+          tf_figure_theme_draw_marker (cr, theme, entries[i].series, cx + swatch / 2, line_y);
+          break;
+        }
 
       tf_figure_theme_set_source (cr, &theme->foreground);
       cairo_move_to (cr, cx + swatch + tf_figure_theme_pt (theme, 4.0), cy);

@@ -8,9 +8,17 @@
 
 G_BEGIN_DECLS
 
+typedef enum {
+  TF_SWATCH_LINE,               /* a sample of the series' line (and its print marker) */
+  TF_SWATCH_FILLED,             /* a solid box */
+  TF_SWATCH_OUTLINE,            /* an empty box */
+  TF_SWATCH_HATCHED             /* a light box with hatching: a shaded area */
+} TfSwatch;
+
 typedef struct {
   TfSeries series;
   const char *markup;           /* Pango markup */
+  TfSwatch swatch;
 } TfLegendEntry;
 
 /* A polyline in user units: the data a legend must not cover. */
@@ -30,6 +38,10 @@ void tf_legend_measure (cairo_t *cr, const TfFigureTheme *theme, const TfLegendE
  * Returns FALSE when every place hides some data. */
 gboolean tf_legend_place (const TfPlotArea *area, double width, double height, double inset,
                           const TfPolyline *lines, guint n_lines, double *x, double *y);
+
+/* TRUE when no polyline enters the box (user units): a place for a label. */
+gboolean tf_legend_box_is_clear (const TfPolyline *lines, guint n_lines, double left,
+                                 double top, double right, double bottom);
 
 void tf_legend_draw (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
                      guint n_entries, guint columns, double x, double y);

@@ -1,0 +1,346 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-figure-kinds.c: the figure kinds by name, a kind's curves computed once for an
+ * analysis (TfFigure), and the crosshair readout.
+ */
+#include <math.h>
+#include <string.h>
+#include <glib/gi18n-lib.h>
+#include "tf-figure-private.h"
+
+#define DENSITY_POINTS 401
+#define EVIDENCE_POINTS 256
+#define NULL_POINTS 401
+
+struct _TfFigure {
+  TfFigureKind kind;
+  TfDensityCurves *densities;
+  double null_mass;             /* P(null | data) beside a point null's spike, or NAN */
+  TfEvidenceCurve *evidence;
+  TfNullDistribution *null_distribution;
+  TfModelProbabilities *models;
+  char *x_markup;               /* the x axis's name for the readout */
+};
+
+static const char *const kind_names[TF_N_FIGURE_KINDS] = {
+  [TF_FIGURE_DENSITIES] = "densities",
+  [TF_FIGURE_SENSITIVITY] = "sensitivity",
+  [TF_FIGURE_SAMPLE_SIZE] = "sample-size",
+  [TF_FIGURE_NULL_DISTRIBUTION] = "null-distribution",
+  [TF_FIGURE_MODEL_PROBABILITIES] = "model-probabilities",
+};
+
+const char *
+tf_figure_kind_to_string (TfFigureKind kind)
+{
+  g_return_val_if_fail (kind < TF_N_FIGURE_KINDS, NULL);
+  return kind_names[kind];
+}
+
+gboolean
+tf_figure_kind_from_string (const char *name, TfFigureKind *kind)
+{
+  for (guint i = 0; i < TF_N_FIGURE_KINDS; i++)
+    if (g_strcmp0 (name, kind_names[i]) == 0)
+      {
+        if (kind)
+          *kind = (TfFigureKind) i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
+const char *
+tf_figure_kind_label (TfFigureKind kind)
+{
+  switch (kind)
+    {
+    case TF_FIGURE_DENSITIES:
+      return _("Prior, likelihood and posterior");
+    case TF_FIGURE_SENSITIVITY:
+      return _("Evidence against the prior’s scale");
+    case TF_FIGURE_SAMPLE_SIZE:
+      return _("Evidence against the sample size");
+    case TF_FIGURE_NULL_DISTRIBUTION:
+      return _("Null distribution and p-value");
+    case TF_FIGURE_MODEL_PROBABILITIES:
+      return _("Model probabilities");
+    case TF_N_FIGURE_KINDS:
+    default:
+      return "";
+    }
+}
+
+gboolean
+tf_figure_style_from_string (const char *name, TfFigureStyle *style)
+{
+  static const char *const names[] = { "light", "dark", "print" };
+
+  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
+    if (g_strcmp0 (name, names[i]) == 0)
+      {
+        *style = (TfFigureStyle) i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
+gboolean
+tf_evidence_scale_from_string (const char *name, TfEvidenceScale *scale)
+{
+  static const char *const names[] = { "kass-raftery", "jeffreys", "none" };
+
+  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
+    if (g_strcmp0 (name, names[i]) == 0)
+      {
+        *scale = (TfEvidenceScale) i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
+static void
+set_reason (char **why_not, char *reason)
+{
+  if (reason == NULL || *reason == '\0')
+    {
+      g_free (reason);
+      reason = g_strdup (_("This figure does not apply to this analysis."));
+    }
+  if (why_not)
+    *why_not = reason;
+  else
+    g_free (reason);
+}
+
+TfFigure *
+tf_figure_new (const TfAnalysis *analysis, TfFigureKind kind, char **why_not)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfFigure) figure = NULL;
+  char *reason = NULL;
+
+  g_return_val_if_fail (kind < TF_N_FIGURE_KINDS, NULL);
+  if (analysis == NULL)
+    {
+      set_reason (why_not, g_strdup (_("There is no analysis.")));
+      return NULL;
+    }
+  figure = g_new0 (TfFigure, 1);
+  figure->kind = kind;
+  figure->null_mass = NAN;
+  switch (kind)
+    {
+    case TF_FIGURE_DENSITIES:
+      figure->densities = tf_density_curves_new (analysis, DENSITY_POINTS, problems);
+      if (figure->densities && analysis->null_kind == TF_NULL_POINT)
+        {
+          g_autoptr (TfResults) results = tf_analysis_compute (analysis, NULL);
+          double p;
+
+          if (results && tf_results_get (results, "posterior_null", &p) && isfinite (p))
+            figure->null_mass = p;
+        }
+      if (figure->densities == NULL && problems->len == 0)
+        /* TRANSLATORS: %s is a design, "one proportion" */
+        reason = g_strdup_printf (_("The densities figure is not available for the %s design in this version."),
+                                  tf_design_label (analysis->design));
+      break;
+    case TF_FIGURE_SENSITIVITY:
+      figure->evidence = tf_sensitivity_curve_new (analysis, EVIDENCE_POINTS, problems, &reason);
+      break;
+    case TF_FIGURE_SAMPLE_SIZE:
+      figure->evidence = tf_sample_size_curve_new (analysis, EVIDENCE_POINTS, problems, &reason);
+      break;
+    case TF_FIGURE_NULL_DISTRIBUTION:
+      figure->null_distribution = tf_null_distribution_new (analysis, NULL_POINTS, problems,
+                                                            &reason);
+      break;
+    case TF_FIGURE_MODEL_PROBABILITIES:
+      figure->models = tf_model_probabilities_new (analysis, problems, &reason);
+      break;
+    case TF_N_FIGURE_KINDS:
+    default:
+      break;
+    }
+  if (figure->densities || figure->evidence || figure->null_distribution || figure->models)
+    {
+      if (figure->densities)
+        figure->x_markup = g_strdup_printf ("<i>%s</i>", figure->densities->parameter_markup
+                                                         ? figure->densities->parameter_markup : "θ");
+      else if (figure->evidence)
+        figure->x_markup = g_strdup (figure->evidence->x_markup ? figure->evidence->x_markup : "x");
+      else if (figure->null_distribution)
+        figure->x_markup = g_strdup (figure->null_distribution->x_markup
+                                     ? figure->null_distribution->x_markup : "x");
+      g_free (reason);
+      return g_steal_pointer (&figure);
+    }
+  if (reason == NULL && problems->len > 0)
+    {
+      const TfProblem *problem = g_ptr_array_index (problems, 0);
+      reason = g_strdup (problem->message);
+    }
+  set_reason (why_not, reason);
+  return NULL;
+}
+
+void
+tf_figure_free (TfFigure *figure)
+{
+  if (figure == NULL)
+    return;
+  tf_density_curves_free (figure->densities);
+  tf_evidence_curve_free (figure->evidence);
+  tf_null_distribution_free (figure->null_distribution);
+  tf_model_probabilities_free (figure->models);
+  g_free (figure->x_markup);
+  g_free (figure);
+}
+
+TfFigureKind
+tf_figure_get_kind (const TfFigure *figure)
+{
+  return figure->kind;
+}
+
+gboolean
+tf_figure_draw (const TfFigure *figure, cairo_t *cr, double width, double height,
+                double scale, const TfFigureOptions *options, TfPlotArea *area_out)
+{
+  g_return_val_if_fail (figure != NULL, FALSE);
+  switch (figure->kind)
+    {
+    case TF_FIGURE_DENSITIES:
+      return tf_figure_draw_density_curves (cr, width, height, scale, figure->densities,
+                                            figure->null_mass, options, area_out);
+    case TF_FIGURE_SENSITIVITY:
+      return tf_figure_draw_sensitivity (cr, width, height, scale, figure->evidence, options,
+                                         area_out);
+    case TF_FIGURE_SAMPLE_SIZE:
+      return tf_figure_draw_sample_size (cr, width, height, scale, figure->evidence, options,
+                                         area_out);
+    case TF_FIGURE_NULL_DISTRIBUTION:
+      return tf_figure_draw_null_distribution (cr, width, height, scale,
+                                               figure->null_distribution, options, area_out);
+    case TF_FIGURE_MODEL_PROBABILITIES:
+      return tf_figure_draw_model_probabilities (cr, width, height, scale, figure->models,
+                                                 options, area_out);
+    case TF_N_FIGURE_KINDS:
+    default:
+      return FALSE;
+    }
+}
+
+gboolean
+tf_figure_draw_kind (cairo_t *cr, TfFigureKind kind, double width, double height,
+                     double scale, const TfAnalysis *analysis, const TfFigureOptions *options,
+                     TfPlotArea *area_out, char **why_not)
+{
+  g_autofree char *reason = NULL;
+  g_autoptr (TfFigure) figure = tf_figure_new (analysis, kind, &reason);
+
+  if (figure == NULL)
+    {
+      tf_figure_draw_message (cr, width, height, scale, tf_fig_options (options)->style,
+                              _("Nothing to draw"), reason);
+      if (why_not)
+        *why_not = g_steal_pointer (&reason);
+      return FALSE;
+    }
+  return tf_figure_draw (figure, cr, width, height, scale, options, area_out);
+}
+
+/* Index of the grid point nearest x in an increasing grid (bisection). */
+static guint
+nearest (const double *grid, guint n, double x)
+{
+  guint lo = 0, hi = n - 1;
+
+  if (x <= grid[0])
+    return 0;
+  if (x >= grid[n - 1])
+    return n - 1;
+  while (hi - lo > 1)
+    {
+      guint mid = (lo + hi) / 2;
+      if (grid[mid] <= x)
+        lo = mid;
+      else
+        hi = mid;
+    }
+  return x - grid[lo] <= grid[hi] - x ? lo : hi;
+}
+
+gboolean
+tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
+                   TfFigureReading *reading)
+{
+  double x;
+  guint i;
+
+  g_return_val_if_fail (figure != NULL && area != NULL && reading != NULL, FALSE);
+  memset (reading, 0, sizeof *reading);
+  if (px < area->x || px > area->x + area->width)
+    return FALSE;
+  x = tf_plot_area_unmap_x (area, px);
+  reading->x = x;
+  reading->x_markup = figure->x_markup;
+  switch (figure->kind)
+    {
+    case TF_FIGURE_DENSITIES:
+      {
+        const TfDensityCurves *c = figure->densities;
+        i = nearest (c->x, c->n, x);
+        reading->names[0] = _("posterior");
+        reading->values[0] = c->posterior[i];
+        reading->names[1] = _("prior");
+        reading->values[1] = c->prior[i];
+        reading->names[2] = _("likelihood, scaled");
+        reading->values[2] = c->likelihood[i];
+        reading->n = 3;
+      }
+      return TRUE;
+    case TF_FIGURE_SENSITIVITY:
+    case TF_FIGURE_SAMPLE_SIZE:
+      {
+        const TfEvidenceCurve *c = figure->evidence;
+        i = nearest (c->x, c->n, x);
+        reading->x = c->x[i];
+        reading->names[0] = "BF<sub>01</sub>";
+        reading->values[0] = exp (c->log_bf01[i]);
+        reading->names[1] = _("P(H<sub>0</sub> | data)");
+        reading->values[1] = c->posterior_null[i];
+        reading->n = 2;
+      }
+      return TRUE;
+    case TF_FIGURE_NULL_DISTRIBUTION:
+      {
+        const TfNullDistribution *d = figure->null_distribution;
+        i = nearest (d->x, d->n, x);
+        reading->x = d->x[i];
+        reading->names[0] = d->discrete ? _("probability") : _("density");
+        reading->values[0] = d->mass[i];
+        reading->n = 1;
+      }
+      return TRUE;
+    case TF_FIGURE_MODEL_PROBABILITIES:
+    case TF_N_FIGURE_KINDS:
+    default:
+      return FALSE;
+    }
+}
+
+char *
+tf_figure_reading_markup (const TfFigureReading *reading)
+{
+  g_autoptr (GString) text = g_string_new (NULL);
+  g_autofree char *x = tf_fig_number (reading->x, 4);
+
+  g_string_append_printf (text, "%s = %s", reading->x_markup ? reading->x_markup : "x", x);
+  for (guint i = 0; i < reading->n && i < TF_FIGURE_READING_MAX; i++)
+    {
+      g_autofree char *v = tf_fig_number (reading->values[i], 3);
+      g_string_append_printf (text, "   %s %s", reading->names[i], v);
+    }
+  return g_string_free (g_steal_pointer (&text), FALSE);
+}

@@ -1,0 +1,76 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-figure-private.h: drawing pieces the figure kinds share (the figure library only).
+ */
+#pragma once
+
+#include <pango/pangocairo.h>
+#include "tf-figure.h"
+#include "tf-axis.h"
+#include "tf-figure-theme.h"
+#include "tf-legend.h"
+
+G_BEGIN_DECLS
+
+#define TF_FIG_PAD_PT 6.0              /* between the figure's edge and anything drawn */
+#define TF_FIG_X_TICK_SPACING_PT 54.0
+#define TF_FIG_Y_TICK_SPACING_PT 30.0
+
+/* A polyline in user units. */
+typedef struct {
+  double *x;
+  double *y;
+  guint n;
+} TfFigPoints;
+
+void tf_fig_points_clear (TfFigPoints *p);
+/* Data (x, y) mapped into area; non-finite y become NAN (a gap in the line); values off
+ * the top or bottom are held at the edge when clamp is TRUE. */
+void tf_fig_points_map (const TfPlotArea *area, const double *x, const double *y, guint n,
+                        gboolean clamp, TfFigPoints *out);
+/* Strokes a polyline in the series' style, broken at NAN; in print style, markers along
+ * it every ~40 pt. */
+void tf_fig_stroke_series (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                           const TfFigPoints *p);
+
+const TfFigureOptions *tf_fig_options (const TfFigureOptions *options);
+void tf_fig_begin (cairo_t *cr, const TfFigureTheme *theme, double width, double height);
+void tf_fig_message (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
+                     const char *title, const char *reason);
+
+/* Height of one line of markup at size points, user units. */
+double tf_fig_text_height (cairo_t *cr, const TfFigureTheme *theme, double size,
+                           const char *markup);
+double tf_fig_text_width (cairo_t *cr, const TfFigureTheme *theme, double size,
+                          const char *markup);
+/* Text with a halo of the background colour (legible over lines), top-left at x, y. */
+void tf_fig_text_halo (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
+                       double size, const char *markup, double x, double y);
+/* An arrow from (x0, y0) to (x1, y1), head at the end. */
+void tf_fig_arrow (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
+                   double x0, double y0, double x1, double y1);
+/* A round marker at data (x, y); filled or open (background inside). */
+void tf_fig_marker (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                    TfSeries series, double x_value, double y_value, gboolean filled);
+/* A vertical line from the base to the top of the area ending in an arrow head: a point
+ * mass, or a curve that goes on up. */
+void tf_fig_spike (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                   TfSeries series, double x_value);
+
+/* A number for a figure: digits significant figures, a true minus sign, and
+ * a × 10<sup>k</sup> exponent outside 10^-4 .. 10^6. Free with g_free. */
+char *tf_fig_number (double value, int digits);
+
+/* One plot area with a bottom and a left axis: margins first, then ticks that fit. The
+ * x axis is tight to [x_lo, x_hi] (log10 when x_log), the y axis loose from y_lo. */
+typedef struct {
+  TfPlotArea area;
+  TfTicks x_ticks;
+  TfTicks y_ticks;
+} TfFigLayout;
+
+void tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
+                           double top_extra, double right_extra, const char *x_label,
+                           const char *y_label, double x_lo, double x_hi, gboolean x_log,
+                           double y_lo, double y_hi, TfFigLayout *out);
+
+G_END_DECLS
