@@ -3,6 +3,8 @@
  */
 #include "tf-design.h"
 #include "tf-one-proportion.h"
+#include "tf-one-rate.h"
+#include "tf-two-rates.h"
 
 static const TfDesignClass one_proportion = {
   .design = TF_DESIGN_ONE_PROPORTION,
@@ -18,12 +20,14 @@ tf_design_class (TfDesign design)
     {
     case TF_DESIGN_ONE_PROPORTION:
       return &one_proportion;
+    case TF_DESIGN_ONE_RATE:
+      return &tf_one_rate_class;
+    case TF_DESIGN_TWO_RATES:
+      return &tf_two_rates_class;
     case TF_DESIGN_TWO_PROPORTIONS:
     case TF_DESIGN_ONE_MEAN:
     case TF_DESIGN_PAIRED_MEANS:
     case TF_DESIGN_TWO_MEANS:
-    case TF_DESIGN_ONE_RATE:
-    case TF_DESIGN_TWO_RATES:
     case TF_N_DESIGNS:
     default:
       return NULL;

@@ -1,0 +1,529 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-one-rate.c: k events over exposure E against λ = λ0, classical and Bayesian.
+ *
+ * The count is Poisson(λE). Classical: the exact test (minimum-likelihood rule), mid-p,
+ * score, Garwood's interval. Bayesian: λ ~ Gamma(α, β) under the alternative (shape α,
+ * rate β), posterior Gamma(α + k, β + E). An interval null [L, H] is tested by the
+ * prior's and posterior's mass inside against outside it (on the chosen side).
+ */
+#include "tf-one-rate.h"
+#include "tf-poisson.h"
+#include "tf-logspace.h"
+
+#include <math.h>
+#include <float.h>
+#include <glib/gi18n-lib.h>
+#include <gsl/gsl_cdf.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_sf_erf.h>
+
+#define TF_MAX_COUNT 1e15
+#define TF_MAX_SHAPE 1e15
+
+static gboolean
+is_whole (double v)
+{
+  return isfinite (v) && v == floor (v);
+}
+
+void
+tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems)
+{
+  const TfAnalysis *a = analysis;
+
+  if (!is_whole (a->events) || a->events < 0.0 || a->events > TF_MAX_COUNT)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", "Events",
+                                     _("Events must be a whole number from 0 to 10^15 (it is %g)."),
+                                     a->events));
+  if (!(isfinite (a->exposure) && a->exposure > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", "Exposure",
+                                     _("Exposure must be a finite number above 0 (it is %g)."),
+                                     a->exposure));
+  if (a->null_kind == TF_NULL_INTERVAL)
+    {
+      if (!(isfinite (a->null_low) && a->null_low > 0.0))
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "Low",
+                                         _("The lower end of the null interval (Low) must be a rate above 0 (it is %g)."),
+                                         a->null_low));
+      else if (!(isfinite (a->null_high) && a->null_high > a->null_low))
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "High",
+                                         _("The upper end of the null interval (High) must be finite and above Low (it is %g)."),
+                                         a->null_high));
+    }
+  else if (!(isfinite (a->null_value) && a->null_value > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Null", "Value",
+                                     _("The null rate (Value) must be a finite number above 0, in events per unit of exposure (it is %g)."),
+                                     a->null_value));
+  if (a->prior != TF_PRIOR_GAMMA)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "Prior",
+                                     _("The prior for a rate must be gamma (it is %s)."),
+                                     tf_prior_family_to_string (a->prior)));
+  if (!(a->prior_shape > 0.0 && a->prior_shape <= TF_MAX_SHAPE))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorShape",
+                                     _("The gamma shape PriorShape must be above 0 and at most 10^15 (it is %g)."),
+                                     a->prior_shape));
+  if (!(isfinite (a->prior_rate) && a->prior_rate > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorRate",
+                                     _("The gamma rate PriorRate must be a finite number above 0 (it is %g)."),
+                                     a->prior_rate));
+}
+
+/* BF01 = Poisson(k; λ0 E) / NB(k; α, β / (β + E)): the Poisson–gamma marginal under
+ * the alternative is negative binomial (Greenwood & Yule 1920); both in Loader's
+ * deviance form (Loader 2000). */
+double
+tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double shape, double rate)
+{
+  double s = rate + exposure;
+  return tf_log_dpois (k, lambda0 * exposure)
+         - tf_log_dnbinom (k, shape, rate / s, exposure / s);
+}
+
+/* ln P(Z >= z), standard normal (GSL's log_erfc, Cody 1969). */
+static double
+log_normal_upper (double z)
+{
+  gsl_sf_result r;
+  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
+    return NAN;
+  return r.val - G_LN2;
+}
+
+/* ln of the Gamma(s, r) mass in (lo, hi), hi may be +inf, from the side where it is
+ * small (Mächler 2012 for the differences). */
+static double
+log_gamma_mass (double s, double r, double lo, double hi)
+{
+  double pl, ql, ph, qh;
+  tf_gamma_inc_log_both (s, r * lo, &pl, &ql);
+  if (isinf (hi))
+    return ql;
+  tf_gamma_inc_log_both (s, r * hi, &ph, &qh);
+  if (ql <= ph)
+    return tf_log_sub (ql, qh);
+  return tf_log_sub (ph, pl);
+}
+
+/* The classical tests of one rate against the Poisson mean m = λ0 E, in log space. */
+typedef struct {
+  double lp_exact, lp_mid, lp_score, dev, z;
+} RateTests;
+
+static void
+rate_tests (double k, double m, TfDirection dir, RateTests *t)
+{
+  double lpmf = tf_log_dpois (k, m);
+  double d = k - m;
+
+  t->z = d / sqrt (m);
+  t->dev = tf_bd0_delta (k, m, d);                  /* G / 2 (Loader 2000) */
+  switch (dir)
+    {
+    case TF_DIRECTION_GREATER:
+      t->lp_exact = tf_pois_log_sf (k, m);
+      /* mid-p (Lancaster 1961): P(X > k) + ½ P(X = k) */
+      t->lp_mid = tf_log_add (tf_pois_log_sf (k + 1.0, m), lpmf - G_LN2);
+      t->lp_score = log_normal_upper (t->z);
+      break;
+    case TF_DIRECTION_LESS:
+      t->lp_exact = tf_pois_log_cdf (k, m);
+      t->lp_mid = tf_log_add (tf_pois_log_cdf (k - 1.0, m), lpmf - G_LN2);
+      t->lp_score = log_normal_upper (-t->z);
+      break;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      t->lp_exact = tf_pois_log_exact_two_sided (k, m);
+      /* the exact p minus half the probability of the observed count (Lancaster 1961) */
+      t->lp_mid = tf_log_sub (t->lp_exact, MIN (t->lp_exact, lpmf - G_LN2));
+      t->lp_score = G_LN2 + log_normal_upper (fabs (t->z));
+      break;
+    }
+}
+
+/* For an interval null [L, H]: the rate on the null's boundary that a test of the
+ * chosen direction is made against, and whether the estimate lies inside the null
+ * (then every p-value is 1). */
+static double
+boundary_rate (const TfAnalysis *a, gboolean *inside)
+{
+  double est = a->events / a->exposure;
+
+  *inside = FALSE;
+  if (a->null_kind == TF_NULL_POINT)
+    return a->null_value;
+  switch (a->direction)
+    {
+    case TF_DIRECTION_GREATER:
+      *inside = est <= a->null_high;
+      return a->null_high;
+    case TF_DIRECTION_LESS:
+      *inside = est >= a->null_low;
+      return a->null_low;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      *inside = est >= a->null_low && est <= a->null_high;
+      return est < a->null_low ? a->null_low : a->null_high;
+    }
+}
+
+/* ln BF01 in the analysis's hypotheses: point or interval null, side of the
+ * alternative by truncation of the prior (ratios of incomplete gamma masses). */
+static double
+analysis_log_bf01 (const TfAnalysis *a, double shape, double rate, double k, double exposure)
+{
+  const double P = shape + k, R = rate + exposure;
+
+  if (a->null_kind == TF_NULL_POINT)
+    {
+      double l0 = a->null_value;
+      double lbf = tf_one_rate_log_bf01 (k, exposure, l0, shape, rate);
+      if (a->direction == TF_DIRECTION_GREATER)
+        lbf += tf_gamma_inc_log_upper (shape, rate * l0) - tf_gamma_inc_log_upper (P, R * l0);
+      else if (a->direction == TF_DIRECTION_LESS)
+        lbf += tf_gamma_inc_log_lower (shape, rate * l0) - tf_gamma_inc_log_lower (P, R * l0);
+      return lbf;
+    }
+  double L = a->null_low, H = a->null_high;
+  double in = log_gamma_mass (P, R, L, H) - log_gamma_mass (shape, rate, L, H);
+  double out_post, out_prior;
+  switch (a->direction)
+    {
+    case TF_DIRECTION_GREATER:
+      out_post = tf_gamma_inc_log_upper (P, R * H);
+      out_prior = tf_gamma_inc_log_upper (shape, rate * H);
+      break;
+    case TF_DIRECTION_LESS:
+      out_post = tf_gamma_inc_log_lower (P, R * L);
+      out_prior = tf_gamma_inc_log_lower (shape, rate * L);
+      break;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      out_post = tf_log_add (tf_gamma_inc_log_lower (P, R * L), tf_gamma_inc_log_upper (P, R * H));
+      out_prior = tf_log_add (tf_gamma_inc_log_lower (shape, rate * L),
+                              tf_gamma_inc_log_upper (shape, rate * H));
+      break;
+    }
+  return in - (out_post - out_prior);
+}
+
+/* A quantile u of Gamma(P, R) truncated to the side of the alternative (above c for
+ * greater, below c for less), through the log-space inverse. */
+static double
+posterior_quantile (double u, double P, double R, double c, TfDirection dir)
+{
+  switch (dir)
+    {
+    case TF_DIRECTION_GREATER:
+      return tf_gamma_inc_inverse_log (log1p (-u) + tf_gamma_inc_log_upper (P, R * c), P, FALSE) / R;
+    case TF_DIRECTION_LESS:
+      return tf_gamma_inc_inverse_log (log (u) + tf_gamma_inc_log_lower (P, R * c), P, TRUE) / R;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      return (u <= 0.5 ? tf_gamma_inc_inverse_log (log (u), P, TRUE)
+                       : tf_gamma_inc_inverse_log (log1p (-u), P, FALSE)) / R;
+    }
+}
+
+static void
+add_bound_from_p (TfResults *results, double lp)
+{
+  const char *label = _("Smallest BF01 from the p-value");
+
+  /* −e p ln p (Sellke, Bayarri & Berger 2001), from ln p */
+  if (lp >= -1.0)
+    tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, 1.0);
+  else
+    {
+      double v = exp (1.0 + lp + log (-lp));
+      if (v > 0.0)
+        tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, v);
+      else
+        tf_results_add_undefined (results, "min_bf01", label, TF_MEASURE_BOUND,
+                                  _("the p-value is so small that the bound underflows to 0"));
+    }
+}
+
+void
+tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
+{
+  const TfAnalysis *a = analysis;
+  const double k = a->events, E = a->exposure;
+  const double alpha = a->prior_shape, beta = a->prior_rate;
+  const double P = alpha + k, R = beta + E;
+  const TfDirection dir = a->direction;
+  gboolean inside;
+  double lam = boundary_rate (a, &inside);
+  RateTests t;
+
+  tf_results_add (results, "estimate", _("Observed rate"), TF_MEASURE_ESTIMATE, k / E);
+
+  rate_tests (k, lam * E, dir, &t);
+  if (inside)
+    t.lp_exact = t.lp_mid = t.lp_score = 0.0;
+  tf_results_add (results, "p_value", _("p-value (exact)"), TF_MEASURE_TAIL_PROBABILITY,
+                  exp (t.lp_exact));
+  tf_results_add (results, "p_value_exact", _("Exact Poisson p-value"),
+                  TF_MEASURE_TAIL_PROBABILITY, exp (t.lp_exact));
+  tf_results_add (results, "p_value_midp", _("Mid-p-value"), TF_MEASURE_TAIL_PROBABILITY,
+                  MIN (exp (t.lp_mid), 1.0));
+  tf_results_add (results, "p_value_score", _("Score test p-value"),
+                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (t.lp_score), 1.0));
+
+  /* Garwood (1936), two-sided at level whatever the direction. */
+  double lo, hi;
+  tf_pois_garwood (k, a->level, &lo, &hi);
+  tf_results_add (results, "ci_low", _("Confidence interval, lower"),
+                  TF_MEASURE_CONFIDENCE_LIMIT, lo / E);
+  tf_results_add (results, "ci_high", _("Confidence interval, upper"),
+                  TF_MEASURE_CONFIDENCE_LIMIT, hi / E);
+
+  double lbf01 = analysis_log_bf01 (a, alpha, beta, k, E);
+  if (isfinite (lbf01))
+    {
+      tf_results_add (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, exp (-lbf01));
+      tf_results_add (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, exp (lbf01));
+    }
+  else
+    {
+      const char *why = _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented");
+      tf_results_add_undefined (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, why);
+      tf_results_add_undefined (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, why);
+    }
+  double lo_odds = log (a->prior_null) - log1p (-a->prior_null) + lbf01;
+  tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo_odds));
+  tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo_odds));
+
+  /* The posterior under the alternative, truncated to its side for a one-sided one. */
+  double cut = a->null_kind == TF_NULL_POINT ? a->null_value
+               : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
+  TfDirection side = a->null_kind == TF_NULL_POINT || dir != TF_DIRECTION_TWO_SIDED
+                     ? dir : TF_DIRECTION_TWO_SIDED;
+  double alpha2 = 0.5 * (1.0 - a->level);
+  tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
+                  posterior_quantile (alpha2, P, R, cut, side));
+  tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
+                  posterior_quantile (1.0 - alpha2, P, R, cut, side));
+  double top = a->null_kind == TF_NULL_POINT ? a->null_value : a->null_high;
+  tf_results_add (results, "prob_greater",
+                  a->null_kind == TF_NULL_POINT ? _("Posterior probability that λ > λ0")
+                                                : _("Posterior probability that λ lies above the null interval"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_gamma_inc_log_upper (P, R * top)));
+
+  add_bound_from_p (results, t.lp_exact);
+  /* L(λ0) / L(k/E) = exp(−G/2) (Edwards, Lindman & Savage 1963); 1 when the estimate
+   * lies in the null or on its side. */
+  double lr = exp (-t.dev);
+  if (inside || (dir == TF_DIRECTION_GREATER && k <= lam * E)
+      || (dir == TF_DIRECTION_LESS && k >= lam * E))
+    lr = 1.0;
+  if (lr > 0.0)
+    tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, lr);
+  else
+    tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"),
+                              TF_MEASURE_BOUND,
+                              _("the likelihood ratio is so small that it underflows to 0"));
+}
+
+static double
+finite_exp (double l)
+{
+  double v = exp (l);
+  return isfinite (v) ? v : DBL_MAX;
+}
+
+static double
+gamma_quantile (double u, double s, double r, gboolean lower)
+{
+  return tf_gamma_inc_inverse_log (log (u), s, lower) / r;
+}
+
+void
+tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
+{
+  const TfAnalysis *a = analysis;
+  const double k = a->events, E = a->exposure;
+  const double alpha = a->prior_shape, beta = a->prior_rate;
+  const double P = alpha + k, R = beta + E;
+  const guint np = curves->n;
+  double nl = a->null_kind == TF_NULL_POINT ? a->null_value : a->null_low;
+  double nh = a->null_kind == TF_NULL_POINT ? a->null_value : a->null_high;
+
+  /* The posterior's central 1 − 1e-6 and the null. */
+  double qlo = gamma_quantile (0.5e-6, P, R, TRUE), qhi = gamma_quantile (0.5e-6, P, R, FALSE);
+  double lo = MIN (qlo, nl), hi = MAX (qhi, nh);
+  /* Widen to the prior's central 99% unless the posterior would span < 3 steps. */
+  double plo = MIN (lo, gamma_quantile (0.005, alpha, beta, TRUE));
+  double phi = MAX (hi, gamma_quantile (0.005, alpha, beta, FALSE));
+  if (isfinite (phi) && (qhi - qlo) * (np - 1) / (phi - plo) >= 3.0)
+    {
+      lo = plo;
+      hi = phi;
+    }
+  if (!(hi > lo))
+    {
+      lo = lo * (1.0 - 1e-9);
+      hi = hi * (1.0 + 1e-9);
+    }
+  if (!(lo > 0.0))
+    lo = hi * 1e-9;
+  curves->lo = lo;
+  curves->hi = hi;
+  double step = (hi - lo) / (np - 1);
+  curves->posterior_narrow = sqrt (P) / R < 2.0 * step;
+  for (guint i = 0; i < np; i++)
+    {
+      double x = i + 1 == np ? hi : lo + i * step;
+      curves->x[i] = x;
+      curves->prior[i] = finite_exp (tf_log_dgamma (x, alpha, beta));
+      curves->posterior[i] = finite_exp (tf_log_dgamma (x, P, R));
+      curves->likelihood[i] = finite_exp (tf_log_dgamma (x, k + 1.0, E));
+    }
+  double mid = 0.5 * (nl + nh);
+  curves->null_value = mid;
+  curves->null_low = nl;
+  curves->null_high = nh;
+  curves->prior_at_null = finite_exp (tf_log_dgamma (mid, alpha, beta));
+  curves->posterior_at_null = finite_exp (tf_log_dgamma (mid, P, R));
+  curves->posterior_mode = P >= 1.0 ? (P - 1.0) / R : lo;
+  curves->parameter_markup = g_strdup ("λ");
+}
+
+static double
+log_bf01_to_posterior_null (double lbf01, double pi0)
+{
+  return tf_logistic (log (pi0) - log1p (-pi0) + lbf01);
+}
+
+/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
+gboolean
+tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  double mean = a->prior_shape / a->prior_rate;
+
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      curve->x[i] = s;
+      curve->log_bf01[i] = analysis_log_bf01 (a, s, s / mean, a->events, a->exposure);
+      curve->posterior_null[i] = log_bf01_to_posterior_null (curve->log_bf01[i], a->prior_null);
+    }
+  curve->x_log = TRUE;
+  curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
+  curve->chosen_x = a->prior_shape;
+  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events, a->exposure);
+  curve->chosen_posterior_null = log_bf01_to_posterior_null (curve->chosen_log_bf01, a->prior_null);
+  return TRUE;
+}
+
+/* x = exposure from 1e-2 to 1e6 times the observed. The p-value is held by holding
+ * the normal deviate z of the observed exact p-value: the count at exposure E' is
+ * λ0 E' + z √(λ0 E') (a real count; the Bayes factor's formula takes one), floored at
+ * 0 where the exposure is too small to reach that p-value. */
+gboolean
+tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  RateTests t;
+
+  if (a->null_kind != TF_NULL_POINT)
+    {
+      *why_not = g_strdup (_("The sample-size curve holds the p-value against a point null; this analysis has an interval null."));
+      return FALSE;
+    }
+  double l0 = a->null_value;
+  rate_tests (a->events, l0 * a->exposure, a->direction, &t);
+  double lp = MIN (t.lp_exact, 0.0);
+  double pz = a->direction == TF_DIRECTION_TWO_SIDED ? lp - G_LN2 : lp;
+  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
+                         : gsl_cdf_ugaussian_Qinv (exp (pz));
+  if (a->direction == TF_DIRECTION_LESS
+      || (a->direction == TF_DIRECTION_TWO_SIDED && a->events < l0 * a->exposure))
+    z = -z;
+  if (!isfinite (z))
+    z = 0.0;
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double e = a->exposure * pow (10.0, -2.0 + 8.0 * i / (curve->n - 1));
+      double m = l0 * e;
+      double k = MAX (0.0, m + z * sqrt (m));
+      curve->x[i] = e;
+      curve->log_bf01[i] = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, k, e);
+      curve->posterior_null[i] = log_bf01_to_posterior_null (curve->log_bf01[i], a->prior_null);
+    }
+  curve->x_log = TRUE;
+  curve->x_markup = g_strdup (_("exposure <i>E</i>"));
+  curve->chosen_x = a->exposure;
+  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events, a->exposure);
+  curve->chosen_posterior_null = log_bf01_to_posterior_null (curve->chosen_log_bf01, a->prior_null);
+  curve->p_value = exp (lp);
+  return TRUE;
+}
+
+#define TF_MAX_OUTCOMES 100001
+
+/* Poisson(λ0 E) masses over its central outcomes (mean ± 8 SD and the observed count
+ * when near), in_tail for the outcomes counted in the exact p-value. */
+gboolean
+tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                               char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  const double k = a->events;
+  RateTests t;
+
+  if (a->null_kind != TF_NULL_POINT)
+    {
+      *why_not = g_strdup (_("The null distribution is drawn for a point null; this analysis has an interval null."));
+      return FALSE;
+    }
+  double m = a->null_value * a->exposure;
+  double lo = MAX (0.0, floor (m - 8.0 * sqrt (m) - 5.0));
+  double hi = ceil (m + 8.0 * sqrt (m) + 15.0);
+  if (k >= lo - 0.25 * (hi - lo) && k < lo)
+    lo = k;
+  if (k <= hi + 0.25 * (hi - lo) && k > hi)
+    hi = k;
+  if (hi - lo + 1.0 > TF_MAX_OUTCOMES)
+    {
+      *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
+      return FALSE;
+    }
+  rate_tests (k, m, a->direction, &t);
+  double ld = tf_log_dpois (k, m) + log1p (1e-7);
+  tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
+  for (guint i = 0; i < dist->n; i++)
+    {
+      double j = lo + i;
+      double l = tf_log_dpois (j, m);
+      dist->x[i] = j;
+      dist->mass[i] = exp (l);
+      dist->in_tail[i] = a->direction == TF_DIRECTION_GREATER ? j >= k
+                         : a->direction == TF_DIRECTION_LESS ? j <= k : l <= ld;
+    }
+  dist->discrete = TRUE;
+  dist->observed = k;
+  dist->p_value = exp (t.lp_exact);
+  dist->x_markup = g_strdup (_("events <i>k</i>"));
+  return TRUE;
+}
+
+const TfDesignClass tf_one_rate_class = {
+  .design = TF_DESIGN_ONE_RATE,
+  .validate = tf_one_rate_validate,
+  .compute = tf_one_rate_compute,
+  .densities = tf_one_rate_densities,
+  .sensitivity = tf_one_rate_sensitivity,
+  .sample_size = tf_one_rate_sample_size,
+  .null_distribution = tf_one_rate_null_distribution,
+};

@@ -1,0 +1,34 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-one-rate.h: k events over an exposure E against the rate λ = λ0 (events per unit
+ * exposure), or an interval of rates.
+ */
+#pragma once
+
+#include "tf-analysis.h"
+#include "tf-results.h"
+#include "tf-curves.h"
+#include "tf-design.h"
+
+G_BEGIN_DECLS
+
+void tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems);
+/* The analysis is valid. */
+void tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results);
+void tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves);
+gboolean tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                  char **why_not);
+gboolean tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                  char **why_not);
+gboolean tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                                        char **why_not);
+
+/* ln BF01 for the point null λ0 against λ ~ Gamma(shape, rate), two-sided: the Poisson
+ * probability of k over the Poisson–gamma (negative binomial) marginal, both in
+ * Loader's deviance form, so that it holds for k and E up to 10^12. k may be real. */
+double tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double shape,
+                             double rate);
+
+/* The design's entry for tf_design_class(). */
+extern const TfDesignClass tf_one_rate_class;
+
+G_END_DECLS

@@ -1,0 +1,676 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-two-rates.c: two Poisson counts over exposures, the rate ratio ρ = λA/λB.
+ *
+ * Classical: given the total n = kA + kB, kA is Binomial(n, π) with
+ * π = ρ EA / (ρ EA + EB) (Przyborowski & Wilenski 1940), so the exact test, mid-p and
+ * score test are binomial ones and the interval is Clopper–Pearson's for π carried to ρ.
+ * Bayesian: H0 λA = ρ0 λ, λB = λ with λ ~ Gamma(α, β) (ρ0 = 1: a common rate) against
+ * independent λA, λB ~ Gamma(α, β); the Bayes factor is in closed form. Under the
+ * alternative, ρ rA / rB is beta-prime, so its intervals and tails are incomplete betas.
+ *
+ * [Null] Value is the null ratio. Its default, 0, cannot be a ratio: it is read as
+ * "no difference", ρ0 = 1 (DESIGN.md: two-sample nulls are A = B unless Value says
+ * otherwise).
+ */
+#include "tf-two-rates.h"
+#include "tf-poisson.h"
+#include "tf-binomial.h"
+#include "tf-incbeta.h"
+#include "tf-logspace.h"
+
+#include <math.h>
+#include <float.h>
+#include <glib/gi18n-lib.h>
+#include <gsl/gsl_cdf.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_sf_erf.h>
+
+#define TF_MAX_COUNT 1e15
+#define TF_MAX_SHAPE 1e15
+
+static gboolean
+is_whole (double v)
+{
+  return isfinite (v) && v == floor (v);
+}
+
+static void
+check_count (GPtrArray *problems, const char *key, double v)
+{
+  if (!is_whole (v) || v < 0.0 || v > TF_MAX_COUNT)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", key,
+                                     _("%s must be a whole number from 0 to 10^15 (it is %g)."),
+                                     key, v));
+}
+
+static void
+check_exposure (GPtrArray *problems, const char *key, double v)
+{
+  if (!(isfinite (v) && v > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", key,
+                                     _("%s must be a finite number above 0 (it is %g)."),
+                                     key, v));
+}
+
+double
+tf_two_rates_null_ratio (const TfAnalysis *analysis)
+{
+  return analysis->null_value == 0.0 ? 1.0 : analysis->null_value;
+}
+
+void
+tf_two_rates_validate (const TfAnalysis *analysis, GPtrArray *problems)
+{
+  const TfAnalysis *a = analysis;
+
+  check_count (problems, "EventsA", a->events_a);
+  check_exposure (problems, "ExposureA", a->exposure_a);
+  check_count (problems, "EventsB", a->events_b);
+  check_exposure (problems, "ExposureB", a->exposure_b);
+  if (a->null_kind == TF_NULL_INTERVAL)
+    {
+      if (!(isfinite (a->null_low) && a->null_low > 0.0))
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "Low",
+                                         _("The lower end of the null interval (Low) must be a rate ratio above 0 (it is %g)."),
+                                         a->null_low));
+      else if (!(isfinite (a->null_high) && a->null_high > a->null_low))
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "High",
+                                         _("The upper end of the null interval (High) must be finite and above Low (it is %g)."),
+                                         a->null_high));
+    }
+  else if (!(isfinite (a->null_value) && a->null_value >= 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Null", "Value",
+                                     _("The null rate ratio (Value) must be a finite number above 0, or 0 for “no difference” (it is %g)."),
+                                     a->null_value));
+  if (a->prior != TF_PRIOR_GAMMA)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "Prior",
+                                     _("The prior for rates must be gamma (it is %s)."),
+                                     tf_prior_family_to_string (a->prior)));
+  if (!(a->prior_shape > 0.0 && a->prior_shape <= TF_MAX_SHAPE))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorShape",
+                                     _("The gamma shape PriorShape must be above 0 and at most 10^15 (it is %g)."),
+                                     a->prior_shape));
+  if (!(isfinite (a->prior_rate) && a->prior_rate > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorRate",
+                                     _("The gamma rate PriorRate must be a finite number above 0 (it is %g)."),
+                                     a->prior_rate));
+}
+
+/* π = ρ EA / (ρ EA + EB) and 1 − π, each from its own numerator. */
+static void
+pi_of_ratio (double rho, double ea, double eb, double *p, double *q)
+{
+  double s = rho * ea + eb;
+  *p = rho * ea / s;
+  *q = eb / s;
+}
+
+/* BF01 = Bin(kA; n, π0) NB(n; α, β/R0) / (NB(kA; α, β/RA) NB(kB; α, β/RB)): the counts
+ * factor into the total and the split under H0 (Poisson splitting), and each Poisson–
+ * gamma marginal is negative binomial (Greenwood & Yule 1920); every term in Loader's
+ * deviance form (Loader 2000). Counts may be real. */
+double
+tf_two_rates_log_bf01 (double ka, double ea, double kb, double eb, double rho0,
+                       double shape, double rate)
+{
+  double p0, q0;
+  double n = ka + kb;
+  double m0 = rho0 * ea + eb, r0 = rate + m0, ra = rate + ea, rb = rate + eb;
+
+  pi_of_ratio (rho0, ea, eb, &p0, &q0);
+  return tf_log_dbinom (ka, n, p0, q0) + tf_log_dnbinom (n, shape, rate / r0, m0 / r0)
+         - tf_log_dnbinom (ka, shape, rate / ra, ea / ra)
+         - tf_log_dnbinom (kb, shape, rate / rb, eb / rb);
+}
+
+/* W = ra λA / (ra λA + rb λB) ~ Beta(sa, sb); ρ = (rb / ra) W / (1 − W), with W and
+ * 1 − W each inverted on its own side so that neither loses digits. */
+double
+tf_two_rates_ratio_quantile_log (double log_p, double sa, double ra, double sb, double rb,
+                                 gboolean lower)
+{
+  double w = tf_incbeta_inverse_log (log_p, sa, sb, lower);
+  double v = tf_incbeta_inverse_log (log_p, sb, sa, !lower);
+  if (v == 0.0)
+    return INFINITY;
+  return rb / ra * w / v;
+}
+
+/* ln of the probability that ρ lies in (lo, hi) (hi may be +inf) when ra ρ / rb is
+ * beta-prime(sa, sb), from the small side. */
+static double
+log_ratio_mass (double sa, double ra, double sb, double rb, double lo, double hi)
+{
+  double ll, ul, lh, uh;
+  double d = ra * lo + rb;
+  tf_incbeta_log_both (ra * lo / d, rb / d, sa, sb, &ll, &ul);
+  if (isinf (hi))
+    return ul;
+  d = ra * hi + rb;
+  tf_incbeta_log_both (ra * hi / d, rb / d, sa, sb, &lh, &uh);
+  if (ul <= lh)
+    return tf_log_sub (ul, uh);
+  return tf_log_sub (lh, ll);
+}
+
+static double
+log_ratio_upper (double sa, double ra, double sb, double rb, double c)
+{
+  return log_ratio_mass (sa, ra, sb, rb, c, INFINITY);
+}
+
+static double
+log_ratio_lower (double sa, double ra, double sb, double rb, double c)
+{
+  double d = ra * c + rb;
+  return tf_incbeta_log_lower (ra * c / d, rb / d, sa, sb);
+}
+
+/* ln BF01 in the analysis's hypotheses, for prior (s, r) and counts (ka, kb) over
+ * exposures (ea, eb). */
+static double
+analysis_log_bf01 (const TfAnalysis *a, double s, double r, double ka, double ea, double kb,
+                   double eb)
+{
+  const double sa = s + ka, sb = s + kb, ra = r + ea, rb = r + eb;
+
+  if (a->null_kind == TF_NULL_POINT)
+    {
+      double rho0 = tf_two_rates_null_ratio (a);
+      double lbf = tf_two_rates_log_bf01 (ka, ea, kb, eb, rho0, s, r);
+      if (a->direction == TF_DIRECTION_GREATER)
+        lbf += log_ratio_upper (s, r, s, r, rho0) - log_ratio_upper (sa, ra, sb, rb, rho0);
+      else if (a->direction == TF_DIRECTION_LESS)
+        lbf += log_ratio_lower (s, r, s, r, rho0) - log_ratio_lower (sa, ra, sb, rb, rho0);
+      return lbf;
+    }
+  /* Interval null: the independent model's prior and posterior, inside against the
+   * side(s) of the alternative. */
+  double L = a->null_low, H = a->null_high, out_post, out_prior;
+  double in = log_ratio_mass (sa, ra, sb, rb, L, H) - log_ratio_mass (s, r, s, r, L, H);
+  switch (a->direction)
+    {
+    case TF_DIRECTION_GREATER:
+      out_post = log_ratio_upper (sa, ra, sb, rb, H);
+      out_prior = log_ratio_upper (s, r, s, r, H);
+      break;
+    case TF_DIRECTION_LESS:
+      out_post = log_ratio_lower (sa, ra, sb, rb, L);
+      out_prior = log_ratio_lower (s, r, s, r, L);
+      break;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      out_post = tf_log_add (log_ratio_lower (sa, ra, sb, rb, L), log_ratio_upper (sa, ra, sb, rb, H));
+      out_prior = tf_log_add (log_ratio_lower (s, r, s, r, L), log_ratio_upper (s, r, s, r, H));
+      break;
+    }
+  return in - (out_post - out_prior);
+}
+
+/* ln P(Z >= z), standard normal (GSL's log_erfc, Cody 1969). */
+static double
+log_normal_upper (double z)
+{
+  gsl_sf_result r;
+  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
+    return NAN;
+  return r.val - G_LN2;
+}
+
+typedef struct {
+  double lp_exact, lp_mid, lp_score, dev;
+} SplitTests;
+
+/* The conditional binomial tests of kA out of n against π0 (q0 = 1 − π0). */
+static void
+split_tests (double ka, double n, double p0, double q0, TfDirection dir, SplitTests *t)
+{
+  if (n == 0.0)
+    {
+      *t = (SplitTests) { 0.0, 0.0, 0.0, 0.0 };
+      return;
+    }
+  double kb = n - ka;
+  double lpmf = tf_log_dbinom (ka, n, p0, q0);
+  double d = p0 <= q0 ? ka - n * p0 : n * q0 - kb;          /* kA − nπ0 */
+  double z = d / sqrt (n * p0 * q0);
+
+  t->dev = tf_bd0_delta (ka, n * p0, d) + tf_bd0_delta (kb, n * q0, -d);
+  switch (dir)
+    {
+    case TF_DIRECTION_GREATER:
+      t->lp_exact = tf_binom_log_sf (ka, n, p0, q0);
+      /* mid-p (Lancaster 1961) */
+      t->lp_mid = tf_log_add (tf_binom_log_sf (ka + 1.0, n, p0, q0), lpmf - G_LN2);
+      t->lp_score = log_normal_upper (z);
+      break;
+    case TF_DIRECTION_LESS:
+      t->lp_exact = tf_binom_log_cdf (ka, n, p0, q0);
+      t->lp_mid = tf_log_add (tf_binom_log_cdf (ka - 1.0, n, p0, q0), lpmf - G_LN2);
+      t->lp_score = log_normal_upper (-z);
+      break;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      t->lp_exact = tf_binom_log_exact_two_sided (ka, n, p0);
+      t->lp_mid = tf_log_sub (t->lp_exact, MIN (t->lp_exact, lpmf - G_LN2));
+      t->lp_score = G_LN2 + log_normal_upper (fabs (z));
+      break;
+    }
+}
+
+/* The null ratio the test is made against (the nearer end of an interval null on the
+ * side of the alternative) and whether the estimate lies in the null. */
+static double
+boundary_ratio (const TfAnalysis *a, gboolean *inside)
+{
+  double ka = a->events_a, kb = a->events_b;
+  /* ρ̂ compared with c as kA EB against c kB EA, so that kB = 0 needs no division */
+  double ea = a->exposure_a, eb = a->exposure_b;
+#define ABOVE(c) (ka * eb > (c) * kb * ea)
+#define BELOW(c) (ka * eb < (c) * kb * ea)
+  *inside = ka + kb == 0.0;
+  if (a->null_kind == TF_NULL_POINT)
+    return tf_two_rates_null_ratio (a);
+  switch (a->direction)
+    {
+    case TF_DIRECTION_GREATER:
+      *inside = *inside || !ABOVE (a->null_high);
+      return a->null_high;
+    case TF_DIRECTION_LESS:
+      *inside = *inside || !BELOW (a->null_low);
+      return a->null_low;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      *inside = *inside || (!BELOW (a->null_low) && !ABOVE (a->null_high));
+      return BELOW (a->null_low) ? a->null_low : a->null_high;
+    }
+#undef ABOVE
+#undef BELOW
+}
+
+static void
+add_bound_from_p (TfResults *results, double lp)
+{
+  const char *label = _("Smallest BF01 from the p-value");
+
+  /* −e p ln p (Sellke, Bayarri & Berger 2001), from ln p */
+  if (lp >= -1.0)
+    tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, 1.0);
+  else
+    {
+      double v = exp (1.0 + lp + log (-lp));
+      if (v > 0.0)
+        tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, v);
+      else
+        tf_results_add_undefined (results, "min_bf01", label, TF_MEASURE_BOUND,
+                                  _("the p-value is so small that the bound underflows to 0"));
+    }
+}
+
+/* A quantile u of the posterior ratio, truncated above c (greater) or below c (less). */
+static double
+posterior_ratio_quantile (double u, double sa, double ra, double sb, double rb, double c,
+                          TfDirection dir)
+{
+  switch (dir)
+    {
+    case TF_DIRECTION_GREATER:
+      return tf_two_rates_ratio_quantile_log (log1p (-u) + log_ratio_upper (sa, ra, sb, rb, c),
+                                              sa, ra, sb, rb, FALSE);
+    case TF_DIRECTION_LESS:
+      return tf_two_rates_ratio_quantile_log (log (u) + log_ratio_lower (sa, ra, sb, rb, c),
+                                              sa, ra, sb, rb, TRUE);
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      return u <= 0.5 ? tf_two_rates_ratio_quantile_log (log (u), sa, ra, sb, rb, TRUE)
+                      : tf_two_rates_ratio_quantile_log (log1p (-u), sa, ra, sb, rb, FALSE);
+    }
+}
+
+void
+tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
+{
+  const TfAnalysis *a = analysis;
+  const double ka = a->events_a, ea = a->exposure_a, kb = a->events_b, eb = a->exposure_b;
+  const double n = ka + kb, s = a->prior_shape, r = a->prior_rate;
+  const double sa = s + ka, sb = s + kb, ra = r + ea, rb = r + eb;
+  const TfDirection dir = a->direction;
+  gboolean inside;
+  double rho = boundary_ratio (a, &inside), p0, q0;
+  SplitTests t;
+
+  if (kb > 0.0)
+    tf_results_add (results, "estimate", _("Observed rate ratio"), TF_MEASURE_ESTIMATE,
+                    (ka / ea) / (kb / eb));
+  else
+    tf_results_add_undefined (results, "estimate", _("Observed rate ratio"), TF_MEASURE_ESTIMATE,
+                              _("group B has no events, so the observed ratio is not finite"));
+
+  pi_of_ratio (rho, ea, eb, &p0, &q0);
+  split_tests (ka, n, p0, q0, dir, &t);
+  if (inside)
+    t.lp_exact = t.lp_mid = t.lp_score = 0.0;
+  tf_results_add (results, "p_value", _("p-value (exact)"), TF_MEASURE_TAIL_PROBABILITY,
+                  exp (t.lp_exact));
+  tf_results_add (results, "p_value_exact", _("Exact conditional p-value"),
+                  TF_MEASURE_TAIL_PROBABILITY, exp (t.lp_exact));
+  tf_results_add (results, "p_value_midp", _("Mid-p-value"), TF_MEASURE_TAIL_PROBABILITY,
+                  MIN (exp (t.lp_mid), 1.0));
+  tf_results_add (results, "p_value_score", _("Score test p-value"),
+                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (t.lp_score), 1.0));
+
+  /* Clopper–Pearson for π carried to ρ = (EB / EA) π / (1 − π), π and 1 − π each
+   * inverted on its own side. */
+  double la2 = log (0.5 * (1.0 - a->level));
+  if (ka > 0.0)
+    tf_results_add (results, "ci_low", _("Confidence interval, lower"), TF_MEASURE_CONFIDENCE_LIMIT,
+                    eb / ea * tf_incbeta_inverse_log (la2, ka, kb + 1.0, TRUE)
+                    / tf_incbeta_inverse_log (la2, kb + 1.0, ka, FALSE));
+  else
+    tf_results_add (results, "ci_low", _("Confidence interval, lower"), TF_MEASURE_CONFIDENCE_LIMIT, 0.0);
+  if (kb > 0.0)
+    tf_results_add (results, "ci_high", _("Confidence interval, upper"), TF_MEASURE_CONFIDENCE_LIMIT,
+                    eb / ea * tf_incbeta_inverse_log (la2, ka + 1.0, kb, FALSE)
+                    / tf_incbeta_inverse_log (la2, kb, ka + 1.0, TRUE));
+  else
+    tf_results_add_undefined (results, "ci_high", _("Confidence interval, upper"),
+                              TF_MEASURE_CONFIDENCE_LIMIT,
+                              _("group B has no events, so the data set no upper limit on the ratio"));
+
+  double lbf01 = analysis_log_bf01 (a, s, r, ka, ea, kb, eb);
+  if (isfinite (lbf01))
+    {
+      tf_results_add (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, exp (-lbf01));
+      tf_results_add (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, exp (lbf01));
+    }
+  else
+    {
+      const char *why = _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented");
+      tf_results_add_undefined (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, why);
+      tf_results_add_undefined (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, why);
+    }
+  double lo_odds = log (a->prior_null) - log1p (-a->prior_null) + lbf01;
+  tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo_odds));
+  tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo_odds));
+
+  double cut = a->null_kind == TF_NULL_POINT ? tf_two_rates_null_ratio (a)
+               : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
+  double alpha2 = 0.5 * (1.0 - a->level);
+  tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
+                  posterior_ratio_quantile (alpha2, sa, ra, sb, rb, cut, dir));
+  tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
+                  posterior_ratio_quantile (1.0 - alpha2, sa, ra, sb, rb, cut, dir));
+  double top = a->null_kind == TF_NULL_POINT ? tf_two_rates_null_ratio (a) : a->null_high;
+  tf_results_add (results, "prob_greater",
+                  a->null_kind == TF_NULL_POINT ? _("Posterior probability that λA/λB > ρ0")
+                                                : _("Posterior probability that λA/λB lies above the null interval"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (log_ratio_upper (sa, ra, sb, rb, top)));
+
+  add_bound_from_p (results, t.lp_exact);
+  /* The conditional likelihood ratio at its maximum, exp(−G/2), equal to the profile
+   * likelihood ratio of the two Poisson counts (Edwards, Lindman & Savage 1963). */
+  double lr = exp (-t.dev);
+  if (inside || (dir == TF_DIRECTION_GREATER && ka <= n * p0)
+      || (dir == TF_DIRECTION_LESS && ka >= n * p0))
+    lr = 1.0;
+  if (lr > 0.0)
+    tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, lr);
+  else
+    tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"),
+                              TF_MEASURE_BOUND,
+                              _("the likelihood ratio is so small that it underflows to 0"));
+}
+
+static double
+finite_exp (double l)
+{
+  double v = exp (l);
+  return isfinite (v) ? v : DBL_MAX;
+}
+
+/* ln density of l = ln ρ when c ρ is beta-prime(sa, sb): with w = c ρ / (1 + c ρ),
+ * it is ln[w^sa (1 − w)^sb / B(sa, sb)] = ln dbeta(w) + ln w + ln(1 − w). */
+static double
+log_density_log_ratio (double l, double sa, double sb, double log_c)
+{
+  double t = l + log_c;
+  double w = tf_logistic (t), y = tf_logistic (-t);
+  double e = log1p (exp (-fabs (t)));          /* ln(1 + e^−|t|) */
+  double lw = t > 0.0 ? -e : t - e, ly = t > 0.0 ? -t - e : -e;
+  return tf_log_dbeta (w, y, sa, sb) + lw + ly;
+}
+
+static double
+log_ratio_quantile (double u, double sa, double ra, double sb, double rb)
+{
+  return log (tf_two_rates_ratio_quantile_log (log (u), sa, ra, sb, rb, TRUE));
+}
+
+/* x = l = ln(λA/λB). Prior: λA, λB ~ Gamma(α, β), so ρ is beta-prime(α, α); posterior
+ * beta-prime(α + kA, α + kB) scaled by RB/RA; the likelihood, normalised over l, is
+ * that of Beta(kA, kB) carried to l when both counts are positive, and normalised
+ * numerically over the range shown otherwise. */
+void
+tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
+{
+  const TfAnalysis *a = analysis;
+  const double ka = a->events_a, ea = a->exposure_a, kb = a->events_b, eb = a->exposure_b;
+  const double s = a->prior_shape, r = a->prior_rate;
+  const double sa = s + ka, sb = s + kb, ra = r + ea, rb = r + eb;
+  const guint np = curves->n;
+  double rho0 = tf_two_rates_null_ratio (a);
+  double nl = log (a->null_kind == TF_NULL_POINT ? rho0 : a->null_low);
+  double nh = log (a->null_kind == TF_NULL_POINT ? rho0 : a->null_high);
+  double lc_post = log (ra) - log (rb), lc_lik = log (ea) - log (eb);
+
+  double qlo = log_ratio_quantile (0.5e-6, sa, ra, sb, rb);
+  double qhi = -log_ratio_quantile (0.5e-6, sb, rb, sa, ra);   /* 1/ρ swaps the groups */
+  double lo = MIN (qlo, nl), hi = MAX (qhi, nh);
+  double plo = MIN (lo, log_ratio_quantile (0.005, s, r, s, r));
+  double phi = MAX (hi, -log_ratio_quantile (0.005, s, r, s, r));
+  if (isfinite (plo) && isfinite (phi) && (qhi - qlo) * (np - 1) / (phi - plo) >= 3.0)
+    {
+      lo = plo;
+      hi = phi;
+    }
+  if (!(hi > lo))
+    {
+      lo -= 1e-9 * MAX (1.0, fabs (lo));
+      hi += 1e-9 * MAX (1.0, fabs (hi));
+    }
+  curves->lo = lo;
+  curves->hi = hi;
+  double step = (hi - lo) / (np - 1);
+  curves->posterior_narrow = sqrt (1.0 / sa + 1.0 / sb) < 2.0 * step;
+
+  gboolean closed = ka > 0.0 && kb > 0.0;
+  double lmax = -INFINITY;
+  for (guint i = 0; i < np; i++)
+    {
+      double x = i + 1 == np ? hi : lo + i * step;
+      curves->x[i] = x;
+      curves->prior[i] = finite_exp (log_density_log_ratio (x, s, s, 0.0));
+      curves->posterior[i] = finite_exp (log_density_log_ratio (x, sa, sb, lc_post));
+      if (closed)
+        curves->likelihood[i] = finite_exp (log_density_log_ratio (x, ka, kb, lc_lik));
+      else
+        {
+          /* ln of w^kA (1 − w)^kB, one count being 0 */
+          double t = x + lc_lik;
+          curves->likelihood[i] = ka > 0.0 ? -ka * log1p (exp (-t)) : -kb * log1p (exp (t));
+          lmax = MAX (lmax, curves->likelihood[i]);
+        }
+    }
+  if (!closed)
+    {
+      /* trapezoid rule over the range shown */
+      double area = 0.0;
+      for (guint i = 0; i < np; i++)
+        curves->likelihood[i] = exp (curves->likelihood[i] - lmax);
+      for (guint i = 0; i + 1 < np; i++)
+        area += 0.5 * (curves->likelihood[i] + curves->likelihood[i + 1]) * (curves->x[i + 1] - curves->x[i]);
+      for (guint i = 0; i < np; i++)
+        curves->likelihood[i] = area > 0.0 ? curves->likelihood[i] / area : 0.0;
+    }
+  double mid = 0.5 * (nl + nh);
+  curves->null_value = mid;
+  curves->null_low = nl;
+  curves->null_high = nh;
+  curves->prior_at_null = finite_exp (log_density_log_ratio (mid, s, s, 0.0));
+  curves->posterior_at_null = finite_exp (log_density_log_ratio (mid, sa, sb, lc_post));
+  curves->posterior_mode = log (sa) - log (sb) - lc_post;     /* the mode of w^sa (1 − w)^sb */
+  curves->parameter_markup = g_strdup ("ln(λ<sub>A</sub>/λ<sub>B</sub>)");
+}
+
+static double
+posterior_null_of (double lbf01, double pi0)
+{
+  return tf_logistic (log (pi0) - log1p (-pi0) + lbf01);
+}
+
+/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
+gboolean
+tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  double mean = a->prior_shape / a->prior_rate;
+
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      curve->x[i] = s;
+      curve->log_bf01[i] = analysis_log_bf01 (a, s, s / mean, a->events_a, a->exposure_a,
+                                              a->events_b, a->exposure_b);
+      curve->posterior_null[i] = posterior_null_of (curve->log_bf01[i], a->prior_null);
+    }
+  curve->x_log = TRUE;
+  curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
+  curve->chosen_x = a->prior_shape;
+  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events_a,
+                                              a->exposure_a, a->events_b, a->exposure_b);
+  curve->chosen_posterior_null = posterior_null_of (curve->chosen_log_bf01, a->prior_null);
+  return TRUE;
+}
+
+/* x = the factor both exposures are scaled by, 1e-2 to 1e6. The total scales with
+ * them; the split kA = n π0 + z √(n π0 (1 − π0)) holds the normal deviate z of the
+ * observed exact p-value (real counts, clipped to [0, n] where the total is too small
+ * to reach that p-value). */
+gboolean
+tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  const double ka = a->events_a, kb = a->events_b, n = ka + kb;
+  double p0, q0;
+  SplitTests t;
+
+  if (a->null_kind != TF_NULL_POINT)
+    {
+      *why_not = g_strdup (_("The sample-size curve holds the p-value against a point null; this analysis has an interval null."));
+      return FALSE;
+    }
+  if (n == 0.0)
+    {
+      *why_not = g_strdup (_("With no events in either group there is no p-value below 1 to hold as the exposures grow."));
+      return FALSE;
+    }
+  double rho0 = tf_two_rates_null_ratio (a);
+  pi_of_ratio (rho0, a->exposure_a, a->exposure_b, &p0, &q0);
+  split_tests (ka, n, p0, q0, a->direction, &t);
+  double lp = MIN (t.lp_exact, 0.0);
+  double pz = a->direction == TF_DIRECTION_TWO_SIDED ? lp - G_LN2 : lp;
+  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
+                         : gsl_cdf_ugaussian_Qinv (exp (pz));
+  if (a->direction == TF_DIRECTION_LESS
+      || (a->direction == TF_DIRECTION_TWO_SIDED && ka < n * p0))
+    z = -z;
+  if (!isfinite (z))
+    z = 0.0;
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double f = pow (10.0, -2.0 + 8.0 * i / (curve->n - 1));
+      double nf = n * f;
+      double kaf = CLAMP (nf * p0 + z * sqrt (nf * p0 * q0), 0.0, nf);
+      curve->x[i] = f;
+      curve->log_bf01[i] = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, kaf,
+                                              a->exposure_a * f, nf - kaf, a->exposure_b * f);
+      curve->posterior_null[i] = posterior_null_of (curve->log_bf01[i], a->prior_null);
+    }
+  curve->x_log = TRUE;
+  curve->x_markup = g_strdup (_("exposures × <i>f</i> (both groups)"));
+  curve->chosen_x = 1.0;
+  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, ka,
+                                              a->exposure_a, kb, a->exposure_b);
+  curve->chosen_posterior_null = posterior_null_of (curve->chosen_log_bf01, a->prior_null);
+  curve->p_value = exp (lp);
+  return TRUE;
+}
+
+#define TF_MAX_OUTCOMES 100001
+
+/* Binomial(n, π0) masses of kA given the total, over its central outcomes. */
+gboolean
+tf_two_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                                char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  const double ka = a->events_a, n = ka + a->events_b;
+  double p0, q0;
+  SplitTests t;
+
+  if (a->null_kind != TF_NULL_POINT)
+    {
+      *why_not = g_strdup (_("The null distribution is drawn for a point null; this analysis has an interval null."));
+      return FALSE;
+    }
+  pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &p0, &q0);
+  double sd = sqrt (n * p0 * q0);
+  double lo = MAX (0.0, floor (n * p0 - 8.0 * sd - 5.0));
+  double hi = MIN (n, ceil (n * p0 + 8.0 * sd + 15.0));
+  if (ka >= lo - 0.25 * (hi - lo) && ka < lo)
+    lo = ka;
+  if (ka <= hi + 0.25 * (hi - lo) && ka > hi)
+    hi = ka;
+  if (hi - lo + 1.0 > TF_MAX_OUTCOMES)
+    {
+      *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
+      return FALSE;
+    }
+  split_tests (ka, n, p0, q0, a->direction, &t);
+  double ld = tf_log_dbinom (ka, n, p0, q0) + log1p (1e-7);
+  tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
+  for (guint i = 0; i < dist->n; i++)
+    {
+      double j = lo + i;
+      double l = tf_log_dbinom (j, n, p0, q0);
+      dist->x[i] = j;
+      dist->mass[i] = exp (l);
+      dist->in_tail[i] = a->direction == TF_DIRECTION_GREATER ? j >= ka
+                         : a->direction == TF_DIRECTION_LESS ? j <= ka : l <= ld;
+    }
+  dist->discrete = TRUE;
+  dist->observed = ka;
+  dist->p_value = exp (t.lp_exact);
+  dist->x_markup = g_strdup (_("events in group A, <i>k</i><sub>A</sub>, given the total"));
+  return TRUE;
+}
+
+const TfDesignClass tf_two_rates_class = {
+  .design = TF_DESIGN_TWO_RATES,
+  .validate = tf_two_rates_validate,
+  .compute = tf_two_rates_compute,
+  .densities = tf_two_rates_densities,
+  .sensitivity = tf_two_rates_sensitivity,
+  .sample_size = tf_two_rates_sample_size,
+  .null_distribution = tf_two_rates_null_distribution,
+};
