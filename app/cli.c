@@ -38,7 +38,7 @@ usage_error (const char *message)
   g_printerr ("twofold-cli: %s\n", message);
   g_printerr (_("Usage: twofold-cli analyse FILE [--json]\n"
                 "       twofold-cli figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
-                "                   [--width-mm W] [--height-mm H] [--dpi D]\n"
+                "                   [--width-mm W] [--height-mm H] [--dpi D] [--style light|dark|print]\n"
                 "       twofold-cli --help\n"));
   return EXIT_USAGE;
 }
@@ -123,6 +123,8 @@ command_figure (int argc, char **argv)
   g_autofree char *output = NULL;
   double width_mm = TF_FIGURE_DEFAULT_WIDTH_MM, height_mm = TF_FIGURE_DEFAULT_HEIGHT_MM;
   double dpi = TF_FIGURE_DEFAULT_DPI;
+  g_autofree char *style = NULL;
+  TfFigureOptions options = TF_FIGURE_OPTIONS_INIT;
   GOptionEntry entries[] = {
     { "kind", 0, 0, G_OPTION_ARG_STRING, &kind,
       N_("densities, sensitivity, sample-size, null-distribution or model-probabilities"), N_("KIND") },
@@ -130,6 +132,7 @@ command_figure (int argc, char **argv)
     { "width-mm", 0, 0, G_OPTION_ARG_DOUBLE, &width_mm, N_("Width in millimetres (default 120)"), N_("W") },
     { "height-mm", 0, 0, G_OPTION_ARG_DOUBLE, &height_mm, N_("Height in millimetres (default 80)"), N_("H") },
     { "dpi", 0, 0, G_OPTION_ARG_DOUBLE, &dpi, N_("Dots per inch of a PNG (default 300)"), N_("D") },
+    { "style", 0, 0, G_OPTION_ARG_STRING, &style, N_("light (default), dark or print (greyscale)"), N_("STYLE") },
     { NULL }
   };
   g_autoptr (GOptionContext) context = g_option_context_new (_("figure FILE"));
@@ -148,6 +151,8 @@ command_figure (int argc, char **argv)
     return usage_error (_("figure needs --kind"));
   if (output == NULL)
     return usage_error (_("figure needs --output"));
+  if (style && !tf_figure_style_from_string (style, &options.style))
+    return usage_error (_("--style must be light, dark or print"));
 
   analysis = tf_analysis_load (argv[2], problems);
   if (analysis == NULL)
@@ -155,7 +160,7 @@ command_figure (int argc, char **argv)
       print_problems (argv[2], problems);
       return EXIT_USAGE;
     }
-  if (!tf_figure_export (analysis, kind, output, width_mm, height_mm, dpi, &error))
+  if (!tf_figure_export_full (analysis, kind, output, width_mm, height_mm, dpi, &options, &error))
     {
       gboolean usage = error->domain == TF_FIGURE_ERROR
                        && (error->code == TF_FIGURE_ERROR_UNKNOWN_KIND
@@ -186,7 +191,7 @@ main (int argc, char **argv)
                  "Commands:\n"
                  "  analyse FILE [--json]   every number of an analysis, as text or JSON\n"
                  "  figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
-                 "         [--width-mm W] [--height-mm H] [--dpi D]\n"
+                 "         [--width-mm W] [--height-mm H] [--dpi D] [--style light|dark|print]\n"
                  "                          a figure at the size a journal asks\n\n"
                  "Exit codes: 0 done; 1 the analysis could not be computed;\n"
                  "2 bad usage or a bad file (the message names file, group and key).\n"));

@@ -161,20 +161,37 @@ tf_fig_text_width (cairo_t *cr, const TfFigureTheme *theme, double size, const c
 }
 
 void
-tf_fig_text_halo (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
-                  double size, const char *markup, double x, double y)
+tf_fig_text (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour, double size,
+             const char *markup, double x, double y)
 {
   g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, size, markup);
 
   cairo_save (cr);
   cairo_new_path (cr);
+  tf_figure_theme_set_source (cr, colour);
   cairo_move_to (cr, x, y);
-  pango_cairo_layout_path (cr, layout);
+  pango_cairo_show_layout (cr, layout);
+  cairo_restore (cr);
+}
+
+/* The halo: the text in the background colour at eight offsets around it, then the text.
+ * Glyphs come from cairo's cache, so this costs far less than stroking their outlines. */
+void
+tf_fig_text_halo (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
+                  double size, const char *markup, double x, double y)
+{
+  g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, size, markup);
+  double r = tf_figure_theme_pt (theme, 1.1);
+
+  cairo_save (cr);
+  cairo_new_path (cr);
   tf_figure_theme_set_source (cr, &theme->background);
-  cairo_set_dash (cr, NULL, 0, 0);
-  cairo_set_line_join (cr, CAIRO_LINE_JOIN_ROUND);
-  cairo_set_line_width (cr, tf_figure_theme_pt (theme, 2.4));
-  cairo_stroke (cr);
+  for (int i = 0; i < 8; i++)
+    {
+      double angle = i * G_PI / 4;
+      cairo_move_to (cr, x + r * cos (angle), y + r * sin (angle));
+      pango_cairo_show_layout (cr, layout);
+    }
   tf_figure_theme_set_source (cr, colour);
   cairo_move_to (cr, x, y);
   pango_cairo_show_layout (cr, layout);

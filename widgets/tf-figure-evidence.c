@@ -91,9 +91,9 @@ draw_grades (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
       cairo_line_to (cr, area->x + area->width, y);
       cairo_stroke (cr);
       /* TRANSLATORS: right of the BF01 = 1 line: above it the data favour H0 */
-      tf_fig_text_halo (cr, theme, &theme->muted, size, _("↑ H<sub>0</sub>"), x, y - h * 1.05);
+      tf_fig_text (cr, theme, &theme->muted, size, _("↑ H<sub>0</sub>"), x, y - h * 1.05);
       /* TRANSLATORS: right of the BF01 = 1 line: below it the data favour H1 */
-      tf_fig_text_halo (cr, theme, &theme->muted, size, _("↓ H<sub>1</sub>"), x, y + h * 0.05);
+      tf_fig_text (cr, theme, &theme->muted, size, _("↓ H<sub>1</sub>"), x, y + h * 0.05);
     }
 
   for (guint i = 0; i < n; i++)
@@ -107,7 +107,7 @@ draw_grades (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
 
         if (y1 - y0 < h * 1.05)
           continue;
-        tf_fig_text_halo (cr, theme, &theme->muted, size, _(g[i].name), x, (y0 + y1 - h) / 2);
+        tf_fig_text (cr, theme, &theme->muted, size, _(g[i].name), x, (y0 + y1 - h) / 2);
       }
   cairo_restore (cr);
 }
@@ -301,7 +301,7 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
       cairo_line_to (cr, x, low_area.y + low_area.height);
       cairo_stroke (cr);
       cairo_restore (cr);
-      tf_fig_text_halo (cr, &theme, &theme.foreground, theme.text_size, chosen_label,
+      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, chosen_label,
                         CLAMP (x - w / 2, pad, width - pad - w),
                         top_area.y - label_h - tf_figure_theme_pt (&theme, 1.5));
     }

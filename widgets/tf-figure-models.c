@@ -86,7 +86,7 @@ tf_figure_draw_model_probabilities (cairo_t *cr, double width, double height, do
       double nh = tf_fig_text_height (cr, &theme, theme.label_size, name);
       double values[2] = { models->prior[i], models->posterior[i] };
 
-      tf_fig_text_halo (cr, &theme, &theme.foreground, theme.label_size, name,
+      tf_fig_text (cr, &theme, &theme.foreground, theme.label_size, name,
                         area.x - gap * 2 - nw, centre - nh / 2);
       for (int b = 0; b < 2; b++)
         {

@@ -227,7 +227,7 @@ tf_figure_draw_null_distribution (cairo_t *cr, double width, double height, doub
       cairo_line_to (cr, x, area->y);
       cairo_stroke (cr);
       cairo_restore (cr);
-      tf_fig_text_halo (cr, &theme, &theme.foreground, theme.text_size, obs_label,
+      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, obs_label,
                         CLAMP (x - w / 2, pad, width - pad - w),
                         area->y - obs_h - tf_figure_theme_pt (&theme, 1.5));
     }

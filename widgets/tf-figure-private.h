@@ -42,6 +42,9 @@ double tf_fig_text_height (cairo_t *cr, const TfFigureTheme *theme, double size,
                            const char *markup);
 double tf_fig_text_width (cairo_t *cr, const TfFigureTheme *theme, double size,
                           const char *markup);
+/* Text, top-left at x, y (outside the plot area, where nothing needs a halo). */
+void tf_fig_text (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
+                  double size, const char *markup, double x, double y);
 /* Text with a halo of the background colour (legible over lines), top-left at x, y. */
 void tf_fig_text_halo (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
                        double size, const char *markup, double x, double y);

@@ -350,7 +350,7 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
 
       w = tf_fig_text_width (cr, &theme, theme.text_size, null_label);
       lx = CLAMP (x - w / 2, pad, width - w - pad);
-      tf_fig_text_halo (cr, &theme, &theme.foreground, theme.text_size, null_label, lx,
+      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, null_label, lx,
                         area->y - null_h - tf_figure_theme_pt (&theme, 1.5));
     }
 

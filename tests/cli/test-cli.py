@@ -204,7 +204,25 @@ with tempfile.TemporaryDirectory() as tmp:
         check("pdf page 174 x 100 mm", abs(wpt - 174 / 25.4 * 72) < 0.01 and abs(hpt - 100 / 25.4 * 72) < 0.01,
               size)
 
+    # every kind: drawn (exit 0, a PNG of the asked size) or not applicable (exit 1,
+    # a reason on stderr, nothing written); each style is accepted
+    for kind in ["densities", "sensitivity", "sample-size", "null-distribution",
+                 "model-probabilities"]:
+        for style in ["light", "dark", "print"]:
+            out_png = os.path.join(tmp, f"{kind}-{style}.png")
+            code, out, err = run("figure", demo, "--kind", kind, "--output", out_png,
+                                 "--style", style, "--dpi", "100")
+            check(f"figure {kind} --style {style}: exit 0 or 1", code in (0, 1), f"{code} {err}")
+            if code == 0:
+                with open(out_png, "rb") as f:
+                    w, h = struct.unpack(">II", f.read(24)[16:24])
+                check(f"figure {kind} {style}: size", (w, h) == (round(120 / 25.4 * 100), round(80 / 25.4 * 100)), (w, h))
+            else:
+                check(f"figure {kind} {style}: reason given", err.strip() != "", err)
+                check(f"figure {kind} {style}: nothing written", not os.path.exists(out_png))
+
     for args, want in [
+        (("--kind", "densities", "--output", os.path.join(tmp, "x.png"), "--style", "neon"), 2),
         (("--kind", "pie", "--output", os.path.join(tmp, "x.png")), 2),
         (("--kind", "densities", "--output", os.path.join(tmp, "x.gif")), 2),
         (("--kind", "densities", "--output", os.path.join(tmp, "x.png"), "--width-mm", "0"), 2),
