@@ -84,13 +84,13 @@ static const TfFormField one_proportion[] = {
 };
 
 static const TfFormField two_proportions[] = {
-  DATA ("SuccessesA", N_("_Successes in A"), N_("Trials of group A with the outcome"),
+  DATA ("SuccessesA", N_("_Successes in A"), N_("With the outcome"),
         TF_FIELD_COUNT, TF_SHOWN_ALWAYS, TRUE, successes_a),
-  DATA ("TrialsA", N_("_Trials in A"), N_("All trials of group A"), TF_FIELD_COUNT,
+  DATA ("TrialsA", N_("_Trials in A"), N_("All of group A"), TF_FIELD_COUNT,
         TF_SHOWN_ALWAYS, FALSE, trials_a),
-  DATA ("SuccessesB", N_("S_uccesses in B"), N_("Trials of group B with the outcome"),
+  DATA ("SuccessesB", N_("S_uccesses in B"), N_("With the outcome"),
         TF_FIELD_COUNT, TF_SHOWN_ALWAYS, TRUE, successes_b),
-  DATA ("TrialsB", N_("T_rials in B"), N_("All trials of group B"), TF_FIELD_COUNT,
+  DATA ("TrialsB", N_("T_rials in B"), N_("All of group B"), TF_FIELD_COUNT,
         TF_SHOWN_ALWAYS, FALSE, trials_b),
   NULL_VALUE (N_("_Null difference Δ₀"), N_("θA − θB under the null; 0 is no difference"),
               TF_FIELD_NUMBER),
@@ -135,17 +135,17 @@ static const TfFormField paired_means[] = {
 };
 
 static const TfFormField two_means[] = {
-  DATA ("NA", N_("Size of _A"), N_("Observations in group A"), TF_FIELD_COUNT,
+  DATA ("NA", N_("Size of _A"), N_("Observations in A"), TF_FIELD_COUNT,
         TF_SHOWN_SUMMARIES, TRUE, n_a),
-  DATA ("NB", N_("Size of _B"), N_("Observations in group B"), TF_FIELD_COUNT,
+  DATA ("NB", N_("Size of _B"), N_("Observations in B"), TF_FIELD_COUNT,
         TF_SHOWN_SUMMARIES, FALSE, n_b),
   DATA ("MeanA", N_("_Mean of A"), N_("Sample mean of A"), TF_FIELD_NUMBER,
         TF_SHOWN_SUMMARIES, TRUE, mean_a),
   DATA ("MeanB", N_("M_ean of B"), N_("Sample mean of B"), TF_FIELD_NUMBER,
         TF_SHOWN_SUMMARIES, FALSE, mean_b),
-  DATA ("SDA", N_("_SD of A"), N_("Standard deviation of A"), TF_FIELD_POSITIVE,
+  DATA ("SDA", N_("_SD of A"), N_("Sample SD of A"), TF_FIELD_POSITIVE,
         TF_SHOWN_SUMMARIES, TRUE, sd_a),
-  DATA ("SDB", N_("S_D of B"), N_("Standard deviation of B"), TF_FIELD_POSITIVE,
+  DATA ("SDB", N_("S_D of B"), N_("Sample SD of B"), TF_FIELD_POSITIVE,
         TF_SHOWN_SUMMARIES, FALSE, sd_b),
   DATA ("ValuesA", N_("Values of _A"), N_("Separated by ‘;’, spaces or new lines"),
         TF_FIELD_LIST, TF_SHOWN_VALUES, TRUE, values_a),
@@ -173,11 +173,11 @@ static const TfFormField one_rate[] = {
 };
 
 static const TfFormField two_rates[] = {
-  DATA ("EventsA", N_("_Events in A"), N_("Events counted in group A"), TF_FIELD_COUNT,
+  DATA ("EventsA", N_("_Events in A"), N_("Counted in group A"), TF_FIELD_COUNT,
         TF_SHOWN_ALWAYS, TRUE, events_a),
   DATA ("ExposureA", N_("E_xposure of A"), N_("Observed in group A"), TF_FIELD_POSITIVE,
         TF_SHOWN_ALWAYS, FALSE, exposure_a),
-  DATA ("EventsB", N_("E_vents in B"), N_("Events counted in group B"), TF_FIELD_COUNT,
+  DATA ("EventsB", N_("E_vents in B"), N_("Counted in group B"), TF_FIELD_COUNT,
         TF_SHOWN_ALWAYS, TRUE, events_b),
   DATA ("ExposureB", N_("Ex_posure of B"), N_("Observed in group B"), TF_FIELD_POSITIVE,
         TF_SHOWN_ALWAYS, FALSE, exposure_b),
