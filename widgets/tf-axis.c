@@ -227,6 +227,22 @@ tf_axis_bottom_extent_ticks (cairo_t *cr, const TfFigureTheme *theme, const TfTi
          + (label_h > 0 ? tf_figure_theme_pt (theme, GAP_PT) + label_h : 0);
 }
 
+/* An axis label no longer than max_len: smaller type as far as needed, down to 5 pt.
+ * (No ellipsis: Pango 1.50 warns on ellipsized markup with sub- or superscripts.) */
+static PangoLayout *
+fitted_label (cairo_t *cr, const TfFigureTheme *theme, const char *markup, double max_len)
+{
+  PangoLayout *layout = tf_figure_theme_layout (cr, theme, theme->label_size, markup);
+  double w;
+
+  tf_figure_layout_size (layout, &w, NULL);
+  if (w <= max_len || max_len <= 0)
+    return layout;
+  g_object_unref (layout);
+  return tf_figure_theme_layout (cr, theme, MAX (theme->label_size * max_len / w * 0.98, 5.0),
+                                 markup);
+}
+
 static void
 draw_layout_at (cairo_t *cr, PangoLayout *layout, double x, double y)
 {
@@ -333,8 +349,8 @@ tf_axis_draw_bottom (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *
 
   if (label_markup)
     {
-      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
-                                                               label_markup);
+      g_autoptr (PangoLayout) layout = fitted_label (cr, theme, label_markup,
+                                                     area->width + tf_figure_theme_pt (theme, 8.0));
       double w;
 
       if (tick_h == 0)
@@ -396,8 +412,8 @@ tf_axis_draw_left (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *ar
 
   if (label_markup)
     {
-      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
-                                                               label_markup);
+      g_autoptr (PangoLayout) layout = fitted_label (cr, theme, label_markup,
+                                                     area->height + tf_figure_theme_pt (theme, 8.0));
       double w, h;
 
       tf_figure_layout_size (layout, &w, &h);
