@@ -82,7 +82,11 @@ tf_analysis_reset (TfAnalysis *analysis, TfDesign design)
     .successes = 0,
     .trials = 0,
     .null_kind = TF_NULL_POINT,
-    .null_value = design == TF_DESIGN_ONE_PROPORTION ? 0.5 : 0.0,
+    /* θ0 = 0.5; a rate λ0 = 1 event per unit exposure; a rate ratio of 1 (no
+     * difference); no difference in means or proportions. */
+    .null_value = design == TF_DESIGN_ONE_PROPORTION ? 0.5
+                  : design == TF_DESIGN_ONE_RATE || design == TF_DESIGN_TWO_RATES ? 1.0
+                  : 0.0,
     .null_low = 0.0,
     .null_high = 0.0,
     .direction = TF_DIRECTION_TWO_SIDED,
