@@ -49,11 +49,12 @@ map_vertical (const TfPlotArea *area, double x, TfFigPoints *out)
   out->y[1] = area->y;
 }
 
-/* The posterior's mode for the legend: the core's, else the grid's argmax. */
+/* The posterior's mode for the legend: the core's, else (0: not filled in) the grid's
+ * argmax, which is also right for a true mode at 0 on a grid starting there. */
 static double
 posterior_mode (const TfDensityCurves *curves, guint argmax)
 {
-  if (curves->posterior_mode != 0 || curves->posterior_narrow)
+  if (curves->posterior_mode != 0 && isfinite (curves->posterior_mode))
     return curves->posterior_mode;
   return curves->x[argmax];
 }

@@ -196,6 +196,26 @@ test_densities_known (gconstpointer data)
   canvas_finish (&c, names[style]);
 }
 
+/* A posterior too narrow to draw: a spike at the core's mode, not the grid's argmax. */
+static void
+test_densities_narrow (void)
+{
+  g_autoptr (TfDensityCurves) curves = known_densities ();
+  Canvas c;
+  int px, py;
+
+  curves->posterior_narrow = TRUE;
+  curves->posterior_mode = 0.3125;              /* a value off the grid's argmax, 0.3025 */
+  canvas_init (&c, TF_FIGURE_STYLE_LIGHT);
+  g_assert_true (tf_figure_draw_density_curves (c.cr, W, H, SCALE, curves, NAN, &c.options, &c.area));
+  cairo_surface_flush (c.surface);
+  px = (int) round (tf_plot_area_map_x (&c.area, 0.3125));
+  py = (int) round (c.area.y + c.area.height * 0.5);
+  g_assert_cmpfloat (test_nearest_colour (c.surface, px, py, 1, &c.theme.series[TF_SERIES_POSTERIOR],
+                                          &c.theme.background), <, 0.12);
+  canvas_finish (&c, "known-densities-narrow");
+}
+
 /* BF01 = x (so log10 BF01 = log10 x) on 0.1 .. 10, and P(H0 | data) = BF / (1 + BF) for
  * prior odds 1 (Bayes' rule, common practice). */
 static TfEvidenceCurve *
@@ -431,6 +451,7 @@ main (int argc, char **argv)
   g_test_add_data_func ("/figures/known/densities-light", GINT_TO_POINTER (TF_FIGURE_STYLE_LIGHT), test_densities_known);
   g_test_add_data_func ("/figures/known/densities-dark", GINT_TO_POINTER (TF_FIGURE_STYLE_DARK), test_densities_known);
   g_test_add_data_func ("/figures/known/densities-print", GINT_TO_POINTER (TF_FIGURE_STYLE_PRINT), test_densities_known);
+  g_test_add_func ("/figures/known/densities-narrow", test_densities_narrow);
   g_test_add_data_func ("/figures/known/sensitivity", GINT_TO_POINTER (0), test_evidence_known);
   g_test_add_data_func ("/figures/known/sensitivity-print-jeffreys", GINT_TO_POINTER (1), test_evidence_known);
   g_test_add_data_func ("/figures/known/sample-size", GINT_TO_POINTER (2), test_evidence_known);
