@@ -28,12 +28,11 @@ set_why_not (char **why_not, char *text)
     g_free (text);
 }
 
+/* format: a sentence with one %s for the design's name */
 static char *
-not_provided (const TfAnalysis *analysis, const char *what)
+not_provided (const TfAnalysis *analysis, const char *format)
 {
-  /* TRANSLATORS: the first %s is a figure ("the sensitivity curve"), the second a design */
-  return g_strdup_printf (_("%s is not available for the %s design in this version."),
-                          what, tf_design_label (analysis->design));
+  return g_strdup_printf (format, tf_design_label (analysis->design));
 }
 
 TfDensityCurves *
@@ -97,8 +96,11 @@ evidence_curve_run (const TfAnalysis *analysis, guint n_points, GPtrArray *probl
   hook = sensitivity ? klass->sensitivity : klass->sample_size;
   if (hook == NULL)
     {
-      set_why_not (why_not, not_provided (analysis, sensitivity ? _("The sensitivity curve")
-                                                                : _("The sample-size curve")));
+      set_why_not (why_not,
+                   not_provided (analysis,
+                                 sensitivity
+                                 ? _("The sensitivity curve is not available for the design “%s” in this version.")
+                                 : _("The sample-size curve is not available for the design “%s” in this version.")));
       return NULL;
     }
   curve = evidence_curve_new (n_points);
@@ -161,7 +163,7 @@ tf_null_distribution_new (const TfAnalysis *analysis, guint n_points, GPtrArray 
     return NULL;
   if (klass->null_distribution == NULL)
     {
-      set_why_not (why_not, not_provided (analysis, _("The null distribution")));
+      set_why_not (why_not, not_provided (analysis, _("The null distribution is not available for the design “%s” in this version.")));
       return NULL;
     }
   dist = g_new0 (TfNullDistribution, 1);
@@ -211,7 +213,7 @@ tf_model_probabilities_new (const TfAnalysis *analysis, GPtrArray *problems, cha
     return NULL;
   if (klass->model_probabilities == NULL)
     {
-      set_why_not (why_not, not_provided (analysis, _("The model probabilities")));
+      set_why_not (why_not, not_provided (analysis, _("The model probabilities are not available for the design “%s” in this version.")));
       return NULL;
     }
   models = g_new0 (TfModelProbabilities, 1);
