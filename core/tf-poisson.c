@@ -380,7 +380,7 @@ tf_pois_log_exact_two_sided (double k, double mu)
   if (k < mu)
     {
       /* smallest j >= ceil(μ) with ln P(X = j) <= ld */
-      double lo = ceil (mu), step = MAX (1.0, sqrt (mu));
+      double lo = ceil (mu), step = MAX (1.0, floor (sqrt (mu)));
       double hi = lo;
       while (tf_log_dpois (hi, mu) > ld)
         {

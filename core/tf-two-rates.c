@@ -137,6 +137,12 @@ double
 tf_two_rates_ratio_quantile_log (double log_p, double sa, double ra, double sb, double rb,
                                  gboolean lower)
 {
+  if (log_p > -G_LN2)
+    {
+      /* invert the other tail, the one that is small */
+      log_p = tf_log1mexp (log_p);
+      lower = !lower;
+    }
   double w = tf_incbeta_inverse_log (log_p, sa, sb, lower);
   double v = tf_incbeta_inverse_log (log_p, sb, sa, !lower);
   if (v == 0.0)

@@ -1,0 +1,271 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * test-rates.c: the one-rate and two-rates designs and the Poisson numerics under them.
+ * Every check value names its source; tolerances are relative unless stated.
+ */
+#include "tf-analysis.h"
+#include "tf-curves.h"
+#include "tf-poisson.h"
+#include "tf-results.h"
+#include "tf-one-rate.h"
+#include "tf-two-rates.h"
+
+#include <math.h>
+#include <gsl/gsl_errno.h>
+
+static void
+assert_rel (double got, double want, double tol)
+{
+  if (!(fabs (got - want) <= tol * fabs (want)))
+    g_error ("got %.17g, want %.17g (relative tolerance %g)", got, want, tol);
+}
+
+static double
+get (const TfResults *r, const char *id)
+{
+  double v = NAN;
+  if (!tf_results_get (r, id, &v))
+    g_error ("result %s is missing or undefined", id);
+  return v;
+}
+
+static TfAnalysis *
+one_rate (double k, double e, double l0)
+{
+  TfAnalysis *a = tf_analysis_new (TF_DESIGN_ONE_RATE);
+  a->events = k;
+  a->exposure = e;
+  a->null_value = l0;
+  return a;
+}
+
+static TfAnalysis *
+two_rates (double ka, double ea, double kb, double eb)
+{
+  TfAnalysis *a = tf_analysis_new (TF_DESIGN_TWO_RATES);
+  a->events_a = ka;
+  a->exposure_a = ea;
+  a->events_b = kb;
+  a->exposure_b = eb;
+  return a;
+}
+
+/* Every number is finite or undefined with a reason: no NaN leaves the core. */
+static void
+assert_all_finite (const TfResults *r)
+{
+  for (guint i = 0; i < r->numbers->len; i++)
+    {
+      const TfNumber *n = g_ptr_array_index (r->numbers, i);
+      if (n->status == TF_STATUS_OK)
+        g_assert_true (isfinite (n->value));
+      else
+        g_assert_nonnull (n->reason);
+    }
+}
+
+static void
+test_garwood (void)
+{
+  double lo, hi;
+
+  /* 10 events, 95%: 4.7954, 18.3904 (from memory, the classic table value; verified
+   * with scipy 1.10.1 chi2.ppf(0.025, 20)/2 = 4.7953886961324335, chi2.ppf(0.975, 22)/2 =
+   * 18.39035604201778) */
+  tf_pois_garwood (10, 0.95, &lo, &hi);
+  assert_rel (lo, 4.7953886961324335, 1e-9);
+  assert_rel (hi, 18.39035604201778, 1e-9);
+  /* 0 events: lower 0, upper −ln(0.025) = 3.6888794541 (common practice, closed form) */
+  tf_pois_garwood (0, 0.95, &lo, &hi);
+  g_assert_cmpfloat (lo, ==, 0.0);
+  assert_rel (hi, -log (0.025), 1e-12);
+}
+
+static void
+test_one_rate_example (void)
+{
+  g_autoptr (TfAnalysis) a = one_rate (15, 4, 2);   /* μ0 = 8 */
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+
+  g_assert_nonnull (r);
+  /* Σ of pmf(j; 8) over pmf(j) <= pmf(15)(1 + 1e-7), with scipy 1.10.1
+   * stats.poisson.pmf: 0.020276154049088967 */
+  assert_rel (get (r, "p_value"), 0.020276154049088967, 1e-9);
+  assert_rel (get (r, "p_value_exact"), 0.020276154049088967, 1e-9);
+  /* Garwood / E with scipy 1.10.1 chi2.ppf(0.025, 30)/8, chi2.ppf(0.975, 32)/8 */
+  assert_rel (get (r, "ci_low"), 2.098846533195829, 1e-9);
+  assert_rel (get (r, "ci_high"), 6.185054717871461, 1e-9);
+  /* BF01 = Poisson(15; 8) / NB marginal, Gamma(1, 1) prior, mpmath 1.2.1 at 30 digits
+   * from loggamma: 1.28266882073852746 */
+  assert_rel (get (r, "bf01"), 1.28266882073852746, 1e-9);
+  assert_rel (get (r, "estimate"), 3.75, 1e-15);
+  assert_all_finite (r);
+
+  /* greater: P(X >= 15; 8), scipy 1.10.1 stats.poisson.sf(14, 8) */
+  a->direction = TF_DIRECTION_GREATER;
+  g_autoptr (TfResults) g = tf_analysis_compute (a, problems);
+  assert_rel (get (g, "p_value"), 0.017256990397966385, 1e-9);
+  /* min_bf01 = −e p ln p (Sellke, Bayarri & Berger 2001) */
+  double p = get (g, "p_value");
+  assert_rel (get (g, "min_bf01"), -exp (1.0) * p * log (p), 1e-12);
+}
+
+static void
+test_two_rates_example (void)
+{
+  g_autoptr (TfAnalysis) a = two_rates (11, 800, 23, 3011);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+
+  g_assert_nonnull (r);
+  /* null_value 0 is read as ratio 1: conditional binomial against π0 = 800/3811,
+   * scipy 1.10.1 stats.binomtest(11, 34, 800/3811).pvalue */
+  assert_rel (get (r, "p_value"), 0.13663444706428232, 1e-9);
+  /* Clopper–Pearson carried to the ratio, scipy 1.10.1
+   * binomtest(11, 34, ...).proportion_ci(0.95, 'exact'), ρ = (3011/800) π/(1 − π) */
+  assert_rel (get (r, "ci_low"), 0.7922050858333567, 1e-8);
+  assert_rel (get (r, "ci_high"), 3.8438627403949517, 1e-8);
+  assert_rel (get (r, "estimate"), (11.0 / 800) / (23.0 / 3011), 1e-15);
+  /* ratio 1 given explicitly gives the same */
+  a->null_value = 1.0;
+  g_autoptr (TfResults) r1 = tf_analysis_compute (a, problems);
+  assert_rel (get (r1, "bf01"), get (r, "bf01"), 1e-15);
+  assert_all_finite (r);
+}
+
+static void
+test_extremes (void)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  const double ks[] = { 0, 1, 1e12 };
+  const double es[] = { 1e-3, 1, 1e12 };
+
+  for (guint i = 0; i < G_N_ELEMENTS (ks); i++)
+    for (guint j = 0; j < G_N_ELEMENTS (es); j++)
+      for (int d = 0; d < 3; d++)
+        {
+          g_autoptr (TfAnalysis) a = one_rate (ks[i], es[j], 1.0);
+          a->direction = d;
+          g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+          g_assert_nonnull (r);
+          assert_all_finite (r);
+          g_autoptr (TfAnalysis) b = two_rates (ks[i], es[j], ks[G_N_ELEMENTS (ks) - 1 - i], 1.0);
+          b->direction = d;
+          g_autoptr (TfResults) s = tf_analysis_compute (b, problems);
+          g_assert_nonnull (s);
+          assert_all_finite (s);
+        }
+  /* 1e12 events against their own mean: the exact p stays near 1, the BF finite */
+  g_autoptr (TfAnalysis) a = one_rate (1e12, 1e12, 1.0);
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+  g_assert_cmpfloat (get (r, "p_value"), >, 0.99);
+  g_assert_cmpuint (problems->len, ==, 0);
+}
+
+static void
+test_interval_null (void)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) a = one_rate (15, 4, 2);
+  a->null_kind = TF_NULL_INTERVAL;
+  a->null_low = 3;
+  a->null_high = 4;
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+  /* the estimate 3.75 lies in the null: every p-value is 1 (common practice) */
+  assert_rel (get (r, "p_value"), 1.0, 0);
+  g_assert_cmpfloat (get (r, "bf01"), >, 1.0);
+  assert_all_finite (r);
+}
+
+static void
+test_validation (void)
+{
+  struct { TfDesign d; const char *key; } cases[] = {
+    { TF_DESIGN_ONE_RATE, "Events" }, { TF_DESIGN_ONE_RATE, "Exposure" },
+    { TF_DESIGN_ONE_RATE, "Value" }, { TF_DESIGN_TWO_RATES, "EventsA" },
+    { TF_DESIGN_TWO_RATES, "ExposureA" }, { TF_DESIGN_TWO_RATES, "EventsB" },
+    { TF_DESIGN_TWO_RATES, "ExposureB" },
+  };
+  for (guint i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      g_autoptr (TfAnalysis) a = cases[i].d == TF_DESIGN_ONE_RATE ? one_rate (3, 2, 1)
+                                                                  : two_rates (3, 2, 4, 5);
+      g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+      const char *k = cases[i].key;
+      if (g_str_equal (k, "Events")) a->events = -1;
+      else if (g_str_equal (k, "Exposure")) a->exposure = 0;
+      else if (g_str_equal (k, "Value")) a->null_value = -2;
+      else if (g_str_equal (k, "EventsA")) a->events_a = 2.5;
+      else if (g_str_equal (k, "ExposureA")) a->exposure_a = -1;
+      else if (g_str_equal (k, "EventsB")) a->events_b = -3;
+      else if (g_str_equal (k, "ExposureB")) a->exposure_b = INFINITY;
+      g_assert_null (tf_analysis_compute (a, problems));
+      g_assert_nonnull (tf_problem_list_find (problems,
+                                              g_str_equal (k, "Value") ? "Null" : "Data", k));
+    }
+  g_autoptr (TfAnalysis) a = one_rate (3, 2, 1);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  a->prior_shape = 0;
+  a->prior_rate = -1;
+  a->prior = TF_PRIOR_BETA;
+  g_assert_false (tf_analysis_validate (a, problems));
+  g_assert_nonnull (tf_problem_list_find (problems, "Alternative", "PriorShape"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Alternative", "PriorRate"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Alternative", "Prior"));
+}
+
+static void
+test_curves (void)
+{
+  g_autoptr (TfAnalysis) a = one_rate (15, 4, 2);
+  g_autoptr (TfAnalysis) b = two_rates (11, 800, 23, 3011);
+  TfAnalysis *both[] = { a, b };
+
+  for (guint i = 0; i < 2; i++)
+    {
+      g_autoptr (TfDensityCurves) c = tf_density_curves_new (both[i], 200, NULL);
+      g_assert_nonnull (c);
+      for (guint j = 0; j < c->n; j++)
+        g_assert_true (isfinite (c->prior[j]) && isfinite (c->posterior[j])
+                       && isfinite (c->likelihood[j]) && c->posterior[j] >= 0.0);
+      g_assert_true (c->lo <= c->null_value && c->null_value <= c->hi);
+      g_autoptr (TfEvidenceCurve) s = tf_sensitivity_curve_new (both[i], 50, NULL, NULL);
+      g_assert_nonnull (s);
+      g_assert_true (s->x_log);
+      assert_rel (s->x[0], 1e-2, 1e-12);
+      assert_rel (s->x[49], 1e4, 1e-12);
+      g_autoptr (TfEvidenceCurve) n = tf_sample_size_curve_new (both[i], 50, NULL, NULL);
+      g_assert_nonnull (n);
+      for (guint j = 0; j < n->n; j++)
+        g_assert_true (isfinite (n->log_bf01[j]));
+      g_autoptr (TfNullDistribution) d = tf_null_distribution_new (both[i], 100, NULL, NULL);
+      g_assert_nonnull (d);
+      g_assert_true (d->discrete);
+      /* the masses in the tail add up to the exact p-value (Poisson tails beyond the
+       * range shown are below 1e-10 here) */
+      double tail = 0.0, total = 0.0;
+      for (guint j = 0; j < d->n; j++)
+        {
+          total += d->mass[j];
+          if (d->in_tail[j])
+            tail += d->mass[j];
+        }
+      assert_rel (total, 1.0, 1e-8);
+      assert_rel (tail, d->p_value, 1e-7);
+    }
+}
+
+int
+main (int argc, char **argv)
+{
+  gsl_set_error_handler_off ();
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/rates/garwood", test_garwood);
+  g_test_add_func ("/rates/one-rate-example", test_one_rate_example);
+  g_test_add_func ("/rates/two-rates-example", test_two_rates_example);
+  g_test_add_func ("/rates/extremes", test_extremes);
+  g_test_add_func ("/rates/interval-null", test_interval_null);
+  g_test_add_func ("/rates/validation", test_validation);
+  g_test_add_func ("/rates/curves", test_curves);
+  return g_test_run ();
+}
