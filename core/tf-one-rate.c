@@ -406,7 +406,8 @@ log_bf01_to_posterior_null (double lbf01, double pi0)
 
 /* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
 gboolean
-tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                          char **why_not G_GNUC_UNUSED)
 {
   const TfAnalysis *a = analysis;
   double mean = a->prior_shape / a->prior_rate;
@@ -431,7 +432,8 @@ tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, cha
  * λ0 E' + z √(λ0 E') (a real count; the Bayes factor's formula takes one), floored at
  * 0 where the exposure is too small to reach that p-value. */
 gboolean
-tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                          char **why_not G_GNUC_UNUSED)
 {
   const TfAnalysis *a = analysis;
   RateTests t;

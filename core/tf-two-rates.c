@@ -546,7 +546,8 @@ posterior_null_of (double lbf01, double pi0)
 
 /* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
 gboolean
-tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                          char **why_not G_GNUC_UNUSED)
 {
   const TfAnalysis *a = analysis;
   double mean = a->prior_shape / a->prior_rate;
@@ -573,7 +574,8 @@ tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, ch
  * observed exact p-value (real counts, clipped to [0, n] where the total is too small
  * to reach that p-value). */
 gboolean
-tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                          char **why_not G_GNUC_UNUSED)
 {
   const TfAnalysis *a = analysis;
   const double ka = a->events_a, kb = a->events_b, n = ka + kb;
