@@ -80,6 +80,8 @@ tf_incbeta_inverse_log (double lp, double a, double b, gboolean lower)
       double xn = x - g / slope;
       if (!(xn > lo && xn < hi) || !isfinite (xn))
         {
+          if (lo == 0.0 && hi <= DBL_MIN)
+            return 0.0;         /* the quantile underflows */
           if (lo > 0.0 && hi / lo > 4.0)
             xn = sqrt (lo * hi);
           else if (lo == 0.0 && hi < 1e-3)
@@ -89,11 +91,19 @@ tf_incbeta_inverse_log (double lp, double a, double b, gboolean lower)
           else
             xn = 0.5 * (lo + hi);
           if (xn <= lo || xn >= hi)
-            return x;
+            xn = 0.5 * (lo + hi);
+          if (xn <= lo || xn >= hi)
+            {
+              /* No double lies strictly inside the bracket: the quantile rounds to
+               * one of its ends. */
+              if (hi == 1.0)
+                return 1.0;
+              return lo == 0.0 ? 0.0 : x;
+            }
         }
-      if (fabs (xn - x) <= 4.0 * DBL_EPSILON * MIN (x, 1.0 - x) || fabs (xn - x) < DBL_MIN)
+      if (fabs (xn - x) <= 0.5 * DBL_EPSILON * MIN (x, 1.0 - x) || fabs (xn - x) < DBL_MIN)
         return xn;
-      if (hi - lo <= 4.0 * DBL_EPSILON * MIN (lo, 1.0 - hi) && lo > 0.0)
+      if (hi - lo <= 0.5 * DBL_EPSILON * MIN (lo, 1.0 - hi) && lo > 0.0)
         return xn;
       x = xn;
     }

@@ -107,6 +107,36 @@ log_pq (double p, double q, double *lp, double *lq)
     }
 }
 
+/* Loader's saddle-point form given k and n − k separately, so that real k and n − k
+ * from beta shapes keep every digit (Loader 2000). d1 = k − np. */
+static double
+log_dbinom_split (double k, double nk, double p, double q, double d1)
+{
+  double n = k + nk;
+  double lc = tf_stirling_remainder (n) - tf_stirling_remainder (k)
+              - tf_stirling_remainder (nk)
+              - tf_bd0_delta (k, n * p, d1) - tf_bd0_delta (nk, n * q, -d1);
+  double lf = TF_LN_2PI + log (k) + log (nk) - log (n);
+  return lc - 0.5 * lf;
+}
+
+/* k q − nk p = k − (k + nk) p, exact for the smaller of p and q = 1 − p: the products'
+ * rounding errors recovered by fma (Ogita, Rump & Oishi 2005, TwoProduct). */
+static double
+count_minus_mean (double k, double nk, double p, double q)
+{
+  double p1, p2;
+  if (p <= q)
+    {
+      p1 = k * p;
+      p2 = nk * p;
+      return ((k - p1) - p2) - (fma (k, p, -p1) + fma (nk, p, -p2));
+    }
+  p1 = k * q;
+  p2 = nk * q;
+  return ((p1 - nk) + p2) + (fma (k, q, -p1) + fma (nk, q, -p2));
+}
+
 /* Binomial log probability in saddle-point form (Loader 2000). */
 double
 tf_log_dbinom (double k, double n, double p, double q)
@@ -122,17 +152,7 @@ tf_log_dbinom (double k, double n, double p, double q)
     return p == 0.0 ? -INFINITY : n * lp;
   if (p == 0.0 || q == 0.0)
     return -INFINITY;
-
-  double nk = n - k;
-  double m1 = n * p, m2 = n * q;
-  /* d1 = k − np and (n − k) − nq = −d1, from the smaller of p and q, with the rounding
-   * error of the product recovered by fma (Ogita, Rump & Oishi 2005, TwoProduct). */
-  double d1 = p <= q ? (k - m1) - fma (n, p, -m1) : (m2 - nk) + fma (n, q, -m2);
-  double lc = tf_stirling_remainder (n) - tf_stirling_remainder (k)
-              - tf_stirling_remainder (nk)
-              - tf_bd0_delta (k, m1, d1) - tf_bd0_delta (nk, m2, -d1);
-  double lf = TF_LN_2PI + log (k) + log1p (-k / n);
-  return lc - 0.5 * lf;
+  return log_dbinom_split (k, n - k, p, q, count_minus_mean (k, n - k, p, q));
 }
 
 /* ln B(a, b) = ½ ln 2π + ½ ln(s / ab) − a ln(1 + b/a) − b ln(1 + a/b) + δ(a) + δ(b) − δ(s),
@@ -170,7 +190,8 @@ tf_log_dbeta (double x, double y, double a, double b)
   if (y == 0.0)
     return b < 1.0 ? INFINITY : (b == 1.0 ? log (a) : -INFINITY);
   if (a > 2.0 && b > 2.0)
-    return log (a + b - 1.0) + tf_log_dbinom (a - 1.0, a + b - 2.0, x, y);
+    return log (a + b - 1.0)
+           + log_dbinom_split (a - 1.0, b - 1.0, x, y, count_minus_mean (a - 1.0, b - 1.0, x, y));
   log_pq (x, y, &lx, &ly);
   return (a - 1.0) * lx + (b - 1.0) * ly - tf_log_beta (a, b);
 }
