@@ -289,6 +289,12 @@ tf_gamma_inc_inverse_log (double lp, double a, gboolean lower)
   if (lp == -INFINITY)
     return lower ? 0.0 : INFINITY;
 
+  if (lp > -G_LN2)
+    {
+      /* invert the other tail, the one that is small */
+      lp = tf_log1mexp (lp);
+      lower = !lower;
+    }
   double lo = 0.0, hi = INFINITY;
   double x = inverse_guess (lp, a, lower);
 
