@@ -5,6 +5,8 @@
 #include "tf-one-proportion.h"
 #include "tf-one-rate.h"
 #include "tf-two-rates.h"
+#include "tf-one-mean.h"
+#include "tf-two-means.h"
 
 static const TfDesignClass one_proportion = {
   .design = TF_DESIGN_ONE_PROPORTION,
@@ -24,10 +26,13 @@ tf_design_class (TfDesign design)
       return &tf_one_rate_class;
     case TF_DESIGN_TWO_RATES:
       return &tf_two_rates_class;
-    case TF_DESIGN_TWO_PROPORTIONS:
     case TF_DESIGN_ONE_MEAN:
+      return tf_one_mean_class ();
     case TF_DESIGN_PAIRED_MEANS:
+      return tf_paired_means_class ();
     case TF_DESIGN_TWO_MEANS:
+      return tf_two_means_class ();
+    case TF_DESIGN_TWO_PROPORTIONS:
     case TF_N_DESIGNS:
     default:
       return NULL;

@@ -1,0 +1,127 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-one-mean.c: one mean, and paired means (one mean of the differences).
+ */
+#include "tf-one-mean.h"
+
+#include <math.h>
+#include <glib/gi18n-lib.h>
+
+static gboolean
+paired (const TfAnalysis *analysis)
+{
+  return analysis->design == TF_DESIGN_PAIRED_MEANS;
+}
+
+static void
+one_mean_validate (const TfAnalysis *a, GPtrArray *problems)
+{
+  gboolean is_paired = paired (a);
+  gboolean from_values = is_paired ? (a->values_a != NULL && a->values_b != NULL)
+                                   : a->values != NULL;
+  gboolean known = a->has_known_sd;
+
+  if (is_paired && from_values && a->values_a->len != a->values_b->len)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", "ValuesB",
+                                     _("ValuesB must have as many values as ValuesA for paired means (%u and %u)."),
+                                     a->values_b->len, a->values_a->len));
+  else
+    tf_means_validate_sample (problems, "N", is_paired ? "MeanDiff" : "Mean",
+                              is_paired ? "SDDiff" : "SD", is_paired ? "ValuesA" : "Values",
+                              from_values, a->n, a->mean, a->sd, known ? 1.0 : 2.0, known);
+  if (known && !(isfinite (a->known_sd) && a->known_sd > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", "KnownSD",
+                                     _("KnownSD must be above 0 (it is %g)."), a->known_sd));
+  tf_means_validate_common (a, problems);
+}
+
+void
+tf_one_mean_stats (const TfAnalysis *a, TfMeansStats *s)
+{
+  double sigma = a->has_known_sd ? a->known_sd : a->sd;
+
+  *s = (TfMeansStats) { 0 };
+  s->known_sd = a->has_known_sd;
+  s->estimate = a->mean;
+  s->se = sigma / sqrt (a->n);
+  /* (x̄ − μ0) √n / s: the difference first, so a mean far from 0 keeps its digits */
+  s->t = (a->mean - a->null_value) / s->se;
+  s->df = a->has_known_sd ? INFINITY : a->n - 1.0;
+  s->t_delta = s->t;
+  s->df_delta = s->df;
+  s->n_eff = a->n;
+  s->n_total = a->n;
+}
+
+static void
+one_mean_compute (const TfAnalysis *a, TfResults *results)
+{
+  TfMeansStats s;
+  tf_one_mean_stats (a, &s);
+  tf_means_compute (a, &s, results);
+}
+
+static void
+one_mean_densities (const TfAnalysis *a, TfDensityCurves *curves)
+{
+  TfMeansStats s;
+  tf_one_mean_stats (a, &s);
+  tf_means_densities (a, &s, curves);
+}
+
+static gboolean
+one_mean_sensitivity (const TfAnalysis *a, TfEvidenceCurve *curve, char **why_not)
+{
+  TfMeansStats s;
+  tf_one_mean_stats (a, &s);
+  return tf_means_sensitivity (a, &s, curve, why_not);
+}
+
+static gboolean
+one_mean_sample_size (const TfAnalysis *a, TfEvidenceCurve *curve, char **why_not)
+{
+  TfMeansStats s;
+  tf_one_mean_stats (a, &s);
+  return tf_means_sample_size (a, &s, 1.0, 1.0, curve, why_not);
+}
+
+static gboolean
+one_mean_null_distribution (const TfAnalysis *a, TfNullDistribution *dist, char **why_not)
+{
+  TfMeansStats s;
+  tf_one_mean_stats (a, &s);
+  return tf_means_null_distribution (a, &s, dist, why_not);
+}
+
+static const TfDesignClass one_mean = {
+  .design = TF_DESIGN_ONE_MEAN,
+  .validate = one_mean_validate,
+  .compute = one_mean_compute,
+  .densities = one_mean_densities,
+  .sensitivity = one_mean_sensitivity,
+  .sample_size = one_mean_sample_size,
+  .null_distribution = one_mean_null_distribution,
+};
+
+static const TfDesignClass paired_means = {
+  .design = TF_DESIGN_PAIRED_MEANS,
+  .validate = one_mean_validate,
+  .compute = one_mean_compute,
+  .densities = one_mean_densities,
+  .sensitivity = one_mean_sensitivity,
+  .sample_size = one_mean_sample_size,
+  .null_distribution = one_mean_null_distribution,
+};
+
+const TfDesignClass *
+tf_one_mean_class (void)
+{
+  return &one_mean;
+}
+
+const TfDesignClass *
+tf_paired_means_class (void)
+{
+  return &paired_means;
+}
