@@ -8,6 +8,7 @@
 #include "tf-plot-view.h"
 #include "tf-result-list.h"
 #include "tf-explanation-pane.h"
+#include "tf-figure.h"
 
 G_BEGIN_DECLS
 
@@ -26,5 +27,15 @@ const char *tf_window_get_subtitle (TfWindow *self);
 /* The "Save changes?" dialog while it is shown, else NULL. Its responses are "cancel",
  * "discard" and "save": adw_message_dialog_response() answers it as a click would. */
 AdwMessageDialog *tf_window_get_save_changes_dialog (TfWindow *self);
+
+/* Export figure…: after the file chooser, the dialog of the figure's size for file; its
+ * responses are "cancel" and "export". NULL unless shown. */
+void tf_window_show_export_options (TfWindow *self, GFile *file);
+AdwMessageDialog *tf_window_get_export_dialog (TfWindow *self);
+/* What the dialog's "export" does: writes the plot's figure kind to file (PNG, SVG or PDF
+ * by its ending) with tf_figure_export_full(); on failure says why in a dialog naming
+ * the file and returns FALSE. */
+gboolean tf_window_export_figure (TfWindow *self, GFile *file, double width_mm,
+                                  double height_mm, double dpi, const TfFigureOptions *options);
 
 G_END_DECLS

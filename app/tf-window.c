@@ -3,59 +3,20 @@
  * analysis that cannot be computed clears the figure, the numbers and the explanations
  * and says what to fix, so nothing stale is ever shown. An edit after the last load or
  * save marks the analysis modified; closing the window or opening another analysis over
- * it first asks whether to save it, so nothing is lost.
+ * it first asks whether to save it, so nothing is lost. The actions (open, save, export
+ * the figure, the "Save changes?" question) are in tf-window-actions.c.
  */
 #include <glib/gi18n.h>
 #include "tf-window.h"
 #include "tf-window-private.h"
+#include "tf-window-actions.h"
 #include "tf-analysis-file.h"
 #include "tf-results.h"
 #include "tf-design.h"
 
 #define DEMO_RESOURCE "/org/twofold/Twofold/demo/seed-germination.twofold"
-#define FILE_SUFFIX ".twofold"
-
-/* What waits for the answer to "Save changes?" */
-typedef enum {
-  TF_PENDING_NONE,
-  TF_PENDING_CLOSE,
-  TF_PENDING_OPEN
-} TfPendingAction;
-
-struct _TfWindow
-{
-  AdwApplicationWindow parent_instance;
-
-  /* template */
-  AdwWindowTitle *window_title;
-  AdwToastOverlay *toast_overlay;
-  AdwFlap *flap;
-  GtkToggleButton *explanations_button;
-  TfAnalysisForm *form;
-  GtkStack *center_stack;
-  GtkPaned *paned;
-  TfPlotView *plot_view;
-  TfResultList *result_list;
-  AdwStatusPage *invalid_page;
-  TfExplanationPane *explanation_pane;
-
-  TfAnalysis *analysis;         /* the document, as the form last set it */
-  TfResults *results;           /* NULL while the analysis cannot be computed */
-  gboolean savable;             /* every field parsed and only the design is missing */
-  GFile *file;                  /* NULL for the demo and new analyses */
-  gboolean is_demo;
-  GSettings *settings;          /* NULL when the schema is not installed */
-  GtkFileChooserNative *chooser;
-
-  gboolean modified;            /* edited since the last load or save */
-  TfPendingAction pending;      /* what to do once the analysis is saved or discarded */
-  AdwMessageDialog *save_changes_dialog;  /* NULL unless shown; not owned */
-  gboolean close_confirmed;     /* the next close-request closes, unasked */
-};
 
 G_DEFINE_FINAL_TYPE (TfWindow, tf_window, ADW_TYPE_APPLICATION_WINDOW)
-
-static void show_open_chooser (TfWindow *self);
 
 static gboolean
 has_title (TfWindow *self)
@@ -64,8 +25,8 @@ has_title (TfWindow *self)
 }
 
 /* What the analysis is called: its title, else its file name, else "Untitled Analysis". */
-static char *
-document_name (TfWindow *self)
+char *
+tf_window_document_name (TfWindow *self)
 {
   if (has_title (self))
     return g_strdup (self->analysis->title);
@@ -74,8 +35,8 @@ document_name (TfWindow *self)
   return g_strdup (_("Untitled Analysis"));
 }
 
-static void
-update_title (TfWindow *self)
+void
+tf_window_update_title (TfWindow *self)
 {
   const char *title = has_title (self) ? self->analysis->title : _("Untitled Analysis");
   const char *design = tf_design_label (self->analysis ? self->analysis->design
@@ -184,6 +145,7 @@ recompute (TfWindow *self)
       tf_plot_view_set_analysis (self->plot_view, self->analysis);
       tf_explanation_pane_set_results (self->explanation_pane, self->analysis, self->results);
       gtk_stack_set_visible_child_name (self->center_stack, "analysis");
+      tf_window_actions_update (self);
       return;
     }
 
@@ -208,6 +170,7 @@ recompute (TfWindow *self)
   adw_status_page_set_description (self->invalid_page, description);
   tf_plot_view_set_analysis (self->plot_view, NULL);
   gtk_stack_set_visible_child_name (self->center_stack, "invalid");
+  tf_window_actions_update (self);
 }
 
 static void
@@ -215,7 +178,7 @@ on_form_changed (TfAnalysisForm *form, TfWindow *self)
 {
   recompute (self);
   self->modified = TRUE;
-  update_title (self);    /* the design may have changed too */
+  tf_window_update_title (self);    /* the design may have changed too */
 }
 
 void
@@ -235,11 +198,11 @@ tf_window_set_analysis (TfWindow *self, const TfAnalysis *analysis, GFile *file)
   self->modified = FALSE;
   tf_analysis_form_set_analysis (self->form, self->analysis);
   recompute (self);
-  update_title (self);
+  tf_window_update_title (self);
 }
 
-static void
-show_error (TfWindow *self, const char *heading, const char *body)
+void
+tf_window_show_error (TfWindow *self, const char *heading, const char *body)
 {
   GtkWidget *dialog = adw_message_dialog_new (GTK_WINDOW (self), heading, body);
 
@@ -248,8 +211,8 @@ show_error (TfWindow *self, const char *heading, const char *body)
   gtk_window_present (GTK_WINDOW (dialog));
 }
 
-static char *
-file_display_name (GFile *file)
+char *
+tf_window_file_display_name (GFile *file)
 {
   g_autofree char *path = g_file_get_path (file);
   return path ? g_filename_display_name (path) : g_file_get_parse_name (file);
@@ -280,14 +243,14 @@ tf_window_open_file (TfWindow *self, GFile *file)
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
   g_autoptr (TfAnalysis) analysis = NULL;
   g_autofree char *path = g_file_get_path (file);
-  g_autofree char *name = file_display_name (file);
+  g_autofree char *name = tf_window_file_display_name (file);
 
   g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
 
   if (path == NULL)
     {
       g_autofree char *heading = g_strdup_printf (_("Could Not Open “%s”"), name);
-      show_error (self, heading, _("Only files on this computer can be opened."));
+      tf_window_show_error (self, heading, _("Only files on this computer can be opened."));
       return FALSE;
     }
   analysis = tf_analysis_load (path, problems);
@@ -297,18 +260,26 @@ tf_window_open_file (TfWindow *self, GFile *file)
     {
       g_autofree char *heading = g_strdup_printf (_("Could Not Open “%s”"), name);
       g_autofree char *body = problems_to_text (problems, TRUE);
-      show_error (self, heading, body);
+      tf_window_show_error (self, heading, body);
       return FALSE;
     }
   tf_window_set_analysis (self, analysis, file);
-  if (self->settings)
-    {
-      g_autoptr (GFile) parent = g_file_get_parent (file);
-      g_autofree char *folder = parent ? g_file_get_path (parent) : NULL;
-      if (folder)
-        g_settings_set_string (self->settings, "last-folder", folder);
-    }
+  tf_window_remember_folder (self, file);
   return TRUE;
+}
+
+void
+tf_window_remember_folder (TfWindow *self, GFile *file)
+{
+  g_autoptr (GFile) parent = NULL;
+  g_autofree char *folder = NULL;
+
+  if (self->settings == NULL)
+    return;
+  parent = g_file_get_parent (file);
+  folder = parent ? g_file_get_path (parent) : NULL;
+  if (folder)
+    g_settings_set_string (self->settings, "last-folder", folder);
 }
 
 void
@@ -342,287 +313,7 @@ tf_window_open_demo (TfWindow *self)
     }
   tf_window_set_analysis (self, analysis, NULL);
   self->is_demo = TRUE;
-  update_title (self);
-}
-
-/* Files */
-
-static GtkFileFilter *
-twofold_filter_new (void)
-{
-  GtkFileFilter *filter = gtk_file_filter_new ();
-
-  gtk_file_filter_set_name (filter, _("Twofold analyses"));
-  gtk_file_filter_add_mime_type (filter, "application/x-twofold");
-  gtk_file_filter_add_suffix (filter, "twofold");
-  return filter;
-}
-
-static void
-chooser_set_folder (TfWindow *self, GtkFileChooser *chooser)
-{
-  g_autofree char *folder = NULL;
-
-  if (self->file)
-    {
-      g_autoptr (GFile) parent = g_file_get_parent (self->file);
-      if (parent)
-        gtk_file_chooser_set_current_folder (chooser, parent, NULL);
-      return;
-    }
-  if (self->settings)
-    folder = g_settings_get_string (self->settings, "last-folder");
-  if (folder && *folder)
-    {
-      g_autoptr (GFile) dir = g_file_new_for_path (folder);
-      gtk_file_chooser_set_current_folder (chooser, dir, NULL);
-    }
-}
-
-static void
-on_open_response (GtkNativeDialog *dialog, int response, TfWindow *self)
-{
-  if (response == GTK_RESPONSE_ACCEPT)
-    {
-      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
-      if (file)
-        tf_window_open_file (self, file);
-    }
-  g_clear_object (&self->chooser);
-}
-
-static void
-show_open_chooser (TfWindow *self)
-{
-  g_autoptr (GtkFileFilter) filter = twofold_filter_new ();
-
-  if (self->chooser)
-    return;
-  self->chooser = gtk_file_chooser_native_new (_("Open Analysis"), GTK_WINDOW (self),
-                                               GTK_FILE_CHOOSER_ACTION_OPEN,
-                                               _("_Open"), _("_Cancel"));
-  gtk_native_dialog_set_modal (GTK_NATIVE_DIALOG (self->chooser), TRUE);
-  gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (self->chooser), filter);
-  chooser_set_folder (self, GTK_FILE_CHOOSER (self->chooser));
-  g_signal_connect (self->chooser, "response", G_CALLBACK (on_open_response), self);
-  gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
-}
-
-static void ask_save_changes (TfWindow *self, TfPendingAction then);
-
-static void
-open_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
-{
-  TfWindow *self = TF_WINDOW (widget);
-
-  if (self->chooser)
-    return;
-  if (self->modified)
-    ask_save_changes (self, TF_PENDING_OPEN);
-  else
-    show_open_chooser (self);
-}
-
-static gboolean
-save_to (TfWindow *self, GFile *file)
-{
-  g_autoptr (GError) error = NULL;
-  g_autofree char *path = g_file_get_path (file);
-  g_autofree char *name = file_display_name (file);
-  g_autofree char *basename = g_file_get_basename (file);
-
-  if (!self->savable)
-    {
-      g_autofree char *heading = g_strdup_printf (_("Could Not Save “%s”"), name);
-      show_error (self, heading,
-                  _("The analysis has a field that needs fixing, marked in the form. Fix it, then save again."));
-      return FALSE;
-    }
-  if (path == NULL || !tf_analysis_save (self->analysis, path, &error))
-    {
-      g_autofree char *heading = g_strdup_printf (_("Could Not Save “%s”"), name);
-      show_error (self, heading, error ? error->message : _("Only files on this computer can be written."));
-      return FALSE;
-    }
-  g_set_object (&self->file, file);
-  self->is_demo = FALSE;
-  self->modified = FALSE;
-  update_title (self);
-  {
-    g_autofree char *message = g_strdup_printf (_("Saved “%s”"), basename);
-    adw_toast_overlay_add_toast (self->toast_overlay, adw_toast_new (message));
-  }
-  if (self->settings)
-    {
-      g_autoptr (GFile) parent = g_file_get_parent (file);
-      g_autofree char *folder = parent ? g_file_get_path (parent) : NULL;
-      if (folder)
-        g_settings_set_string (self->settings, "last-folder", folder);
-    }
-  return TRUE;
-}
-
-/* After the analysis was saved (saved TRUE) or not, go on with what waited for it. */
-static void
-continue_pending (TfWindow *self, gboolean saved)
-{
-  TfPendingAction pending = self->pending;
-
-  self->pending = TF_PENDING_NONE;
-  if (!saved)
-    return;
-  switch (pending)
-    {
-    case TF_PENDING_CLOSE:
-      self->close_confirmed = TRUE;
-      gtk_window_close (GTK_WINDOW (self));
-      break;
-    case TF_PENDING_OPEN:
-      show_open_chooser (self);
-      break;
-    case TF_PENDING_NONE:
-    default:
-      break;
-    }
-}
-
-static void
-on_save_response (GtkNativeDialog *dialog, int response, TfWindow *self)
-{
-  gboolean saved = FALSE;
-
-  if (response == GTK_RESPONSE_ACCEPT)
-    {
-      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
-      g_autofree char *basename = file ? g_file_get_basename (file) : NULL;
-
-      if (file && basename && !g_str_has_suffix (basename, FILE_SUFFIX))
-        {
-          g_autofree char *with_suffix = g_strconcat (basename, FILE_SUFFIX, NULL);
-          g_autoptr (GFile) parent = g_file_get_parent (file);
-          g_autoptr (GFile) renamed = g_file_get_child (parent, with_suffix);
-          g_set_object (&file, renamed);
-        }
-      if (file)
-        saved = save_to (self, file);
-    }
-  g_clear_object (&self->chooser);
-  continue_pending (self, saved);
-}
-
-static char *
-suggested_name (TfWindow *self)
-{
-  if (self->file)
-    return g_file_get_basename (self->file);
-  if (self->is_demo)
-    return g_strdup ("seed-germination" FILE_SUFFIX);
-  return g_strconcat (_("analysis"), FILE_SUFFIX, NULL);
-}
-
-static void
-save_as_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
-{
-  TfWindow *self = TF_WINDOW (widget);
-  g_autoptr (GtkFileFilter) filter = twofold_filter_new ();
-  g_autofree char *name = suggested_name (self);
-
-  if (self->chooser)
-    {
-      self->pending = TF_PENDING_NONE;
-      return;
-    }
-  self->chooser = gtk_file_chooser_native_new (_("Save Analysis"), GTK_WINDOW (self),
-                                               GTK_FILE_CHOOSER_ACTION_SAVE,
-                                               _("_Save"), _("_Cancel"));
-  gtk_native_dialog_set_modal (GTK_NATIVE_DIALOG (self->chooser), TRUE);
-  gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (self->chooser), filter);
-  chooser_set_folder (self, GTK_FILE_CHOOSER (self->chooser));
-  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (self->chooser), name);
-  g_signal_connect (self->chooser, "response", G_CALLBACK (on_save_response), self);
-  gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
-}
-
-static void
-save_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
-{
-  TfWindow *self = TF_WINDOW (widget);
-
-  if (self->file == NULL)
-    save_as_action (widget, "win.save-as", NULL);
-  else
-    save_to (self, self->file);
-}
-
-/* Unsaved changes */
-
-static void
-on_save_changes_response (AdwMessageDialog *dialog, const char *response, TfWindow *self)
-{
-  TfPendingAction pending = self->pending;
-
-  /* clicking a response closes the dialog already; a response emitted any other way
-   * (adw_message_dialog_response) does not */
-  self->save_changes_dialog = NULL;
-  g_signal_handlers_disconnect_by_func (dialog, on_save_changes_response, self);
-  /* the dialog outlives this handler (the emission holds it) and may outlive the
-   * window, which closes below: a transient parent is not kept alive, so drop it now */
-  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
-  gtk_window_destroy (GTK_WINDOW (dialog));
-
-  if (g_strcmp0 (response, "discard") == 0)
-    continue_pending (self, TRUE);
-  else if (g_strcmp0 (response, "save") == 0)
-    {
-      if (self->file && !self->is_demo)
-        continue_pending (self, save_to (self, self->file));
-      else
-        {
-          /* continue_pending runs when the file chooser answers */
-          self->pending = pending;
-          save_as_action (GTK_WIDGET (self), "win.save-as", NULL);
-        }
-    }
-  else
-    continue_pending (self, FALSE);
-}
-
-/* Asks whether to save the modified analysis, then does then unless cancelled. */
-static void
-ask_save_changes (TfWindow *self, TfPendingAction then)
-{
-  g_autofree char *name = document_name (self);
-  g_autofree char *heading = NULL;
-  GtkWidget *dialog;
-
-  if (self->save_changes_dialog)
-    {
-      self->pending = then;
-      gtk_window_present (GTK_WINDOW (self->save_changes_dialog));
-      return;
-    }
-
-  /* TRANSLATORS: heading of the dialog shown before closing or replacing an analysis
-   * that has unsaved changes; %s is its title or file name */
-  heading = g_strdup_printf (_("Save changes to “%s”?"), name);
-  dialog = adw_message_dialog_new (GTK_WINDOW (self), heading,
-                                   _("The analysis was changed since it was last saved. If you discard the changes, they are lost."));
-  adw_message_dialog_add_responses (ADW_MESSAGE_DIALOG (dialog),
-                                    "cancel", _("_Cancel"),
-                                    "discard", _("_Discard"),
-                                    "save", _("_Save"),
-                                    NULL);
-  adw_message_dialog_set_response_appearance (ADW_MESSAGE_DIALOG (dialog), "discard",
-                                              ADW_RESPONSE_DESTRUCTIVE);
-  adw_message_dialog_set_response_appearance (ADW_MESSAGE_DIALOG (dialog), "save",
-                                              ADW_RESPONSE_SUGGESTED);
-  adw_message_dialog_set_default_response (ADW_MESSAGE_DIALOG (dialog), "cancel");
-  adw_message_dialog_set_close_response (ADW_MESSAGE_DIALOG (dialog), "cancel");
-  g_signal_connect (dialog, "response", G_CALLBACK (on_save_changes_response), self);
-
-  self->pending = then;
-  self->save_changes_dialog = ADW_MESSAGE_DIALOG (dialog);
-  gtk_window_present (GTK_WINDOW (dialog));
+  tf_window_update_title (self);
 }
 
 /* Window state */
@@ -635,7 +326,7 @@ tf_window_close_request (GtkWindow *window)
   if (self->modified && !self->close_confirmed)
     {
       /* also while a file chooser is open: the question comes first */
-      ask_save_changes (self, TF_PENDING_CLOSE);
+      tf_window_ask_save_changes (self, TF_PENDING_CLOSE);
       return TRUE;
     }
   self->close_confirmed = FALSE;
@@ -737,18 +428,7 @@ tf_window_dispose (GObject *object)
 {
   TfWindow *self = TF_WINDOW (object);
 
-  if (self->save_changes_dialog)
-    {
-      AdwMessageDialog *dialog = g_steal_pointer (&self->save_changes_dialog);
-
-      g_signal_handlers_disconnect_by_func (dialog, on_save_changes_response, self);
-      gtk_window_destroy (GTK_WINDOW (dialog));
-    }
-  if (self->chooser)
-    {
-      gtk_native_dialog_destroy (GTK_NATIVE_DIALOG (self->chooser));
-      g_clear_object (&self->chooser);
-    }
+  tf_window_actions_dispose (self);
   g_clear_object (&self->settings);
   gtk_widget_dispose_template (GTK_WIDGET (self), TF_TYPE_WINDOW);
   G_OBJECT_CLASS (tf_window_parent_class)->dispose (object);
@@ -762,6 +442,7 @@ tf_window_finalize (GObject *object)
   g_clear_pointer (&self->analysis, tf_analysis_free);
   g_clear_pointer (&self->results, tf_results_free);
   g_clear_object (&self->file);
+  g_clear_object (&self->export_file);
   G_OBJECT_CLASS (tf_window_parent_class)->finalize (object);
 }
 
@@ -794,9 +475,7 @@ tf_window_class_init (TfWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, TfWindow, invalid_page);
   gtk_widget_class_bind_template_child (widget_class, TfWindow, explanation_pane);
 
-  gtk_widget_class_install_action (widget_class, "win.open", NULL, open_action);
-  gtk_widget_class_install_action (widget_class, "win.save", NULL, save_action);
-  gtk_widget_class_install_action (widget_class, "win.save-as", NULL, save_as_action);
+  tf_window_actions_class_init (widget_class);
 }
 
 static void
@@ -811,11 +490,12 @@ tf_window_init (TfWindow *self)
 
   g_signal_connect (self->form, "changed", G_CALLBACK (on_form_changed), self);
   load_settings (self);
+  tf_window_actions_init (self);
 
   self->analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
   tf_analysis_form_set_analysis (self->form, self->analysis);
   recompute (self);
-  update_title (self);
+  tf_window_update_title (self);
 }
 
 TfWindow *
