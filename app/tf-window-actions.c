@@ -546,9 +546,16 @@ export_figure_action (GtkWidget *widget, const char *action_name, GVariant *para
 void
 tf_window_actions_update (TfWindow *self)
 {
-  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.export-figure",
-                                 self->results != NULL
-                                 && tf_plot_view_get_figure (self->plot_view) != NULL);
+  self->export_enabled = self->results != NULL
+                         && tf_plot_view_get_figure (self->plot_view) != NULL;
+  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.export-figure", self->export_enabled);
+}
+
+gboolean
+tf_window_get_export_enabled (TfWindow *self)
+{
+  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
+  return self->export_enabled;
 }
 
 static void

@@ -55,6 +55,7 @@ struct _TfWindow
   GFile *export_file;
   double export_width_mm, export_height_mm, export_dpi;
   TfFigureOptions export_options;
+  gboolean export_enabled;      /* win.export-figure is enabled */
 };
 
 /* tf-window.c */

@@ -32,6 +32,8 @@ AdwMessageDialog *tf_window_get_save_changes_dialog (TfWindow *self);
  * responses are "cancel" and "export". NULL unless shown. */
 void tf_window_show_export_options (TfWindow *self, GFile *file);
 AdwMessageDialog *tf_window_get_export_dialog (TfWindow *self);
+/* Whether win.export-figure is enabled (the plot has a figure to export). */
+gboolean tf_window_get_export_enabled (TfWindow *self);
 /* What the dialog's "export" does: writes the plot's figure kind to file (PNG, SVG or PDF
  * by its ending) with tf_figure_export_full(); on failure says why in a dialog naming
  * the file and returns FALSE. */

@@ -12,6 +12,7 @@
 #include <cairo-pdf.h>
 #include <gtk/gtk.h>
 #include <adwaita.h>
+#include <gsl/gsl_errno.h>
 #include "tf-window-private.h"
 #include "tf-analysis-file.h"
 #include "tf-results.h"
@@ -20,6 +21,7 @@
 #include "tf-figure.h"
 #include "tf-figure-theme.h"
 #include "tf-axis.h"
+#include "tf-figure-export.h"
 
 static void
 iterate (void)
@@ -929,6 +931,240 @@ test_window_save_unavailable (void)
   g_rmdir (dir);
 }
 
+/* Figure kinds, the crosshair readout and export, in the window */
+
+/* Iterates until the plot has drawn its figure at its current size. */
+static gboolean
+wait_until_drawn (TfPlotView *view, TfPlotArea *area)
+{
+  gint64 deadline = g_get_monotonic_time () + 5 * G_USEC_PER_SEC;
+
+  while (!tf_plot_view_get_plot_area_for_test (view, area) && g_get_monotonic_time () < deadline)
+    {
+      iterate ();
+      g_usleep (5000);
+    }
+  return tf_plot_view_get_plot_area_for_test (view, area);
+}
+
+/* Every kind for the window's analysis: the plot shows it, computed once; a kind that
+ * does not apply shows tf_figure_new()'s reason, in the plot and as its description. At
+ * a few columns the readout is tf_figure_reading_markup() of tf_figure_read_at() there,
+ * and the plot's accessible description is its text. Returns how many kinds applied. */
+static guint
+check_every_kind (TfWindow *window)
+{
+  TfPlotView *view = tf_window_get_plot_view (window);
+  GtkDropDown *chooser = GTK_DROP_DOWN (tf_plot_view_get_kind_chooser_for_test (view));
+  guint applied = 0;
+
+  for (guint k = 0; k < TF_N_FIGURE_KINDS; k++)
+    {
+      TfFigureKind kind = (TfFigureKind) k;
+      g_autofree char *why_not = NULL;
+      g_autoptr (TfFigure) expected = tf_figure_new (tf_window_get_analysis (window), kind, &why_not);
+      guint before = tf_plot_view_get_n_computed_for_test (view);
+      TfPlotArea area;
+
+      g_test_message ("kind %s", tf_figure_kind_to_string (kind));
+      /* as a user picks it: the chooser's row k, labelled as the engine names the kind */
+      g_assert_cmpstr (gtk_string_object_get_string (GTK_STRING_OBJECT (g_list_model_get_item (gtk_drop_down_get_model (chooser), k))),
+                       ==, tf_figure_kind_label (kind));
+      g_object_unref (g_list_model_get_item (gtk_drop_down_get_model (chooser), k));
+      gtk_drop_down_set_selected (chooser, k);
+      iterate ();
+      g_assert_cmpint (tf_plot_view_get_kind (view), ==, kind);
+      g_assert_cmpuint (tf_plot_view_get_n_computed_for_test (view), <=, before + 1);
+      g_assert_cmpint (tf_window_get_visible_page (window) != NULL, ==, TRUE);
+
+      if (expected == NULL)
+        {
+          g_assert_null (tf_plot_view_get_figure (view));
+          g_assert_cmpstr (tf_plot_view_get_why_not (view), ==, why_not);
+          g_assert_cmpstr (tf_plot_view_get_description (view), ==, why_not);
+          /* nothing to read, and nothing to export */
+          tf_plot_view_set_pointer_for_test (view, 100, 100);
+          g_assert_null (tf_plot_view_get_readout_markup (view));
+          g_assert_false (tf_window_get_export_enabled (window));
+          continue;
+        }
+      applied++;
+      g_assert_nonnull (tf_plot_view_get_figure (view));
+      g_assert_null (tf_plot_view_get_why_not (view));
+      g_assert_true (wait_until_drawn (view, &area));
+      for (int i = 1; i <= 3; i++)
+        {
+          double px = area.x + area.width * i / 4.0, py = area.y + area.height / 2;
+          TfFigureReading reading;
+
+          tf_plot_view_set_pointer_for_test (view, px, py);
+          if (!tf_figure_read_at (expected, &area, px, &reading))
+            {
+              /* model probabilities: no x to read */
+              g_assert_null (tf_plot_view_get_readout_markup (view));
+              continue;
+            }
+          {
+            g_autofree char *want = tf_figure_reading_markup (&reading);
+            g_autofree char *text = NULL;
+
+            g_assert_cmpstr (tf_plot_view_get_readout_markup (view), ==, want);
+            g_assert_true (pango_parse_markup (want, -1, 0, NULL, &text, NULL, NULL));
+            g_assert_cmpstr (tf_plot_view_get_description (view), ==, text);
+          }
+        }
+      /* outside the plot area, and once the pointer leaves: gone */
+      tf_plot_view_set_pointer_for_test (view, area.x - 5, area.y + area.height / 2);
+      g_assert_null (tf_plot_view_get_readout_markup (view));
+      tf_plot_view_set_pointer_for_test (view, area.x + area.width / 2, area.y + 1);
+      if (tf_figure_get_kind (expected) != TF_FIGURE_MODEL_PROBABILITIES)
+        g_assert_nonnull (tf_plot_view_get_readout_markup (view));
+      tf_plot_view_set_pointer_for_test (view, NAN, NAN);
+      g_assert_null (tf_plot_view_get_readout_markup (view));
+      g_assert_null (tf_plot_view_get_description (view));
+    }
+  return applied;
+}
+
+static void
+test_window_figure_kinds (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  TfPlotView *view = tf_window_get_plot_view (window);
+  g_autofree char *dir = g_dir_make_tmp ("twofold-gui-XXXXXX", NULL);
+  const DesignCase *rate = NULL;
+  guint computed;
+  TfPlotArea area;
+
+  tf_window_open_demo (window);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  g_assert_cmpint (tf_plot_view_get_kind (view), ==, TF_FIGURE_DENSITIES);
+  g_assert_cmpuint (check_every_kind (window), >=, 1);   /* densities at least */
+
+  /* A resize redraws and does not recompute; an edit recomputes the kind shown. */
+  tf_plot_view_set_kind (view, TF_FIGURE_DENSITIES);
+  iterate ();
+  computed = tf_plot_view_get_n_computed_for_test (view);
+  gtk_window_set_default_size (GTK_WINDOW (window), 1000, 700);
+  iterate ();
+  g_assert_true (wait_until_drawn (view, &area));
+  g_assert_cmpuint (tf_plot_view_get_n_computed_for_test (view), ==, computed);
+  type_into (window, "Data", "Successes", "9650");
+  g_assert_cmpuint (tf_plot_view_get_n_computed_for_test (view), ==, computed + 1);
+  g_assert_cmpint (tf_plot_view_get_kind (view), ==, TF_FIGURE_DENSITIES);
+
+  /* one rate: the evidence figures and the null distribution apply there */
+  for (guint c = 0; c < G_N_ELEMENTS (design_cases); c++)
+    if (design_cases[c].design == TF_DESIGN_ONE_RATE)
+      rate = &design_cases[c];
+  g_assert_nonnull (rate);
+  {
+    g_autofree char *path = write_case (dir, "rate.twofold", rate->file);
+    g_autoptr (GFile) file = g_file_new_for_path (path);
+
+    g_assert_true (tf_window_open_file (window, file));
+    iterate ();
+    g_assert_cmpuint (check_every_kind (window), >=, 2);
+    g_unlink (path);
+  }
+  gtk_window_destroy (GTK_WINDOW (window));
+  iterate ();
+  g_rmdir (dir);
+}
+
+/* The width and height a PNG's IHDR chunk gives (PNG specification, section 11.2.2). */
+static void
+png_size (const char *path, guint32 *width, guint32 *height)
+{
+  g_autofree guint8 *data = NULL;
+  gsize length = 0;
+
+  g_assert_true (g_file_get_contents (path, (char **) &data, &length, NULL));
+  g_assert_cmpuint (length, >, 24);
+  g_assert_cmpmem (data + 12, 4, "IHDR", 4);
+  *width = (guint32) data[16] << 24 | (guint32) data[17] << 16 | (guint32) data[18] << 8 | data[19];
+  *height = (guint32) data[20] << 24 | (guint32) data[21] << 16 | (guint32) data[22] << 8 | data[23];
+}
+
+/* The message dialog whose heading is heading, among the open windows, or NULL. */
+static AdwMessageDialog *
+find_dialog (const char *heading)
+{
+  g_autoptr (GListModel) toplevels = g_object_ref (gtk_window_get_toplevels ());
+
+  for (guint i = 0; i < g_list_model_get_n_items (toplevels); i++)
+    {
+      g_autoptr (GObject) item = g_list_model_get_item (toplevels, i);
+
+      if (ADW_IS_MESSAGE_DIALOG (item)
+          && g_strcmp0 (adw_message_dialog_get_heading (ADW_MESSAGE_DIALOG (item)), heading) == 0)
+        return ADW_MESSAGE_DIALOG (item);
+    }
+  return NULL;
+}
+
+static void
+test_window_export_figure (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  g_autofree char *dir = g_dir_make_tmp ("twofold-gui-XXXXXX", NULL);
+  g_autofree char *png = g_build_filename (dir, "demo-densities.png", NULL);
+  g_autofree char *small = g_build_filename (dir, "small.png", NULL);
+  g_autofree char *bad = g_build_filename (dir, "no-such-folder", "figure.png", NULL);
+  g_autoptr (GFile) png_file = g_file_new_for_path (png);
+  g_autoptr (GFile) small_file = g_file_new_for_path (small);
+  g_autoptr (GFile) bad_file = g_file_new_for_path (bad);
+  TfFigureOptions options = TF_FIGURE_OPTIONS_INIT;
+  AdwMessageDialog *dialog;
+  guint32 w, h;
+
+  tf_window_open_demo (window);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  g_assert_true (tf_window_get_export_enabled (window));
+
+  /* Through the dialog, at its defaults: 120 × 80 mm at 300 dpi is round(120 / 25.4 ×
+   * 300) = 1417 by round(80 / 25.4 × 300) = 945 pixels (1 in = 25.4 mm, common practice). */
+  tf_window_show_export_options (window, png_file);
+  iterate ();
+  dialog = tf_window_get_export_dialog (window);
+  g_assert_nonnull (dialog);
+  g_assert_cmpstr (adw_message_dialog_get_heading (dialog), ==, "Export “demo-densities.png”");
+  adw_message_dialog_response (dialog, "export");
+  iterate ();
+  g_assert_null (tf_window_get_export_dialog (window));
+  png_size (png, &w, &h);
+  g_assert_cmpuint (w, ==, 1417);
+  g_assert_cmpuint (h, ==, 945);
+
+  /* What the dialog calls, at another size: 50.8 × 25.4 mm at 100 dpi is 200 × 100. */
+  options.style = TF_FIGURE_STYLE_PRINT;
+  g_assert_true (tf_window_export_figure (window, small_file, 50.8, 25.4, 100, &options));
+  png_size (small, &w, &h);
+  g_assert_cmpuint (w, ==, 200);
+  g_assert_cmpuint (h, ==, 100);
+
+  /* A folder that does not exist: a dialog that names the file, and nothing written. */
+  g_assert_false (tf_window_export_figure (window, bad_file, 120, 80, 300, &options));
+  iterate ();
+  {
+    g_autofree char *name = g_filename_display_name (bad);
+    g_autofree char *heading = g_strdup_printf ("Could Not Export “%s”", name);
+
+    dialog = find_dialog (heading);
+    g_assert_nonnull (dialog);
+    gtk_window_destroy (GTK_WINDOW (dialog));
+  }
+  g_assert_false (g_file_test (bad, G_FILE_TEST_EXISTS));
+
+  gtk_window_destroy (GTK_WINDOW (window));
+  iterate ();
+  g_unlink (png);
+  g_unlink (small);
+  g_rmdir (dir);
+}
+
 /* The list on its own, fed results made by hand so that limits can be undefined (the
  * numbers are placeholders for the display, not check values of any method). */
 static void
@@ -1168,6 +1404,7 @@ int
 main (int argc, char *argv[])
 {
   g_test_init (&argc, &argv, NULL);
+  gsl_set_error_handler_off ();
   adw_init ();
   g_object_set (gtk_settings_get_default (), "gtk-enable-animations", FALSE, NULL);
 
@@ -1179,6 +1416,8 @@ main (int argc, char *argv[])
   g_test_add_func ("/gui/window/two-sample-invalid", test_window_two_sample_invalid);
   g_test_add_func ("/gui/window/switch-keeps", test_window_switch_keeps);
   g_test_add_func ("/gui/window/save-unavailable", test_window_save_unavailable);
+  g_test_add_func ("/gui/window/figure-kinds", test_window_figure_kinds);
+  g_test_add_func ("/gui/window/export-figure", test_window_export_figure);
   g_test_add_func ("/gui/result-list/intervals", test_result_list_intervals);
   g_test_add_func ("/gui/figure/pixels-light", test_figure_pixels_light);
   g_test_add_func ("/gui/figure/pixels-dark", test_figure_pixels_dark);
