@@ -107,8 +107,8 @@ bd0_change (double c, double other, double h, double n, double theta, double dh,
 
 /* ln BF01 for a point null against Beta(a, b), every ln Γ written by Stirling's formula
  * with its remainder so that it holds for huge counts and shapes (Loader 2000, deviance
- * form); where the prior's a + b outweighs n, the two deviances of each side are
- * taken together so that a huge prior far from θ0 loses nothing either. */
+ * form); where the prior outweighs the data (a + b >= n, or a shape >= its count), the
+ * two deviances of that side are taken together so that a huge prior far from θ0 loses nothing either. */
 double
 tf_one_proportion_log_bf01 (double k, double n, double theta0, double a, double b)
 {
@@ -119,11 +119,11 @@ tf_one_proportion_log_bf01 (double k, double n, double theta0, double a, double 
   double dk = tf_incbeta_lambda (k, n - k, t, u);         /* k − nθ0 */
   double side_a, side_b;
 
-  if (s >= n)
+  if (s >= n || a >= k)
     side_a = -bd0_change (a, b, k, n, t, dk, dP);
   else
     side_a = -tf_bd0_delta (P, S * t, dP) + tf_bd0_delta (a, s * t, da);
-  if (s >= n)
+  if (s >= n || b >= n - k)
     side_b = -bd0_change (b, a, n - k, n, u, -dk, -dP);
   else
     side_b = -tf_bd0_delta (Q, S * u, -dP) + tf_bd0_delta (b, s * u, -da);
