@@ -7,6 +7,7 @@
 #include "tf-two-rates.h"
 #include "tf-one-mean.h"
 #include "tf-two-means.h"
+#include "tf-two-proportions.h"
 
 static const TfDesignClass one_proportion = {
   .design = TF_DESIGN_ONE_PROPORTION,
@@ -33,6 +34,7 @@ tf_design_class (TfDesign design)
     case TF_DESIGN_TWO_MEANS:
       return tf_two_means_class ();
     case TF_DESIGN_TWO_PROPORTIONS:
+      return &tf_two_proportions_class;
     case TF_N_DESIGNS:
     default:
       return NULL;

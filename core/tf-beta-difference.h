@@ -1,0 +1,36 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-beta-difference.h: the distribution of Δ = θA − θB for independent
+ * θA ~ Beta(pa, qa) and θB ~ Beta(pb, qb), by one-dimensional integration.
+ */
+#pragma once
+
+#include <glib.h>
+
+G_BEGIN_DECLS
+
+#define TF_BETA_DIFF_N_CUTS 24
+
+typedef struct {
+  double pa, qa, pb, qb;
+  gboolean over_a;              /* integrate over θA (the narrower) rather than θB */
+  double mean, sd;              /* of Δ */
+  /* quantiles of the integration variable at fixed tail levels, and ln of the mass
+   * of the integration variable's distribution between successive ones */
+  guint n_cuts;
+  double cut[TF_BETA_DIFF_N_CUTS];
+  double log_tail[TF_BETA_DIFF_N_CUTS]; /* ln P(V <= cut) or ln P(V >= cut) */
+  gboolean cut_lower[TF_BETA_DIFF_N_CUTS];
+  double epsrel;
+} TfBetaDiff;
+
+void tf_beta_diff_init (TfBetaDiff *bd, double pa, double qa, double pb, double qb);
+
+/* ln P(Δ <= d) and ln P(Δ >= d); FALSE when the integration failed. */
+gboolean tf_beta_diff_log_cdf (const TfBetaDiff *bd, double d, double *log_lower,
+                               double *log_upper);
+/* ln of the density of Δ at d, d in (−1, 1); NAN on failure. */
+double tf_beta_diff_log_density (const TfBetaDiff *bd, double d);
+/* The d with ln P(Δ <= d) = log_p (lower) or ln P(Δ >= d) = log_p; NAN on failure. */
+double tf_beta_diff_quantile_log (const TfBetaDiff *bd, double log_p, gboolean lower);
+
+G_END_DECLS

@@ -1,0 +1,191 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-two-proportions-curves.c: figures for two proportions: densities of θA − θB, the
+ * Bayes factor against the prior's concentration, the hypergeometric null
+ * distribution of kA, and the two models' probabilities.
+ */
+#include "tf-two-proportions.h"
+#include "tf-beta-difference.h"
+#include "tf-fisher.h"
+#include "tf-logspace.h"
+
+#include <math.h>
+#include <float.h>
+#include <glib/gi18n-lib.h>
+
+static double
+finite_exp (double l)
+{
+  double v = exp (l);
+  return isfinite (v) ? v : (isnan (l) ? 0.0 : DBL_MAX);
+}
+
+/* x = Δ = θA − θB. Posterior: the density of the difference of the independent beta
+ * posteriors, by convolution; prior: that of two independent Beta(a, b); "likelihood":
+ * the density of the difference under uniform priors, Beta(k + 1, n − k + 1) in each
+ * group, which is the likelihood integrated over the other parameter and normalised
+ * (the likelihood of the pair is not a function of Δ alone). No Savage–Dickey heights:
+ * the null's common θ ~ Beta(a, b) is not the alternative's prior conditioned on Δ = 0
+ * (that would be Beta(2a − 1, 2b − 1)), so the density ratio at 0 is not this Bayes
+ * factor; prior_at_null and posterior_at_null are 0. */
+void
+tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
+{
+  const TfAnalysis *an = analysis;
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double a = an->prior_a, b = an->prior_b;
+  const guint np = curves->n;
+  TfBetaDiff post, prior, lik;
+
+  tf_beta_diff_init (&post, ka + a, na - ka + b, kb + a, nb - kb + b);
+  tf_beta_diff_init (&prior, a, b, a, b);
+  tf_beta_diff_init (&lik, ka + 1.0, na - ka + 1.0, kb + 1.0, nb - kb + 1.0);
+  post.epsrel = prior.epsrel = lik.epsrel = 1e-6;
+
+  double qlo = tf_beta_diff_quantile_log (&post, log (0.5e-6), TRUE);
+  double qhi = tf_beta_diff_quantile_log (&post, log (0.5e-6), FALSE);
+  if (!isfinite (qlo) || !isfinite (qhi))
+    {
+      qlo = MAX (-1.0, post.mean - 5.0 * post.sd);
+      qhi = MIN (1.0, post.mean + 5.0 * post.sd);
+    }
+  double lo = MIN (qlo, 0.0), hi = MAX (qhi, 0.0);
+  double plo = MIN (lo, tf_beta_diff_quantile_log (&prior, log (0.005), TRUE));
+  double phi = MAX (hi, tf_beta_diff_quantile_log (&prior, log (0.005), FALSE));
+  if (isfinite (plo) && isfinite (phi) && (qhi - qlo) * (np - 1) / (phi - plo) >= 3.0)
+    {
+      lo = plo;
+      hi = phi;
+    }
+  lo = MAX (lo, -1.0 + 1e-12);
+  hi = MIN (hi, 1.0 - 1e-12);
+  if (!(hi > lo))
+    {
+      lo = MAX (-1.0 + 1e-12, lo - 1e-9);
+      hi = MIN (1.0 - 1e-12, hi + 1e-9);
+    }
+  curves->lo = lo;
+  curves->hi = hi;
+  double step = (hi - lo) / (np - 1);
+  curves->posterior_narrow = post.sd < 2.0 * step;
+
+  for (guint i = 0; i < np; i++)
+    {
+      double x = i + 1 == np ? hi : lo + i * step;
+      curves->x[i] = x;
+      curves->prior[i] = finite_exp (tf_beta_diff_log_density (&prior, x));
+      curves->posterior[i] = curves->posterior_narrow ? 0.0
+                             : finite_exp (tf_beta_diff_log_density (&post, x));
+      curves->likelihood[i] = finite_exp (tf_beta_diff_log_density (&lik, x));
+    }
+  curves->null_value = curves->null_low = curves->null_high = 0.0;
+  curves->prior_at_null = curves->posterior_at_null = 0.0;
+  curves->posterior_mode = post.mean;
+  curves->parameter_markup = g_strdup ("θ<sub>A</sub> − θ<sub>B</sub>");
+}
+
+static double
+posterior_null_of (double lbf01, double pi0)
+{
+  return tf_logistic (log (pi0) - log1p (-pi0) + lbf01);
+}
+
+/* x = a + b from 1e-2 to 1e4, log-spaced, with the prior mean a / (a + b) held. */
+gboolean
+tf_two_proportions_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                char **why_not G_GNUC_UNUSED)
+{
+  const TfAnalysis *an = analysis;
+  const double mean = an->prior_a / (an->prior_a + an->prior_b);
+
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double c = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      double l = tf_two_proportions_log_bf01_directed (an->successes_a, an->trials_a,
+                                                       an->successes_b, an->trials_b,
+                                                       c * mean, c * (1.0 - mean), an->direction);
+      curve->x[i] = c;
+      curve->log_bf01[i] = isfinite (l) ? l : 0.0;
+      curve->posterior_null[i] = posterior_null_of (curve->log_bf01[i], an->prior_null);
+    }
+  curve->x_log = TRUE;
+  curve->x_markup = g_strdup (_("prior concentration <i>a</i> + <i>b</i> (prior mean held)"));
+  curve->chosen_x = an->prior_a + an->prior_b;
+  double l = tf_two_proportions_log_bf01_directed (an->successes_a, an->trials_a,
+                                                   an->successes_b, an->trials_b,
+                                                   an->prior_a, an->prior_b, an->direction);
+  curve->chosen_log_bf01 = isfinite (l) ? l : 0.0;
+  curve->chosen_posterior_null = posterior_null_of (curve->chosen_log_bf01, an->prior_null);
+  return TRUE;
+}
+
+#define TF_MAX_OUTCOMES 100001
+
+/* The hypergeometric masses of kA given the margins, over the outcomes with mass
+ * (mode ± 9 SD, and the observed outcome when it is near). */
+gboolean
+tf_two_proportions_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                                      char **why_not)
+{
+  const TfAnalysis *an = analysis;
+  const double ka = an->successes_a;
+  TfHyper h;
+  double low = 0.0, high = 0.0;
+
+  tf_hyper_init (&h, an->trials_a, an->trials_b, an->successes_a + an->successes_b);
+  double lo = MAX (h.lo, floor (h.mode - 9.0 * h.sd - 5.0));
+  double hi = MIN (h.hi, ceil (h.mode + 9.0 * h.sd + 5.0));
+  if (ka >= lo - 0.25 * (hi - lo) && ka < lo)
+    lo = ka;
+  if (ka <= hi + 0.25 * (hi - lo) && ka > hi)
+    hi = ka;
+  if (hi - lo + 1.0 > TF_MAX_OUTCOMES)
+    {
+      *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
+      return FALSE;
+    }
+  if (an->direction == TF_DIRECTION_TWO_SIDED)
+    tf_fisher_two_sided_bounds (&h, ka, &low, &high);
+  tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
+  for (guint i = 0; i < dist->n; i++)
+    {
+      double j = lo + i;
+      dist->x[i] = j;
+      dist->mass[i] = exp (tf_hyper_log_pmf (&h, j));
+      dist->in_tail[i] = an->direction == TF_DIRECTION_GREATER ? j >= ka
+                         : an->direction == TF_DIRECTION_LESS ? j <= ka
+                         : (h.lo == h.hi || low >= h.mode || high <= h.mode) ? TRUE
+                         : (j <= low || j >= high);
+    }
+  dist->discrete = TRUE;
+  dist->observed = ka;
+  dist->p_value = MIN (1.0, exp (tf_fisher_log_p (&h, ka, an->direction)));
+  dist->x_markup = g_strdup (_("successes in group A, <i>k</i><sub>A</sub>, given the margins"));
+  return TRUE;
+}
+
+gboolean
+tf_two_proportions_model_probabilities (const TfAnalysis *analysis, TfModelProbabilities *models,
+                                        char **why_not)
+{
+  const TfAnalysis *an = analysis;
+  double l = tf_two_proportions_log_bf01_directed (an->successes_a, an->trials_a,
+                                                   an->successes_b, an->trials_b,
+                                                   an->prior_a, an->prior_b, an->direction);
+  if (!isfinite (l))
+    {
+      *why_not = g_strdup (_("The Bayes factor cannot be represented for these data, so neither can the model probabilities."));
+      return FALSE;
+    }
+  tf_model_probabilities_allocate (models, 2);
+  models->names_markup[0] = g_strdup ("H<sub>0</sub>: θ<sub>A</sub> = θ<sub>B</sub>");
+  models->names_markup[1] = g_strdup (an->direction == TF_DIRECTION_GREATER
+                                      ? "H<sub>1</sub>: θ<sub>A</sub> &gt; θ<sub>B</sub>"
+                                      : an->direction == TF_DIRECTION_LESS
+                                      ? "H<sub>1</sub>: θ<sub>A</sub> &lt; θ<sub>B</sub>"
+                                      : "H<sub>1</sub>: θ<sub>A</sub> ≠ θ<sub>B</sub>");
+  models->prior[0] = an->prior_null;
+  models->prior[1] = 1.0 - an->prior_null;
+  models->posterior[0] = posterior_null_of (l, an->prior_null);
+  models->posterior[1] = posterior_null_of (-l, 1.0 - an->prior_null);
+  return TRUE;
+}

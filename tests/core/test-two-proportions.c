@@ -1,0 +1,264 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * test-two-proportions.c: the two-proportions design and the numerics under it
+ * (Fisher's exact test, Newcombe's interval, the closed-form Bayes factor, the
+ * posterior of θA − θB). Every check value names its source; tolerances are relative
+ * unless stated.
+ */
+#include "tf-analysis.h"
+#include "tf-curves.h"
+#include "tf-results.h"
+#include "tf-fisher.h"
+#include "tf-beta-difference.h"
+#include "tf-two-proportions.h"
+
+#include <math.h>
+#include <gsl/gsl_errno.h>
+
+static void
+assert_rel (double got, double want, double tol)
+{
+  if (!(fabs (got - want) <= tol * fabs (want)))
+    g_error ("got %.17g, want %.17g (relative tolerance %g)", got, want, tol);
+}
+
+static double
+get (const TfResults *r, const char *id)
+{
+  double v = NAN;
+  if (!tf_results_get (r, id, &v))
+    g_error ("result %s is missing or undefined", id);
+  return v;
+}
+
+static TfAnalysis *
+two_props (double ka, double na, double kb, double nb)
+{
+  TfAnalysis *a = tf_analysis_new (TF_DESIGN_TWO_PROPORTIONS);
+  a->successes_a = ka;
+  a->trials_a = na;
+  a->successes_b = kb;
+  a->trials_b = nb;
+  return a;
+}
+
+static TfResults *
+compute (const TfAnalysis *a)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  TfResults *r = tf_analysis_compute (a, problems);
+  if (r == NULL)
+    g_error ("not valid: %s", ((TfProblem *) g_ptr_array_index (problems, 0))->message);
+  for (guint i = 0; i < r->numbers->len; i++)
+    {
+      const TfNumber *n = g_ptr_array_index (r->numbers, i);
+      if (n->status == TF_STATUS_OK)
+        g_assert_true (isfinite (n->value));
+      else
+        g_assert_nonnull (n->reason);
+    }
+  return r;
+}
+
+/* Newcombe (1998), Stat. Med. 17:873, Table II, example (a): 56/70 against 48/80. */
+static void
+test_worked_example (void)
+{
+  g_autoptr (TfAnalysis) a = two_props (56, 70, 48, 80);
+  g_autoptr (TfResults) r = compute (a);
+
+  /* Newcombe 1998, Table II (a), method 10: 0.0524 to 0.3339 (4 decimals) */
+  g_assert_cmpfloat (fabs (get (r, "diff_ci_low") - 0.0524), <, 5e-5);
+  g_assert_cmpfloat (fabs (get (r, "diff_ci_high") - 0.3339), <, 5e-5);
+  assert_rel (get (r, "estimate"), 0.2, 1e-15);
+  /* scipy 1.10.1: stats.fisher_exact([[56,14],[48,32]]).pvalue */
+  assert_rel (get (r, "p_value"), 0.012521129749209154, 1e-9);
+  assert_rel (get (r, "p_value_fisher"), 0.012521129749209154, 1e-9);
+  /* scipy 1.10.1: stats.chi2_contingency(t, correction=False)[1], default (Yates),
+   * and lambda_='log-likelihood', correction=False */
+  assert_rel (get (r, "p_value_chisq"), 0.008045081368196585, 1e-9);
+  assert_rel (get (r, "p_value_chisq_yates"), 0.013409475178668966, 1e-9);
+  assert_rel (get (r, "p_value_z"), 0.008045081368196585, 1e-9);
+  assert_rel (get (r, "p_value_lr"), 0.007355380180036734, 1e-9);
+  /* odds ratio ad/bc = 56·32/(14·48) = 8/3 (exact) */
+  assert_rel (get (r, "odds_ratio"), 8.0 / 3.0, 1e-14);
+  assert_rel (get (r, "risk_ratio"), (56.0 / 70.0) / (48.0 / 80.0), 1e-14);
+  /* Woolf interval: exp(ln(8/3) ± 1.959964 √(1/56 + 1/14 + 1/48 + 1/32)) (common practice) */
+  double se = sqrt (1.0 / 56 + 1.0 / 14 + 1.0 / 48 + 1.0 / 32);
+  assert_rel (get (r, "or_ci_low"), 8.0 / 3.0 * exp (-1.959963984540054 * se), 1e-12);
+  /* mpmath 1.2.1, mp.dps = 40: exp(lnB(105,47) + lnB(1,1) − lnB(57,15) − lnB(49,33)) */
+  assert_rel (get (r, "bf01"), 0.1599608116990654378, 1e-9);
+  /* mpmath 1.2.1, mp.dps = 40: quad of betainc(49,33,0,x) · dbeta(x; 57, 15) over [0, 1] */
+  assert_rel (get (r, "prob_greater"), 0.99592953897685741935, 1e-7);
+  /* −e p ln p from the p-value (Sellke, Bayarri & Berger 2001) */
+  double p = get (r, "p_value");
+  assert_rel (get (r, "min_bf01"), -M_E * p * log (p), 1e-12);
+  g_assert_cmpfloat (get (r, "cri_low"), <, get (r, "cri_high"));
+}
+
+static void
+test_one_sided (void)
+{
+  g_autoptr (TfAnalysis) a = two_props (56, 70, 48, 80);
+  a->direction = TF_DIRECTION_GREATER;
+  g_autoptr (TfResults) r = compute (a);
+  /* scipy 1.10.1: stats.fisher_exact([[56,14],[48,32]], alternative='greater').pvalue */
+  assert_rel (get (r, "p_value"), 0.006324711129898369, 1e-9);
+  /* BF01+ = BF01 · ½ / P(θA > θB | data) (truncated prior) */
+  assert_rel (get (r, "bf01"), 0.1599608116990654378 * 0.5 / 0.99592953897685741935, 1e-7);
+  g_assert_cmpfloat (get (r, "cri_low"), >, 0.0);
+}
+
+static void
+test_zero_cells (void)
+{
+  /* Newcombe 1998, Table II (d): 5/56 against 0/29 */
+  g_autoptr (TfAnalysis) a = two_props (5, 56, 0, 29);
+  g_autoptr (TfResults) r = compute (a);
+  /* scipy 1.10.1: stats.fisher_exact([[5,51],[0,29]]).pvalue */
+  assert_rel (get (r, "p_value_fisher"), 0.1606214432094711, 1e-9);
+  /* Haldane–Anscombe: (5.5 · 29.5) / (51.5 · 0.5) */
+  assert_rel (get (r, "odds_ratio"), 5.5 * 29.5 / (51.5 * 0.5), 1e-14);
+  g_assert_nonnull (strstr (tf_results_lookup (r, "odds_ratio")->label, "0.5"));
+
+  /* no successes anywhere: Fisher's p is 1, χ² is undefined with a reason */
+  g_autoptr (TfAnalysis) b = two_props (0, 10, 0, 20);
+  b->prior_a = b->prior_b = 0.5;
+  g_autoptr (TfResults) s = compute (b);
+  g_assert_cmpfloat (get (s, "p_value"), ==, 1.0);
+  g_assert_cmpint (tf_results_lookup (s, "p_value_chisq")->status, ==, TF_STATUS_UNDEFINED);
+  /* mpmath 1.2.1, mp.dps = 40: lnB(0.5, 30.5) + lnB(0.5, 0.5) − lnB(0.5, 10.5) − lnB(0.5, 20.5) */
+  assert_rel (log (get (s, "bf01")), 1.535502618158382607, 1e-9);
+}
+
+/* Huge counts: every number finite or undefined, and ln BF01 as mpmath gives it. */
+static void
+test_extremes (void)
+{
+  g_autoptr (TfAnalysis) a = two_props (500030000, 1e9, 500000000, 1e9);
+  g_autoptr (TfResults) r = compute (a);
+  /* mpmath 1.2.1, mp.dps = 40, the four lnB of the closed form */
+  assert_rel (log (get (r, "bf01")), 8.889267977078505490, 1e-9);
+  g_assert_cmpfloat (get (r, "p_value"), >, 0.0);
+  g_assert_cmpfloat (get (r, "p_value"), <, 1.0);
+
+  g_autoptr (TfAnalysis) b = two_props (1, 1, 0, 1);
+  g_autoptr (TfResults) s = compute (b);
+  g_assert_cmpfloat (get (s, "p_value"), ==, 1.0);
+
+  g_autoptr (TfAnalysis) c = two_props (1e12, 1e12, 0, 1e12);
+  g_autoptr (TfResults) t = compute (c);
+  g_assert_cmpfloat (get (t, "estimate"), ==, 1.0);
+}
+
+static void
+test_validation (void)
+{
+  g_autoptr (TfAnalysis) a = two_props (11, 10, NAN, 0);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  a->prior_a = -1;
+  a->prior_b = 0;
+  a->null_value = 0.1;
+  g_assert_false (tf_analysis_validate (a, problems));
+  g_assert_nonnull (tf_problem_list_find (problems, "Data", "SuccessesA"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Data", "SuccessesB"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Data", "TrialsB"));
+  g_assert_null (tf_problem_list_find (problems, "Data", "TrialsA"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Alternative", "PriorA"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Alternative", "PriorB"));
+  g_assert_nonnull (tf_problem_list_find (problems, "Null", "Value"));
+  g_assert_nonnull (strstr (tf_problem_list_find (problems, "Data", "SuccessesA")->message, "SuccessesA"));
+
+  g_autoptr (TfAnalysis) b = two_props (1.5, 10, 2, 1e16);
+  g_autoptr (GPtrArray) p2 = tf_problem_list_new ();
+  b->prior = TF_PRIOR_NORMAL;
+  g_assert_false (tf_analysis_validate (b, p2));
+  g_assert_nonnull (tf_problem_list_find (p2, "Data", "SuccessesA"));
+  g_assert_nonnull (tf_problem_list_find (p2, "Data", "TrialsB"));
+  g_assert_nonnull (tf_problem_list_find (p2, "Alternative", "Prior"));
+}
+
+/* The hypergeometric tails against direct summation of the pmf (common practice:
+ * Σ P(X = j) over the support sums to 1). */
+static void
+test_hypergeometric (void)
+{
+  TfHyper h;
+  tf_hyper_init (&h, 37, 52, 40);
+  double total = 0.0, lower = 0.0;
+  for (double j = h.lo; j <= h.hi; j++)
+    {
+      total += exp (tf_hyper_log_pmf (&h, j));
+      if (j <= 12)
+        lower += exp (tf_hyper_log_pmf (&h, j));
+    }
+  assert_rel (total, 1.0, 1e-13);
+  assert_rel (exp (tf_hyper_log_cdf (&h, 12)), lower, 1e-13);
+  assert_rel (exp (tf_hyper_log_sf (&h, 13)), 1.0 - lower, 1e-13);
+}
+
+/* The difference of two betas: for Beta(1, 1) each, Δ is triangular on (−1, 1)
+ * (common practice): P(Δ <= d) = (1 + d)²/2 for d <= 0, density 1 − |d|. */
+static void
+test_beta_difference (void)
+{
+  TfBetaDiff bd;
+  double l, u;
+  tf_beta_diff_init (&bd, 1, 1, 1, 1);
+  g_assert_true (tf_beta_diff_log_cdf (&bd, -0.4, &l, &u));
+  assert_rel (exp (l), 0.18, 1e-9);
+  assert_rel (exp (u), 0.82, 1e-9);
+  assert_rel (exp (tf_beta_diff_log_density (&bd, 0.25)), 0.75, 1e-9);
+  assert_rel (tf_beta_diff_quantile_log (&bd, log (0.18), TRUE), -0.4, 1e-9);
+}
+
+static void
+test_curves (void)
+{
+  g_autoptr (TfAnalysis) a = two_props (15, 50, 26, 50);
+  g_autoptr (TfDensityCurves) c = tf_density_curves_new (a, 101, NULL);
+  g_assert_nonnull (c);
+  for (guint i = 0; i < c->n; i++)
+    {
+      g_assert_true (isfinite (c->posterior[i]) && c->posterior[i] >= 0.0);
+      g_assert_true (isfinite (c->prior[i]) && c->prior[i] >= 0.0);
+    }
+  g_autoptr (TfEvidenceCurve) s = tf_sensitivity_curve_new (a, 21, NULL, NULL);
+  g_assert_nonnull (s);
+  g_assert_true (s->x_log);
+  assert_rel (s->x[0], 1e-2, 1e-12);
+  assert_rel (s->x[20], 1e4, 1e-12);
+  g_autoptr (TfNullDistribution) d = tf_null_distribution_new (a, 0, NULL, NULL);
+  g_assert_nonnull (d);
+  double mass = 0.0, tail = 0.0;
+  for (guint i = 0; i < d->n; i++)
+    {
+      mass += d->mass[i];
+      if (d->in_tail[i])
+        tail += d->mass[i];
+    }
+  assert_rel (mass, 1.0, 1e-9);
+  assert_rel (tail, d->p_value, 1e-9);
+  g_autoptr (TfModelProbabilities) m = tf_model_probabilities_new (a, NULL, NULL);
+  g_assert_nonnull (m);
+  g_assert_cmpuint (m->n, ==, 2);
+  assert_rel (m->posterior[0] + m->posterior[1], 1.0, 1e-14);
+  g_autofree char *why = NULL;
+  g_assert_null (tf_sample_size_curve_new (a, 11, NULL, &why));
+  g_assert_nonnull (why);
+}
+
+int
+main (int argc, char **argv)
+{
+  gsl_set_error_handler_off ();
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/two-proportions/worked-example", test_worked_example);
+  g_test_add_func ("/two-proportions/one-sided", test_one_sided);
+  g_test_add_func ("/two-proportions/zero-cells", test_zero_cells);
+  g_test_add_func ("/two-proportions/extremes", test_extremes);
+  g_test_add_func ("/two-proportions/validation", test_validation);
+  g_test_add_func ("/two-proportions/hypergeometric", test_hypergeometric);
+  g_test_add_func ("/two-proportions/beta-difference", test_beta_difference);
+  g_test_add_func ("/two-proportions/curves", test_curves);
+  return g_test_run ();
+}
