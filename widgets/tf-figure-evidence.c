@@ -91,9 +91,9 @@ draw_grades (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
       cairo_line_to (cr, area->x + area->width, y);
       cairo_stroke (cr);
       /* TRANSLATORS: right of the BF01 = 1 line: above it the data favour H0 */
-      tf_fig_text (cr, theme, &theme->muted, size, _("↑ H<sub>0</sub>"), x, y - h * 1.05);
+      tf_fig_text (cr, theme, &theme->muted, size, _("↑ H₀"), x, y - h * 1.05);
       /* TRANSLATORS: right of the BF01 = 1 line: below it the data favour H1 */
-      tf_fig_text (cr, theme, &theme->muted, size, _("↓ H<sub>1</sub>"), x, y + h * 0.05);
+      tf_fig_text (cr, theme, &theme->muted, size, _("↓ H₁"), x, y + h * 0.05);
     }
 
   for (guint i = 0; i < n; i++)
@@ -159,7 +159,7 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
   g_autofree char *p_text = NULL;
   const char *x_label;
   const char *bf_label = _("BF<sub>01</sub>, log scale");
-  const char *p_label = _("P(H<sub>0</sub> | data)");
+  const char *p_label = _("P(H₀ | data)");
   double pad, gap, top, bottom, left, right, avail, top_h, low_h, label_h;
   double x_lo = INFINITY, x_hi = -INFINITY, y_lo = 0, y_hi = 0, right_w = 0;
   gboolean chosen_ok;
@@ -230,7 +230,7 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
   n_grades = grades (opt->evidence_scale, g);
   for (guint i = 0; i < n_grades; i++)
     right_w = MAX (right_w, tf_fig_text_width (cr, &theme, theme.text_size * 0.9, _(g[i].name)));
-  right_w = MAX (right_w, tf_fig_text_width (cr, &theme, theme.text_size * 0.9, _("↑ H<sub>0</sub>")));
+  right_w = MAX (right_w, tf_fig_text_width (cr, &theme, theme.text_size * 0.9, _("↑ H₀")));
   label_h = tf_fig_text_height (cr, &theme, theme.text_size, chosen_label ? chosen_label : "Hg");
 
   if (curve->x_log)
@@ -335,7 +335,7 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
         {
           g_autofree char *v = tf_fig_number (curve->chosen_posterior_null, 3);
 
-          p_text = g_strdup_printf (_("P(H<sub>0</sub> | data) = %s"), v);
+          p_text = g_strdup_printf (_("P(H₀ | data) = %s"), v);
           tf_fig_marker (cr, &theme, &low_area, TF_SERIES_EVIDENCE, cx,
                          curve->chosen_posterior_null, TRUE);
           label_beside (cr, &theme, &low_area, &p_line, px,

@@ -308,7 +308,7 @@ tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
         reading->x = c->x[i];
         reading->names[0] = "BF<sub>01</sub>";
         reading->values[0] = exp (c->log_bf01[i]);
-        reading->names[1] = _("P(H<sub>0</sub> | data)");
+        reading->names[1] = _("P(H₀ | data)");
         reading->values[1] = c->posterior_null[i];
         reading->n = 2;
       }

@@ -69,7 +69,7 @@ tf_figure_draw_null_distribution (cairo_t *cr, double width, double height, doub
   half = d->discrete ? 0.4 : 0;
 
   x_label = d->x_markup ? d->x_markup : _("test statistic");
-  y_label = d->discrete ? _("probability under H<sub>0</sub>") : _("density under H<sub>0</sub>");
+  y_label = d->discrete ? _("probability under H₀") : _("density under H₀");
   {
     g_autofree char *v = tf_fig_number (d->observed, 6);
     g_autofree char *p = tf_fig_number (d->p_value, 3);
@@ -77,7 +77,7 @@ tf_figure_draw_null_distribution (cairo_t *cr, double width, double height, doub
     /* TRANSLATORS: legend of the shaded tail of a null distribution */
     tail_label = g_strdup_printf (_("as or more extreme: <i>p</i> = %s"), p);
   }
-  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_NULL, _("Distribution under H<sub>0</sub>"),
+  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_NULL, _("Distribution under H₀"),
                                            d->discrete ? TF_SWATCH_OUTLINE : TF_SWATCH_LINE };
   entries[n_entries++] = (TfLegendEntry) { TF_SERIES_TAIL, tail_label, TF_SWATCH_HATCHED };
   obs_h = tf_fig_text_height (cr, &theme, theme.text_size, obs_label);

@@ -157,13 +157,13 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
   else
     {
       g_autofree char *value = tf_fig_number (curves->null_value, 6);
-      null_label = g_strdup_printf ("<i>%s</i><sub>0</sub> = %s", parameter, value);
+      null_label = g_strdup_printf ("<i>%s</i>₀ = %s", parameter, value);
     }
   if (isfinite (null_mass))
     {
       g_autofree char *p = tf_fig_number (null_mass, 3);
       /* TRANSLATORS: beside the spike of the null: its probability given the data */
-      mass_label = g_strdup_printf (_("P(H<sub>0</sub> | data) = %s"), p);
+      mass_label = g_strdup_printf (_("P(H₀ | data) = %s"), p);
     }
   null_h = tf_fig_text_height (cr, &theme, theme.text_size, null_label);
   top_extra = null_h + tf_figure_theme_pt (&theme, 2.0);
@@ -172,12 +172,12 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
     {
       g_autofree char *m = g_strdup_printf ("%.4g", mode);
       /* TRANSLATORS: legend of a posterior drawn as a spike; %s is its mode, e.g. 0.8094 */
-      note = g_strdup_printf (_("Posterior under H<sub>1</sub>, too narrow\nto draw: a spike at its mode, %s"), m);
+      note = g_strdup_printf (_("Posterior under H₁, too narrow\nto draw: a spike at its mode, %s"), m);
       entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, note, TF_SWATCH_LINE };
     }
   else
-    entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, _("Posterior under H<sub>1</sub>"), TF_SWATCH_LINE };
-  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_PRIOR, _("Prior under H<sub>1</sub>"), TF_SWATCH_LINE };
+    entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, _("Posterior under H₁"), TF_SWATCH_LINE };
+  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_PRIOR, _("Prior under H₁"), TF_SWATCH_LINE };
   entries[n_entries++] = (TfLegendEntry) { TF_SERIES_LIKELIHOOD, _("Likelihood, scaled"), TF_SWATCH_LINE };
 
   /* Lay out with the legend inside; if it would hide data, put it above the plot area in
