@@ -22,7 +22,10 @@ beta_inc (double a, double b, double x)
     return 0.0;
   if (x >= 1.0)
     return 1.0;
-  if (gsl_sf_beta_inc_e (a, b, x, &r) != GSL_SUCCESS)
+  int status = gsl_sf_beta_inc_e (a, b, x, &r);
+  if (status == GSL_EUNDRFLW)
+    return 0.0;
+  if (status != GSL_SUCCESS && !isfinite (r.val))
     return NAN;
   return r.val;
 }

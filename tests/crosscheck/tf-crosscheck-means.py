@@ -1,0 +1,309 @@
+# SPDX-License-Identifier: GPL-3.0-or-later
+"""Cross-check of Twofold's means numerics against scipy and mpmath.
+
+Usage: /usr/bin/python3 tf-crosscheck-means.py PATH/TO/tf-crosscheck-means-driver [N]
+
+Random cases over the whole valid domain (fixed seed; n from 2 to 1e8, |t| from 1e-3
+to 1e3, r from 1e-2 to 1e2) go through one run of the C driver; each quantity is
+compared with a reference and its worst error printed. Exit 0 when every case is inside
+its tolerance, 1 otherwise, 77 when scipy or mpmath is missing. References: scipy 1.10.1
+(Debian 12) and mpmath 1.2.1.
+
+Errors: for ln BF, |got − ref| / max(1, |ref|) (the relative error of BF while |ln BF| < 1,
+of ln BF beyond); for probabilities, the absolute error and the relative error where the
+reference is above 1e-300.
+"""
+import math
+import subprocess
+import sys
+import warnings
+
+try:
+    import numpy as np
+    import scipy.stats as st
+    from scipy.integrate import quad
+    from scipy.optimize import brentq
+    import mpmath as mp
+except ImportError as e:
+    print('skipping: %s' % e)
+    sys.exit(77)
+
+warnings.simplefilter('ignore')
+rng = np.random.default_rng(20240604)
+N_CASES = int(sys.argv[2]) if len(sys.argv) > 2 else 10000
+DRIVER = sys.argv[1]
+failures = 0
+
+
+def log_uniform(lo, hi):
+    return float(math.exp(rng.uniform(math.log(lo), math.log(hi))))
+
+
+def draw_design():
+    """t, n_eff, df for one sample, two samples or a known SD."""
+    n = float(round(log_uniform(2, 1e8)))
+    u = rng.uniform()
+    if u < 0.3:
+        nb = float(round(log_uniform(2, 1e8)))
+        n_eff, df = n * nb / (n + nb), n + nb - 2
+    else:
+        n_eff, df = n, n - 1
+    if u > 0.9:
+        df = math.inf
+    t = log_uniform(1e-3, 1e3) * (1 if rng.uniform() < 0.5 else -1)
+    return t, n_eff, df
+
+
+def run(lines):
+    out = subprocess.run([DRIVER], input=''.join(lines), capture_output=True, text=True,
+                         check=True)
+    return [float(x) for x in out.stdout.split()]
+
+
+def report(name, cases, got, ref, err_fn, tol, source):
+    global failures
+    worst, worst_case, bad = 0.0, None, 0
+    for c, g, r in zip(cases, got, ref):
+        e = err_fn(g, r)
+        if not e <= tol:
+            bad += 1
+            if bad <= 3:
+                print('  FAIL %s %r: got %r, ref %r' % (name, c, g, r))
+        if not e <= worst:
+            worst, worst_case = e, c
+    print('%-10s %6d cases  worst %.3g (tolerance %g) at %r  [%s]'
+          % (name, len(cases), worst, tol, worst_case, source))
+    failures += bad
+
+
+def lbf_err(g, r):
+    return abs(g - r) / max(1.0, abs(r))
+
+
+# --- references ---------------------------------------------------------------------
+
+def jzs_log_integrand_u(u, t, n, df, r):
+    """ln of the published integrand (Rouder et al. 2009, eq. 1 with scale r) times g,
+    in u = ln g."""
+    if u > 700 or u < -700:
+        return -1e300
+    g = math.exp(u)
+    if df == math.inf:
+        ll = -0.5 * math.log1p(n * g) + t * t / 2 * (n * g / (1 + n * g))
+    else:
+        ll = -0.5 * math.log1p(n * g) - (df + 1) / 2 * (
+            math.log1p(t * t / ((1 + n * g) * df)) - math.log1p(t * t / df))
+    return ll + math.log(r) - 0.5 * math.log(2 * math.pi) - u / 2 - r * r / (2 * g)
+
+
+def jzs_scipy(t, n, df, r):
+    """scipy.integrate.quad on the published integrand in ln g, split at its mode."""
+    us = np.linspace(-60, 60, 481)
+    v = [jzs_log_integrand_u(u, t, n, df, r) for u in us]
+    i = int(np.argmax(v))
+    um, m = us[i], v[i]
+    f = lambda u: math.exp(jzs_log_integrand_u(u, t, n, df, r) - m)
+    tot = 0.0
+    for a, b in [(-np.inf, um - 5), (um - 5, um), (um, um + 5), (um + 5, um + 40), (um + 40, np.inf)]:
+        tot += quad(f, a, b, epsabs=0, epsrel=1e-13, limit=200)[0]
+    return m + math.log(tot)
+
+
+def jzs_mpmath(t, n, df, r):
+    """mpmath.quad at 30 digits on the same published integrand."""
+    mp.mp.dps = 30
+    t, n, r = mp.mpf(t), mp.mpf(n), mp.mpf(r)
+    inf = df == math.inf
+    dfm = None if inf else mp.mpf(df)
+
+    def lf(u):
+        g = mp.e ** u
+        if inf:
+            ll = -mp.log1p(n * g) / 2 + t * t / 2 * (n * g / (1 + n * g))
+        else:
+            ll = -mp.log1p(n * g) / 2 - (dfm + 1) / 2 * (
+                mp.log1p(t * t / ((1 + n * g) * dfm)) - mp.log1p(t * t / dfm))
+        return ll + mp.log(r) - mp.log(2 * mp.pi) / 2 - u / 2 - r * r / (2 * g)
+    us = [mp.mpf(x) / 2 for x in range(-100, 100)]
+    vals = [lf(u) for u in us]
+    i = max(range(len(us)), key=lambda k: vals[k])
+    um, m = us[i], vals[i]
+    val = mp.quad(lambda u: mp.e ** (lf(u) - m), [um - 30, um - 5, um, um + 5, um + 40, um + 80])
+    return float(m + mp.log(val))
+
+
+def normal_mpmath(t, n, df, r):
+    """Gönen et al. (2005) with prior mean 0: the JZS integrand at g = r², in mpmath."""
+    mp.mp.dps = 40
+    t, n, g = mp.mpf(t), mp.mpf(n), mp.mpf(r) ** 2
+    if df == math.inf:
+        return float(-mp.log1p(n * g) / 2 + t * t / 2 * n * g / (1 + n * g))
+    df = mp.mpf(df)
+    return float(-mp.log1p(n * g) / 2 - (df + 1) / 2 * (mp.log1p(t * t / ((1 + n * g) * df))
+                                                       - mp.log1p(t * t / df)))
+
+
+def fmt(x):
+    return 'inf' if x == math.inf else repr(x)
+
+
+# --- Bayes factors ------------------------------------------------------------------
+
+cases = []
+for _ in range(N_CASES):
+    t, n, df = draw_design()
+    cases.append((t, n, df, log_uniform(1e-2, 1e2)))
+got = run(['jzs %r %r %s %r\n' % (t, n, fmt(df), r) for t, n, df, r in cases])
+report('jzs', cases, got, [jzs_scipy(*c) for c in cases], lbf_err, 1e-7,
+       'scipy.integrate.quad(published integrand in ln g, epsrel=1e-13)')
+sub = list(range(0, len(cases), max(1, len(cases) // 100)))
+report('jzs-mp', [cases[i] for i in sub], [got[i] for i in sub],
+       [jzs_mpmath(*cases[i]) for i in sub], lbf_err, 1e-9, 'mpmath.quad, mp.dps = 30')
+
+got = run(['normal %r %r %s %r\n' % (t, n, fmt(df), r) for t, n, df, r in cases])
+report('normal', cases, got, [normal_mpmath(*c) for c in cases], lbf_err, 1e-9,
+       'closed form in mpmath, mp.dps = 40')
+
+# --- t tests ------------------------------------------------------------------------
+
+pcases = []
+for _ in range(N_CASES):
+    t, n, df = draw_design()
+    pcases.append((t * log_uniform(1e-2, 1), df if df != math.inf else math.inf, int(rng.integers(0, 3))))
+
+
+def p_ref(t, df, d):
+    dist = st.norm if df == math.inf else st.t(df)
+    if d == 1:
+        return dist.sf(t)
+    if d == 2:
+        return dist.cdf(t)
+    return 2 * dist.sf(abs(t))
+
+
+def p_err(g, r):
+    if r < 1e-300:
+        return abs(g - r)
+    return abs(g - r) / r
+
+
+got = run(['pval %r %s %d\n' % (t, fmt(df), d) for t, df, d in pcases])
+report('p-value', pcases, got, [p_ref(*c) for c in pcases], p_err, 1e-9,
+       'scipy.stats.t(df).sf / .cdf, scipy.stats.norm')
+
+wcases = [(float(round(log_uniform(2, 1e8))), log_uniform(1e-3, 1e3),
+           float(round(log_uniform(2, 1e8))), log_uniform(1e-3, 1e3)) for _ in range(N_CASES)]
+
+
+def welch_ref(na, sa, nb, sb):
+    va, vb = mp.mpf(sa) ** 2 / na, mp.mpf(sb) ** 2 / nb
+    return float((va + vb) ** 2 / (va ** 2 / (na - 1) + vb ** 2 / (nb - 1)))
+
+
+got = run(['welch %r %r %r %r\n' % c for c in wcases])
+report('welch-df', wcases, got, [welch_ref(*c) for c in wcases], lambda g, r: abs(g - r) / r,
+       1e-12, 'Welch 1947 formula in mpmath')
+
+# --- noncentral t -------------------------------------------------------------------
+
+ncases = []
+for _ in range(N_CASES):
+    df = log_uniform(1, 1e5)
+    ncp = log_uniform(1e-3, 40) * (1 if rng.uniform() < 0.7 else -1)
+    t = ncp + rng.normal() * 3 * math.sqrt(1 + ncp * ncp / (2 * df))
+    ncases.append((t, df, ncp))
+got = run(['nctcdf %r %r %r\n' % c for c in ncases])
+ref = [st.nct.cdf(*c) for c in ncases]
+report('nct-cdf', ncases, got, ref, lambda g, r: abs(g - r), 1e-9,
+       'scipy.stats.nct.cdf (cdflib cdftnc), absolute error')
+
+def nct_lpdf_mpmath(x, nu, mu):
+    """The noncentral t density in confluent hypergeometric form (Johnson, Kotz &
+    Balakrishnan 1995, §31.5), in mpmath with the digits raised until the two terms'
+    cancellation (t and λ of opposite signs) leaves 15 digits."""
+    for dps in (40, 120, 400):
+        mp.mp.dps = dps
+        xm, num, mum = mp.mpf(x), mp.mpf(nu), mp.mpf(mu)
+        s = num + xm * xm
+        z = mum * mum * xm * xm / (2 * s)
+        A = mp.sqrt(2) * mum * xm * mp.hyp1f1(num / 2 + 1, mp.mpf(3) / 2, z) / (s * mp.gamma((num + 1) / 2))
+        B = mp.hyp1f1((num + 1) / 2, mp.mpf(1) / 2, z) / (mp.sqrt(s) * mp.gamma(num / 2 + 1))
+        tot = A + B
+        if tot > 0 and abs(tot) > abs(B) * mp.mpf(10) ** (15 - dps):
+            pre = (num / 2 * mp.log(num) + mp.loggamma(num + 1) - mum * mum / 2 - num * mp.log(2)
+                   - num / 2 * mp.log(s) - mp.loggamma(num / 2))
+            return float(pre + mp.log(tot))
+    return math.nan
+
+
+lcases = ncases[: N_CASES // 5]
+got = run(['nctlpdf %r %r %r\n' % c for c in lcases])
+report('nct-lpdf', lcases, got, [nct_lpdf_mpmath(*c) for c in lcases],
+       lambda g, r: abs(g - r) / max(1.0, abs(r)), 1e-7,
+       'mpmath.hyp1f1 closed form, mp.dps 40 to 400')
+
+icases = []
+for _ in range(N_CASES // 5):
+    t, df, ncp = ncases[int(rng.integers(0, len(ncases)))]
+    icases.append((t, df, float(rng.choice([0.005, 0.025, 0.05, 0.5, 0.95, 0.975, 0.995]))))
+got = run(['ncpinv %r %r %r\n' % c for c in icases])
+
+
+def ncp_ref(t, df, p):
+    f = lambda lam: st.nct.cdf(t, df, lam) - p
+    s = 1 + abs(t) / math.sqrt(2 * df)
+    lo, hi = t - 12 * s, t + 12 * s
+    return brentq(f, lo, hi, xtol=1e-13, rtol=1e-13)
+
+
+report('ncp-inv', icases, got, [ncp_ref(*c) for c in icases],
+       lambda g, r: abs(g - r) / max(1.0, abs(r)), 1e-7,
+       'scipy.optimize.brentq on scipy.stats.nct.cdf')
+
+# --- posterior mass of δ > 0 ---------------------------------------------------------
+
+scases = []
+for _ in range(N_CASES // 50):
+    n = float(round(log_uniform(2, 1e4)))
+    t = rng.normal() * 3
+    scases.append((t, n, n - 1, log_uniform(0.1, 2)))
+got = run(['side %r %r %r %r\n' % c for c in scases])
+
+
+def nct_pdf_jkb(t, df, lam):
+    """Johnson, Kotz & Balakrishnan (1995) eq. 31.15 by scipy.integrate.quad."""
+    s = t * t + df
+    a = lam * t / math.sqrt(s)
+    y0 = 0.5 * (a + math.sqrt(a * a + 4 * df))
+    lmax = df * math.log(y0) - 0.5 * (y0 - a) ** 2 if y0 > 0 else 0.0
+    f = lambda y: math.exp(df * math.log(y) - 0.5 * (y - a) ** 2 - lmax) if y > 0 else 0.0
+    w = 1.0 / math.sqrt(1 + df / max(y0, 1e-300) ** 2)
+    I = (quad(f, 0, max(y0 - 10 * w, 0)), quad(f, max(y0 - 10 * w, 0), y0 + 10 * w),
+         quad(f, y0 + 10 * w, np.inf))
+    I = sum(v[0] for v in I)
+    lc = (0.5 * df * math.log(df) - 0.5 * df * lam * lam / s - 0.5 * math.log(math.pi)
+          - math.lgamma(df / 2) - (df - 1) / 2 * math.log(2) - (df + 1) / 2 * math.log(s))
+    return math.exp(lc + lmax) * I
+
+
+def side_ref(t, n, df, r):
+    lik = lambda d: nct_pdf_jkb(t, df, math.sqrt(n) * d) * st.cauchy.pdf(d, 0, r)
+    c = t / math.sqrt(n)
+    w = math.sqrt((1 + t * t / (2 * df)) / n)
+    pts = sorted({0.0, c - 10 * w, c, c + 10 * w})
+    tot = quad(lik, -np.inf, pts[0], epsabs=0, epsrel=1e-12, limit=200)[0]
+    pos = 0.0
+    for a, b in zip(pts, pts[1:] + [np.inf]):
+        v = quad(lik, a, b, epsabs=0, epsrel=1e-12, limit=200)[0]
+        tot += v
+        if a >= 0:
+            pos += v
+    return math.log(pos / tot)
+
+
+report('P(d>0)', scases, got, [side_ref(*c) for c in scases],
+       lambda g, r: abs(math.exp(g) - math.exp(r)), 1e-7,
+       'scipy.integrate.quad of the JKB 31.15 density (itself by quad) x scipy.stats.cauchy.pdf, absolute')
+
+print('failures: %d' % failures)
+sys.exit(1 if failures else 0)
