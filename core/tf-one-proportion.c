@@ -352,15 +352,20 @@ tf_one_proportion_densities (const TfAnalysis *analysis, TfDensityCurves *curves
   const double P = k + a, Q = n - k + b, S = P + Q;
   const guint np = curves->n;
 
-  /* The posterior's central 1 − 1e-6 and the null value. */
+  /* The posterior's central 1 − 1e-6 and the null value, with a margin. */
   double qlo = tf_incbeta_inverse (0.5e-6, P, Q, TRUE);
   double qhi = tf_incbeta_inverse (0.5e-6, P, Q, FALSE);
   double lo = MIN (qlo, t), hi = MAX (qhi, t);
   double post_sd = sqrt (P * Q / (S * S * (S + 1.0)));
-  /* Widen to the prior's central 99% unless the posterior would span < 3 steps. */
+  double margin = 0.05 * (hi - lo);
+  lo = MAX (0.0, lo - margin);
+  hi = MIN (1.0, hi + margin);
+  /* Widen to the prior's central 99% only while the posterior's central 99.9%
+   * (about 6.6 sd) still spans a seventh of the range: a posterior drawn as a sliver
+   * says less than the prior's shape adds. */
   double plo = MIN (lo, tf_incbeta_inverse (0.005, a, b, TRUE));
   double phi = MAX (hi, tf_incbeta_inverse (0.005, a, b, FALSE));
-  if ((qhi - qlo) * (np - 1) / (phi - plo) >= 3.0)
+  if (6.6 * post_sd >= (phi - plo) / 7.0)
     {
       lo = plo;
       hi = phi;
@@ -374,6 +379,16 @@ tf_one_proportion_densities (const TfAnalysis *analysis, TfDensityCurves *curves
   curves->hi = hi;
   double step = (hi - lo) / (np - 1);
   curves->posterior_narrow = post_sd < 2.0 * step;
+  /* Mode of Beta(P, Q): (P − 1)/(S − 2) inside; at an end when a shape is at most 1;
+   * U-shaped posteriors (both below 1) have no single mode: the mean stands in. */
+  if (P > 1.0 && Q > 1.0)
+    curves->posterior_mode = (k + (a - 1.0)) / (n + (a + b - 2.0));
+  else if (P <= 1.0 && Q > 1.0)
+    curves->posterior_mode = 0.0;
+  else if (P > 1.0 && Q <= 1.0)
+    curves->posterior_mode = 1.0;
+  else
+    curves->posterior_mode = P / S;
 
   for (guint i = 0; i < np; i++)
     {
