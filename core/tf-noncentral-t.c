@@ -138,7 +138,7 @@ log_hermite_integral (double df, double a)
   p.y0 = a >= 0.0 ? 0.5 * (a + sqrt (a * a + 4.0 * c)) : 2.0 * c / (sqrt (a * a + 4.0 * c) - a);
   double sigma = 1.0 / sqrt (p.y0 * (2.0 * p.y0 - a));
   p.shift = hermite_log (&p, 0.0);
-  double lo = -(12.0 * sigma + 45.0 / c), hi = 12.0 * sigma + 0.5;
+  double lo = -(14.0 * sigma + 45.0 / c), hi = 14.0 * sigma;
   gsl_integration_workspace *w = gsl_integration_workspace_alloc (200);
   gsl_function f = { hermite_integrand, &p };
   double res = 0.0, err = 0.0;

@@ -1,0 +1,266 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * test-means.c: one mean, paired means and two means: worked examples, identities,
+ * validation messages naming their keys, and no NaN at the edges of the domain.
+ */
+#include <math.h>
+#include <gsl/gsl_errno.h>
+
+#include "tf-analysis.h"
+#include "tf-results.h"
+#include "tf-curves.h"
+#include "tf-jzs.h"
+#include "tf-noncentral-t.h"
+#include "tf-means.h"
+
+#define REL(got, want, tol) g_assert_cmpfloat_with_epsilon ((got), (want), (tol) * fabs (want))
+
+static double
+get (const TfResults *r, const char *id)
+{
+  double v = NAN;
+  if (!tf_results_get (r, id, &v))
+    g_error ("result %s is missing or undefined", id);
+  return v;
+}
+
+static GArray *
+array_of (const double *v, guint n)
+{
+  GArray *a = g_array_new (FALSE, FALSE, sizeof (double));
+  g_array_append_vals (a, v, n);
+  return a;
+}
+
+/* Student (1908), the sleep data (Cushny & Peebles 1905): the two drugs' extra hours
+ * of sleep in the same ten patients. */
+static const double sleep_a[] = { 0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0 };
+static const double sleep_b[] = { 1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4 };
+
+static void
+test_paired_sleep (void)
+{
+  g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_PAIRED_MEANS);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+
+  tf_analysis_set_values (&a->values_a, array_of (sleep_b, 10));
+  tf_analysis_set_values (&a->values_b, array_of (sleep_a, 10));
+  tf_analysis_summarise_values (a);
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+  g_assert_nonnull (r);
+  /* scipy 1.10.1: scipy.stats.ttest_1samp(b − a, 0) → 4.062127683382037, 0.00283289019738427 */
+  REL (get (r, "t"), 4.062127683382037, 1e-12);
+  g_assert_cmpfloat (get (r, "df"), ==, 9.0);
+  REL (get (r, "p_value"), 0.00283289019738427, 1e-9);
+  REL (get (r, "estimate"), 1.58, 1e-12);
+  /* BF10 17.25888: BayesFactor's ttestBF example on these data (from memory), and
+   * scipy.integrate.quad on Rouder et al. (2009) eq. 1, r = √2/2: 17.258880267773957 */
+  REL (get (r, "bf10"), 17.258880267773957, 1e-9);
+  REL (get (r, "bf01") * get (r, "bf10"), 1.0, 1e-12);
+  /* Cohen's d = t / √n */
+  REL (get (r, "effect_size"), 4.062127683382037 / sqrt (10.0), 1e-12);
+  g_assert_cmpfloat (get (r, "cri_low"), <, get (r, "effect_size"));
+  g_assert_cmpfloat (get (r, "hdi_high") - get (r, "hdi_low"), <=,
+                     get (r, "cri_high") - get (r, "cri_low") + 1e-9);
+  g_assert_cmpfloat (get (r, "prob_greater"), >, 0.99);
+}
+
+static void
+test_two_means (void)
+{
+  g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_TWO_MEANS);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+
+  a->n_a = 15; a->mean_a = 5.1; a->sd_a = 1.2;
+  a->n_b = 18; a->mean_b = 4.2; a->sd_b = 1.9;
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+  g_assert_nonnull (r);
+  /* scipy 1.10.1: ttest_ind_from_stats(5.1, 1.2, 15, 4.2, 1.9, 18, equal_var=False)
+   * → 1.6526826858013437, 0.10915372322994572; equal_var=True → 1.5874115917746896,
+   * 0.12256834075662182 */
+  REL (get (r, "t"), 1.6526826858013437, 1e-12);
+  REL (get (r, "p_value"), 0.10915372322994572, 1e-9);
+  REL (get (r, "p_value_welch"), 0.10915372322994572, 1e-9);
+  REL (get (r, "p_value_student"), 0.12256834075662182, 1e-9);
+  /* scipy.integrate.quad on the two-sample JZS integrand (Rouder et al. 2009), t from
+   * Student, N = 15·18/33, ν = 31, r = √2/2: 0.8639933374237501 */
+  REL (get (r, "bf10"), 0.8639933374237501, 1e-9);
+  a->equal_variances = TRUE;
+  g_autoptr (TfResults) r2 = tf_analysis_compute (a, problems);
+  REL (get (r2, "t"), 1.5874115917746896, 1e-12);
+  g_assert_cmpfloat (get (r2, "df"), ==, 31.0);
+}
+
+static void
+test_known_sd (void)
+{
+  g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_ONE_MEAN);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+
+  a->n = 25; a->mean = 0.4; a->sd = 1.3;
+  a->has_known_sd = TRUE; a->known_sd = 1.0;          /* z = 0.4 · 5 / 1 = 2 */
+  a->prior = TF_PRIOR_NORMAL;
+  g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+  g_assert_nonnull (r);
+  REL (get (r, "z"), 2.0, 1e-12);
+  g_assert_null (tf_results_lookup (r, "t"));
+  /* 2 Φ(−2), scipy 1.10.1: 2 * scipy.stats.norm.sf(2.0) = 0.04550026389635839 */
+  REL (get (r, "p_value"), 0.04550026389635839, 1e-9);
+  /* normal–normal closed form (1 + n r²)^(−½) exp(z² n r² / (2 (1 + n r²))), r² = ½:
+   * 1.7341320157826192 (evaluated in Python) */
+  REL (get (r, "bf10"), 1.7341320157826192, 1e-12);
+  /* the Cauchy prior next to it: scipy.integrate.quad on Rouder's integrand with ν → ∞:
+   * 1.25122490078385 */
+  REL (1.0 / get (r, "bf01_jzs"), 1.25122490078385, 1e-9);
+  /* exp(−z²/2) */
+  REL (get (r, "min_bf01_lr"), exp (-2.0), 1e-12);
+}
+
+static void
+test_one_sided_identity (void)
+{
+  /* BF+0 + BF−0 = 2 BF10 (Morey & Wagenmakers 2014): the two truncations share the prior. */
+  const double ts[] = { -3.0, 0.3, 2.5 };
+  for (guint i = 0; i < G_N_ELEMENTS (ts); i++)
+    {
+      TfDeltaPrior p = { .prior = TF_PRIOR_CAUCHY, .r = 0.707, .direction = TF_DIRECTION_TWO_SIDED };
+      double two = exp (-tf_means_log_bf01 (&p, ts[i], 30.0, 29.0));
+      p.direction = TF_DIRECTION_GREATER;
+      double plus = exp (-tf_means_log_bf01 (&p, ts[i], 30.0, 29.0));
+      p.direction = TF_DIRECTION_LESS;
+      double minus = exp (-tf_means_log_bf01 (&p, ts[i], 30.0, 29.0));
+      REL (plus + minus, 2.0 * two, 1e-8);
+    }
+}
+
+static void
+test_noncentral_t (void)
+{
+  /* scipy 1.10.1: scipy.stats.nct.cdf(1.5, 10, 1) = 0.6695168482153548,
+   * nct.cdf(-2, 5, 0.5) = 0.018978976156883057 */
+  REL (tf_nct_cdf (1.5, 10.0, 1.0), 0.6695168482153548, 1e-12);
+  REL (tf_nct_cdf (-2.0, 5.0, 0.5), 0.018978976156883057, 1e-11);
+  /* mpmath 1.2.1, hyp1f1 form of the density at mp.dps = 60: −1.12471881476431490 */
+  REL (tf_nct_log_pdf (1.5, 10.0, 1.0), -1.1247188147643149, 1e-12);
+  /* inverse round trip */
+  double lam = tf_nct_ncp_for_cdf (2.5, 20.0, 0.975);
+  REL (tf_nct_cdf (2.5, 20.0, lam), 0.975, 1e-12);
+}
+
+static void
+expect_problem (TfAnalysis *a, const char *key)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_assert_false (tf_analysis_validate (a, problems));
+  if (tf_problem_list_find (problems, "Data", key) == NULL
+      && tf_problem_list_find (problems, "Alternative", key) == NULL)
+    g_error ("no problem names %s", key);
+}
+
+static void
+test_validation (void)
+{
+  g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_ONE_MEAN);
+  a->n = 1; a->mean = 0.1; a->sd = 1.0;
+  expect_problem (a, "N");
+  a->n = 10; a->sd = 0.0;
+  expect_problem (a, "SD");
+  a->sd = 1.0;
+  const double one[] = { 3.0 };
+  tf_analysis_set_values (&a->values, array_of (one, 1));
+  tf_analysis_summarise_values (a);
+  expect_problem (a, "Values");
+  tf_analysis_set_values (&a->values, NULL);
+  a->n = 10; a->sd = 1.0; a->prior_scale = 0.0;
+  expect_problem (a, "PriorScale");
+  a->prior_scale = 0.7; a->prior = TF_PRIOR_BETA;
+  expect_problem (a, "Prior");
+
+  g_autoptr (TfAnalysis) p = tf_analysis_new (TF_DESIGN_PAIRED_MEANS);
+  tf_analysis_set_values (&p->values_a, array_of (sleep_a, 10));
+  tf_analysis_set_values (&p->values_b, array_of (sleep_b, 9));
+  tf_analysis_summarise_values (p);
+  expect_problem (p, "ValuesB");
+
+  g_autoptr (TfAnalysis) w = tf_analysis_new (TF_DESIGN_TWO_MEANS);
+  w->n_a = 10; w->mean_a = 1; w->sd_a = 0.0; w->n_b = 12; w->mean_b = 2; w->sd_b = 1.0;
+  expect_problem (w, "SDA");                 /* Welch with an SD of 0 */
+  w->equal_variances = TRUE;
+  g_autoptr (GPtrArray) ok = tf_problem_list_new ();
+  g_assert_true (tf_analysis_validate (w, ok));
+}
+
+/* Every number finite or undefined with a reason, at the edges of the domain. */
+static void
+test_no_nan (void)
+{
+  const double ns[] = { 2, 3, 1e4, 1e8 };
+  const double ts[] = { 0.0, 1e-3, 3.0, 1e3 };
+  for (guint i = 0; i < G_N_ELEMENTS (ns); i++)
+    for (guint j = 0; j < G_N_ELEMENTS (ts); j++)
+      for (int dir = 0; dir < 3; dir++)
+        {
+          g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_ONE_MEAN);
+          g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+          a->n = ns[i]; a->sd = 1.0; a->mean = ts[j] / sqrt (ns[i]);
+          a->direction = (TfDirection) dir;
+          g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
+          g_assert_nonnull (r);
+          for (guint k = 0; k < r->numbers->len; k++)
+            {
+              const TfNumber *num = g_ptr_array_index (r->numbers, k);
+              g_assert_true (num->status == TF_STATUS_UNDEFINED ? num->reason != NULL
+                                                                : isfinite (num->value));
+            }
+        }
+}
+
+static void
+test_curves (void)
+{
+  g_autoptr (TfAnalysis) a = tf_analysis_new (TF_DESIGN_ONE_MEAN);
+  a->n = 20; a->mean = 0.5; a->sd = 1.1;
+  g_autoptr (TfDensityCurves) c = tf_density_curves_new (a, 401, NULL);
+  g_assert_nonnull (c);
+  double sum = 0.0, lsum = 0.0;
+  for (guint i = 1; i < c->n; i++)
+    {
+      sum += 0.5 * (c->posterior[i] + c->posterior[i - 1]) * (c->x[i] - c->x[i - 1]);
+      lsum += 0.5 * (c->likelihood[i] + c->likelihood[i - 1]) * (c->x[i] - c->x[i - 1]);
+    }
+  g_assert_cmpfloat (fabs (sum - 1.0), <, 1e-3);
+  g_assert_cmpfloat (fabs (lsum - 1.0), <, 1e-3);
+  REL (c->prior_at_null, 1.0 / (G_PI * a->prior_scale), 1e-12);   /* Cauchy density at 0 */
+  g_assert_cmpstr (c->parameter_markup, ==, "δ");
+
+  g_autoptr (TfEvidenceCurve) s = tf_sensitivity_curve_new (a, 64, NULL, NULL);
+  g_assert_nonnull (s);
+  REL (s->x[0], 1e-2, 1e-12);
+  REL (s->x[63], 1e2, 1e-12);
+  g_assert_true (s->x_log);
+  g_assert_cmpfloat (s->chosen_x, ==, a->prior_scale);
+  g_autoptr (TfEvidenceCurve) n = tf_sample_size_curve_new (a, 32, NULL, NULL);
+  g_assert_nonnull (n);
+  g_assert_cmpfloat (n->x[31], >=, 0.99e8);
+  /* at a fixed p-value the evidence for the null grows with n (Lindley 1957) */
+  g_assert_cmpfloat (n->log_bf01[31], >, n->log_bf01[0]);
+  g_autoptr (TfNullDistribution) d = tf_null_distribution_new (a, 201, NULL, NULL);
+  g_assert_nonnull (d);
+  g_assert_false (d->discrete);
+  g_assert_true (d->in_tail[0] && d->in_tail[200] && !d->in_tail[100]);
+}
+
+int
+main (int argc, char **argv)
+{
+  gsl_set_error_handler_off ();
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/means/paired-sleep", test_paired_sleep);
+  g_test_add_func ("/means/two-means", test_two_means);
+  g_test_add_func ("/means/known-sd", test_known_sd);
+  g_test_add_func ("/means/one-sided-identity", test_one_sided_identity);
+  g_test_add_func ("/means/noncentral-t", test_noncentral_t);
+  g_test_add_func ("/means/validation", test_validation);
+  g_test_add_func ("/means/no-nan", test_no_nan);
+  g_test_add_func ("/means/curves", test_curves);
+  return g_test_run ();
+}
