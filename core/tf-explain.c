@@ -57,31 +57,115 @@ direction_words (TfDirection direction)
   return _("data no more probable under it than those observed");
 }
 
+/* The quantity the confidence interval is about, in words. */
+static const char *
+estimand_words (TfDesign design)
+{
+  switch (design)
+    {
+    case TF_DESIGN_ONE_PROPORTION: return _("the proportion θ");
+    case TF_DESIGN_TWO_PROPORTIONS: return _("the difference θA − θB");
+    case TF_DESIGN_ONE_MEAN: return _("the mean μ");
+    case TF_DESIGN_PAIRED_MEANS: return _("the mean difference within pairs");
+    case TF_DESIGN_TWO_MEANS: return _("the difference of means μA − μB");
+    case TF_DESIGN_ONE_RATE: return _("the rate λ");
+    case TF_DESIGN_TWO_RATES: return _("the rate ratio λA/λB");
+    case TF_N_DESIGNS: break;
+    }
+  return "";
+}
+
+/* The parameter the Bayesian numbers are about: the means designs put their prior on
+ * the standardised effect δ. */
+static const char *
+parameter_words (TfDesign design)
+{
+  switch (design)
+    {
+    case TF_DESIGN_ONE_MEAN:
+    case TF_DESIGN_PAIRED_MEANS:
+    case TF_DESIGN_TWO_MEANS:
+      return _("the standardised effect δ");
+    default:
+      return estimand_words (design);
+    }
+}
+
 /* The null model in words, e.g. "θ = 0.5". */
 static char *
 null_words (const TfAnalysis *a)
 {
   g_autofree char *value = tf_format_value (a->null_value, TF_MEASURE_ESTIMATE);
+  g_autofree char *low = tf_format_value (a->null_low, TF_MEASURE_ESTIMATE);
+  g_autofree char *high = tf_format_value (a->null_high, TF_MEASURE_ESTIMATE);
+  const char *name;
 
-  return g_strdup_printf ("θ = %s", value);
+  switch (a->design)
+    {
+    case TF_DESIGN_ONE_PROPORTION: name = "θ"; break;
+    case TF_DESIGN_TWO_PROPORTIONS: return g_strdup ("θA = θB");
+    case TF_DESIGN_ONE_MEAN: name = "μ"; break;
+    case TF_DESIGN_PAIRED_MEANS: name = _("the mean difference"); break;
+    case TF_DESIGN_TWO_MEANS: name = "μA − μB"; break;
+    case TF_DESIGN_ONE_RATE: name = "λ"; break;
+    case TF_DESIGN_TWO_RATES: name = "λA/λB"; break;
+    case TF_N_DESIGNS:
+    default: name = "?"; break;
+    }
+  if (a->null_kind == TF_NULL_INTERVAL)
+    {
+      if (a->design == TF_DESIGN_ONE_MEAN || a->design == TF_DESIGN_PAIRED_MEANS
+          || a->design == TF_DESIGN_TWO_MEANS)
+        name = "δ";
+      return g_strdup_printf (_("%s between %s and %s"), name, low, high);
+    }
+  if (a->design == TF_DESIGN_TWO_RATES && a->null_value == 0.0)
+    return g_strdup ("λA = λB");
+  return g_strdup_printf ("%s = %s", name, value);
+}
+
+/* The prior under the alternative, e.g. "Beta(1, 1)" or "Cauchy(0, 0.7071)". */
+static char *
+prior_words (const TfAnalysis *a)
+{
+  g_autofree char *p1 = NULL, *p2 = NULL;
+
+  switch (a->prior)
+    {
+    case TF_PRIOR_BETA:
+      p1 = tf_format_value (a->prior_a, TF_MEASURE_ESTIMATE);
+      p2 = tf_format_value (a->prior_b, TF_MEASURE_ESTIMATE);
+      return g_strdup_printf ("Beta(%s, %s)", p1, p2);
+    case TF_PRIOR_NORMAL:
+      p1 = tf_format_value (a->prior_scale, TF_MEASURE_ESTIMATE);
+      return g_strdup_printf (_("a normal distribution centred on 0 with SD %s"), p1);
+    case TF_PRIOR_CAUCHY:
+      p1 = tf_format_value (a->prior_scale, TF_MEASURE_ESTIMATE);
+      return g_strdup_printf (_("a Cauchy distribution centred on 0 with scale %s"), p1);
+    case TF_PRIOR_GAMMA:
+      p1 = tf_format_value (a->prior_shape, TF_MEASURE_ESTIMATE);
+      p2 = tf_format_value (a->prior_rate, TF_MEASURE_ESTIMATE);
+      return g_strdup_printf (_("Gamma(shape %s, rate %s)"), p1, p2);
+    }
+  return g_strdup ("?");
 }
 
 static char *
 alternative_words (const TfAnalysis *a)
 {
-  g_autofree char *pa = tf_format_value (a->prior_a, TF_MEASURE_ESTIMATE);
-  g_autofree char *pb = tf_format_value (a->prior_b, TF_MEASURE_ESTIMATE);
+  g_autofree char *prior = prior_words (a);
+  const char *what = parameter_words (a->design);
 
   switch (a->direction)
     {
     case TF_DIRECTION_GREATER:
-      return g_strdup_printf (_("θ above the null value, spread as Beta(%s, %s) cut to that side"), pa, pb);
+      return g_strdup_printf (_("%s above the null value, spread as %s cut to that side"), what, prior);
     case TF_DIRECTION_LESS:
-      return g_strdup_printf (_("θ below the null value, spread as Beta(%s, %s) cut to that side"), pa, pb);
+      return g_strdup_printf (_("%s below the null value, spread as %s cut to that side"), what, prior);
     case TF_DIRECTION_TWO_SIDED:
       break;
     }
-  return g_strdup_printf (_("θ anywhere from 0 to 1, spread as Beta(%s, %s)"), pa, pb);
+  return g_strdup_printf (_("%s spread as %s"), what, prior);
 }
 
 static void
@@ -110,11 +194,12 @@ explain_confidence (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
   double percent = 100.0 * a->level;
 
   add (list, _("The confidence interval"),
-       g_strdup_printf (_("The estimate is %s; the %g%% confidence interval runs from %s to %s. "
-                          "It holds the values of θ that a test at that level would not reject; "
-                          "the procedure covers the true value in %g%% of repeated samples."),
-                        est, percent, lo, hi, percent),
-       g_strdup_printf (_("It does not say that θ lies in this interval with probability %g%%: "
+       g_strdup_printf (_("The estimate of %s is %s; the %g%% confidence interval runs from %s "
+                          "to %s. It holds the values that a test at that level would not "
+                          "reject; the procedure covers the true value in %g%% of repeated "
+                          "samples."),
+                        estimand_words (a->design), est, percent, lo, hi, percent),
+       g_strdup_printf (_("It does not say that the true value lies in this interval with probability %g%%: "
                           "that reading belongs to the credible interval, under a prior. Nor does "
                           "it weigh the null against an alternative."),
                         percent));
@@ -170,9 +255,9 @@ explain_credible (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
   double percent = 100.0 * a->level;
 
   add (list, _("The credible interval"),
-       g_strdup_printf (_("If the alternative model holds, θ lies between %s and %s with "
+       g_strdup_printf (_("If the alternative model holds, %s lies between %s and %s with "
                           "probability %g%%, given its prior and the data (equal tails)."),
-                        lo, hi, percent),
+                        parameter_words (a->design), lo, hi, percent),
        g_strdup (_("It is conditional on the alternative: it gives the null value no special "
                    "weight and is no test of it. Whether the null value falls inside says "
                    "little about the null model; the Bayes factor speaks to that.")));

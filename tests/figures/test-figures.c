@@ -2,6 +2,7 @@
  * test-figures.c: every figure kind drawn from known curves built here, its pixels
  * checked where the numbers say the curves are; the ticks and numbers of the axes.
  */
+#include <gsl/gsl_errno.h>
 #include <math.h>
 #include "tf-figure.h"
 #include "tf-figure-private.h"
@@ -447,6 +448,7 @@ test_numbers (void)
 int
 main (int argc, char **argv)
 {
+  gsl_set_error_handler_off ();
   g_test_init (&argc, &argv, NULL);
   g_test_add_data_func ("/figures/known/densities-light", GINT_TO_POINTER (TF_FIGURE_STYLE_LIGHT), test_densities_known);
   g_test_add_data_func ("/figures/known/densities-dark", GINT_TO_POINTER (TF_FIGURE_STYLE_DARK), test_densities_known);
