@@ -30,7 +30,7 @@ warnings.simplefilter('ignore')
 mp.mp.dps = 40
 rng = np.random.default_rng(20240607)
 N = int(sys.argv[2]) if len(sys.argv) > 2 else 10000
-N_QUAD = max(50, N // 20)       # tanh-sinh quadratures (slow) per quantity
+N_QUAD = max(50, N // 100)      # tanh-sinh quadratures (slow) per quantity: 100 at N = 10^4
 
 
 def log_uniform(lo, hi):
