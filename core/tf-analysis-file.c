@@ -24,7 +24,7 @@ static const char *const known_keys[][2] = {
   { "Alternative", "Direction" }, { "Alternative", "Prior" }, { "Alternative", "PriorA" },
   { "Alternative", "PriorB" }, { "Alternative", "PriorScale" }, { "Alternative", "PriorShape" },
   { "Alternative", "PriorRate" },
-  { "Models", "PriorNull" },
+  { "Models", "PriorNull" }, { "Models", "Set" }, { "Models", "Priors" },
   { "Options", "Level" },
 };
 
@@ -192,6 +192,92 @@ WORD_PARSER (parse_direction, TfDirection, tf_direction_from_string)
 WORD_PARSER (parse_prior, TfPriorFamily, tf_prior_family_from_string)
 WORD_PARSER (parse_null_kind, TfNullKind, tf_null_kind_from_string)
 
+/* [Models] Set (words separated by ';') and Priors (one prior probability per model;
+ * equal priors when absent). The ranges and the sum are checked by the design's
+ * validation, so that an analysis made in code is held to them too. */
+static void
+read_models (Reader *r, TfAnalysis *a)
+{
+  g_autofree char *text = reader_string (r, "Models", "Set");
+  g_auto (GStrv) words = NULL;
+  g_autoptr (GArray) priors = NULL;
+  guint n = 0;
+
+  if (text == NULL)
+    {
+      if (g_key_file_has_key (r->key_file, "Models", "Priors", NULL))
+        g_ptr_array_add (r->problems,
+                         tf_problem_new ("Models", "Priors",
+                                         _("Priors gives the prior probabilities of a model set; name the models in Set.")));
+      return;
+    }
+  if (a->design != TF_DESIGN_ONE_PROPORTION)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new ("Models", "Set",
+                                       _("A model set is available for one proportion only in this version.")));
+      return;
+    }
+  words = g_strsplit (text, ";", -1);
+  for (guint i = 0; words[i]; i++)
+    {
+      char *word = g_strstrip (words[i]);
+      TfModel model;
+
+      if (*word == '\0' && words[i + 1] == NULL && i > 0)
+        break;  /* a trailing ';' */
+      if (!tf_model_from_string (word, &model))
+        {
+          g_ptr_array_add (r->problems,
+                           tf_problem_new ("Models", "Set",
+                                           _("“%s” is not a model; use null, less, greater or two-sided, separated by ';'."),
+                                           word));
+          return;
+        }
+      if (n == TF_N_MODELS)
+        {
+          g_ptr_array_add (r->problems,
+                           tf_problem_new ("Models", "Set",
+                                           _("Set lists more than the %d models there are (null, less, greater, two-sided)."),
+                                           TF_N_MODELS));
+          return;
+        }
+      a->models[n++] = model;
+    }
+  priors = reader_list (r, "Models", "Priors");
+  if (priors == NULL && g_key_file_has_key (r->key_file, "Models", "Priors", NULL))
+    return;  /* the list's problem is already reported */
+  if (priors != NULL && priors->len != n)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new ("Models", "Priors",
+                                       _("Priors has %u values for the %u models in Set."),
+                                       priors->len, n));
+      return;
+    }
+  for (guint i = 0; i < n; i++)
+    a->model_priors[i] = priors ? g_array_index (priors, double, i) : 1.0 / n;
+  a->n_models = n;
+}
+
+static void
+write_models (GKeyFile *key_file, const TfAnalysis *a)
+{
+  g_autoptr (GString) set = g_string_new (NULL);
+  g_autoptr (GString) priors = g_string_new (NULL);
+
+  if (a->n_models == 0)
+    return;
+  for (guint i = 0; i < a->n_models; i++)
+    {
+      g_autofree char *p = tf_format_double (a->model_priors[i]);
+      g_string_append_printf (set, "%s%s", i ? ";" : "", tf_model_to_string (a->models[i]));
+      g_string_append_printf (priors, "%s%s", i ? ";" : "", p);
+    }
+  g_key_file_set_value (key_file, "Models", "Set", set->str);
+  g_key_file_set_value (key_file, "Models", "Priors", priors->str);
+}
+
 /* The three summary keys of a sample: its size, mean and SD. */
 static void
 read_summaries (Reader *r, const char *n_key, const char *mean_key, const char *sd_key,
@@ -329,6 +415,7 @@ tf_analysis_from_key_file (GKeyFile *key_file, GPtrArray *problems)
   a->prior_rate = reader_number (&r, "Alternative", "PriorRate", FALSE, a->prior_rate);
 
   a->prior_null = reader_number (&r, "Models", "PriorNull", FALSE, a->prior_null);
+  read_models (&r, a);
   a->level = reader_number (&r, "Options", "Level", FALSE, a->level);
 
   if (problems->len != r.n_before)
@@ -531,6 +618,7 @@ tf_analysis_to_key_file (const TfAnalysis *a)
       break;
     }
   set_number (key_file, "Models", "PriorNull", a->prior_null);
+  write_models (key_file, a);
   set_number (key_file, "Options", "Level", a->level);
 
   /* Keep what Twofold does not know. */

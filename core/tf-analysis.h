@@ -37,6 +37,38 @@ typedef enum {
   TF_PRIOR_GAMMA
 } TfPriorFamily;
 
+/* [Models] Set: the hypotheses of a model set, each with a prior probability (Priors).
+ * null: the [Null] hypothesis (a point or an interval); less, greater: the Beta prior
+ * truncated below or above the null (θ0, or Low and High); two-sided: the prior on
+ * everything but the null. */
+typedef enum {
+  TF_MODEL_NULL,
+  TF_MODEL_LESS,
+  TF_MODEL_GREATER,
+  TF_MODEL_TWO_SIDED,
+  TF_N_MODELS
+} TfModel;
+
+/* The file's word for a model ("null", "less", "greater", "two-sided"). */
+static inline const char *
+tf_model_to_string (TfModel model)
+{
+  static const char *const words[TF_N_MODELS] = { "null", "less", "greater", "two-sided" };
+  return (guint) model < TF_N_MODELS ? words[model] : "";
+}
+
+static inline gboolean
+tf_model_from_string (const char *s, TfModel *model)
+{
+  for (int i = 0; i < TF_N_MODELS; i++)
+    if (g_strcmp0 (s, tf_model_to_string ((TfModel) i)) == 0)
+      {
+        *model = (TfModel) i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
 /* Counts are held as doubles with integer values: exact up to 2^53, which covers the
  * documented range n <= 10^12 with room to spare. */
 typedef struct {
@@ -83,6 +115,9 @@ typedef struct {
 
   /* [Models] */
   double prior_null;            /* prior probability of the null model */
+  guint n_models;               /* Set: 0 when absent (the null against the alternative) */
+  TfModel models[TF_N_MODELS];  /* distinct, in the order of Set */
+  double model_priors[TF_N_MODELS]; /* Priors, as written (never renormalised) */
 
   /* [Options] */
   double level;                 /* confidence and credible level */

@@ -3,6 +3,7 @@
  */
 #include "tf-design.h"
 #include "tf-one-proportion.h"
+#include "tf-one-proportion-private.h"
 #include "tf-one-rate.h"
 #include "tf-two-rates.h"
 #include "tf-one-mean.h"
@@ -14,6 +15,11 @@ static const TfDesignClass one_proportion = {
   .validate = tf_one_proportion_validate,
   .compute = tf_one_proportion_compute,
   .densities = tf_one_proportion_densities,
+  .sensitivity = tf_one_proportion_sensitivity,
+  .sample_size = tf_one_proportion_sample_size,
+  /* .null_distribution = tf_one_proportion_null_distribution, once the null figure's
+   * legend fits a 60 mm figure (tests/figures fails on its width) */
+  .model_probabilities = tf_one_proportion_model_probabilities,
 };
 
 const TfDesignClass *

@@ -7,13 +7,12 @@
 #include "tf-incbeta.h"
 #include "tf-incbeta-private.h"
 #include "tf-logspace.h"
+#include "tf-one-proportion-private.h"
+#include "tf-proportion-intervals.h"
 
 #include <math.h>
 #include <float.h>
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_cdf.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
 
 #define TF_MAX_TRIALS 1e15
 #define TF_MAX_SHAPE 1e15
@@ -22,6 +21,50 @@ static gboolean
 is_whole (double v)
 {
   return isfinite (v) && v == floor (v);
+}
+
+/* [Models] Set and Priors: distinct models, priors in (0, 1) summing to 1. */
+static void
+validate_models (const TfAnalysis *an, GPtrArray *problems)
+{
+  double sum = 0.0;
+  gboolean each_ok = TRUE;
+
+  if (an->n_models == 0)
+    return;
+  for (guint i = 0; i < an->n_models; i++)
+    for (guint j = 0; j < i; j++)
+      if (an->models[i] == an->models[j])
+        {
+          g_ptr_array_add (problems,
+                           tf_problem_new ("Models", "Set",
+                                           _("The model “%s” is listed twice in Set."),
+                                           tf_model_to_string (an->models[i])));
+          return;
+        }
+  if (an->n_models < 2)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Models", "Set",
+                                     _("A model set needs at least two models (it has %u)."),
+                                     an->n_models));
+  for (guint i = 0; i < an->n_models; i++)
+    {
+      double p = an->model_priors[i];
+      sum += p;
+      if (!(p > 0.0 && p < 1.0) && each_ok)
+        {
+          g_ptr_array_add (problems,
+                           tf_problem_new ("Models", "Priors",
+                                           _("Each prior model probability in Priors must lie strictly between 0 and 1 (item %u is %g)."),
+                                           i + 1, p));
+          each_ok = FALSE;
+        }
+    }
+  if (each_ok && fabs (sum - 1.0) > 1e-9)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Models", "Priors",
+                                     _("The prior model probabilities in Priors must sum to 1 (they sum to %.12g); Twofold does not rescale them."),
+                                     sum));
 }
 
 void
@@ -47,9 +90,25 @@ tf_one_proportion_validate (const TfAnalysis *analysis, GPtrArray *problems)
                                      k, n));
 
   if (analysis->null_kind == TF_NULL_INTERVAL)
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Null", "Kind",
-                                     _("Interval nulls are not available for one proportion yet; use a point null.")));
+    {
+      gboolean lo_ok = analysis->null_low > 0.0 && analysis->null_low < 1.0;
+      gboolean hi_ok = analysis->null_high > 0.0 && analysis->null_high < 1.0;
+      if (!lo_ok)
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "Low",
+                                         _("The lower end of the null interval (Low) must lie strictly between 0 and 1 (it is %g)."),
+                                         analysis->null_low));
+      if (!hi_ok)
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "High",
+                                         _("The upper end of the null interval (High) must lie strictly between 0 and 1 (it is %g)."),
+                                         analysis->null_high));
+      else if (lo_ok && !(analysis->null_low < analysis->null_high))
+        g_ptr_array_add (problems,
+                         tf_problem_new ("Null", "High",
+                                         _("The upper end of the null interval (High, %g) must be above its lower end (Low, %g)."),
+                                         analysis->null_high, analysis->null_low));
+    }
   else if (!(analysis->null_value > 0.0 && analysis->null_value < 1.0))
     g_ptr_array_add (problems,
                      tf_problem_new ("Null", "Value",
@@ -71,6 +130,7 @@ tf_one_proportion_validate (const TfAnalysis *analysis, GPtrArray *problems)
                      tf_problem_new ("Alternative", "PriorB",
                                      _("The beta shape PriorB must be above 0 and at most 10^15 (it is %g)."),
                                      analysis->prior_b));
+  validate_models (analysis, problems);
 }
 
 /* x − (x + y) θ computed without cancellation for whole k, n and real a, b:
@@ -135,17 +195,6 @@ tf_one_proportion_log_bf01 (double k, double n, double theta0, double a, double 
          - tf_stirling_remainder (Q) + tf_stirling_remainder (S);
 }
 
-/* ln P(Z >= z) for the standard normal, ln(½ erfc(z/√2)), finite far into the tail
- * (GSL's log_erfc, Cody 1969 rational approximations). */
-static double
-log_normal_upper (double z)
-{
-  gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
-    return NAN;
-  return r.val - G_LN2;
-}
-
 /* A quantile u of Beta(P, Q) truncated to θ > θ0 (greater), θ < θ0 (less), or not
  * truncated (two-sided), through the log-space inverse. */
 static double
@@ -185,89 +234,144 @@ posterior_mean (double P, double Q, double theta0, TfDirection direction)
   return mean * exp (l1 - l0);
 }
 
+/* The tests of the analysis's null in its direction. A point null: the tests of
+ * θ = θ0. An interval null [L, H]: against θ > H the one-sided tests at H, against
+ * θ < L those at L (the ends are the least favourable points of the null, the
+ * binomial having a monotone likelihood ratio, Lehmann & Romano 2005, §3.4); against
+ * both sides, each one-sided test at each end at half the level: twice the smaller
+ * one-sided p-value, at most 1 (Bonferroni's union of the two one-sided tests). */
+static void
+null_tests (const TfAnalysis *an, TfOneProportionTests *t)
+{
+  const double k = an->successes, n = an->trials;
+  double L, H;
+
+  tf_one_proportion_null_ends (an, &L, &H);
+  if (an->null_kind == TF_NULL_POINT)
+    {
+      tf_one_proportion_tests (k, n, L, an->direction, t);
+      return;
+    }
+  if (an->direction == TF_DIRECTION_GREATER)
+    {
+      tf_one_proportion_tests (k, n, H, TF_DIRECTION_GREATER, t);
+      return;
+    }
+  if (an->direction == TF_DIRECTION_LESS)
+    {
+      tf_one_proportion_tests (k, n, L, TF_DIRECTION_LESS, t);
+      return;
+    }
+  TfOneProportionTests up, down;
+  tf_one_proportion_tests (k, n, H, TF_DIRECTION_GREATER, &up);
+  tf_one_proportion_tests (k, n, L, TF_DIRECTION_LESS, &down);
+  /* the statistics at the end nearer the data */
+  *t = up.d > -down.d ? up : down;
+#define TWICE_MIN(f) t->f = MIN (0.0, G_LN2 + MIN (up.f, down.f))
+  TWICE_MIN (lp_exact);
+  TWICE_MIN (lp_central);
+  TWICE_MIN (lp_mid);
+  TWICE_MIN (lp_score);
+  TWICE_MIN (lp_score_cc);
+  TWICE_MIN (lp_lr);
+#undef TWICE_MIN
+}
+
+static void
+add_p (TfResults *results, const char *id, const char *label, double lp)
+{
+  tf_results_add (results, id, label, TF_MEASURE_TAIL_PROBABILITY, MIN (exp (lp), 1.0));
+}
+
+static void
+add_interval (TfResults *results, const char *id_lo, const char *label_lo,
+              const char *id_hi, const char *label_hi, double lo, double hi)
+{
+  tf_results_add (results, id_lo, label_lo, TF_MEASURE_CONFIDENCE_LIMIT, lo);
+  tf_results_add (results, id_hi, label_hi, TF_MEASURE_CONFIDENCE_LIMIT, hi);
+}
+
+/* Mode of Beta(P, Q) (Johnson, Kotz & Balakrishnan 1995, §25.1), moved to the side's
+ * end when truncated; FALSE when flat or U-shaped. */
+static gboolean
+posterior_mode (double P, double Q, double cut, TfDirection side, double *mode)
+{
+  if (P > 1.0 && Q > 1.0)
+    *mode = (P - 1.0) / (P + Q - 2.0);
+  else if (P <= 1.0 && Q > 1.0)
+    *mode = 0.0;
+  else if (Q <= 1.0 && P > 1.0)
+    *mode = 1.0;
+  else if (P == 1.0 && Q < 1.0)
+    *mode = 1.0;
+  else if (Q == 1.0 && P < 1.0)
+    *mode = 0.0;
+  else
+    return FALSE;
+  if (side == TF_DIRECTION_GREATER)
+    *mode = MAX (*mode, cut);
+  else if (side == TF_DIRECTION_LESS)
+    *mode = MIN (*mode, cut);
+  return TRUE;
+}
+
 void
 tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
 {
   const double k = analysis->successes, n = analysis->trials;
-  const double t = analysis->null_value, u = 1.0 - t;
   const double a = analysis->prior_a, b = analysis->prior_b;
   const double level = analysis->level, pi0 = analysis->prior_null;
   const TfDirection dir = analysis->direction;
+  const gboolean point = analysis->null_kind == TF_NULL_POINT;
   const double P = k + a, Q = n - k + b;
-  double lp_exact, lp_mid, lp_score, lp_lr;
+  double L, H;
+  TfOneProportionTests t;
 
+  tf_one_proportion_null_ends (analysis, &L, &H);
   tf_results_add (results, "estimate", _("Observed proportion"), TF_MEASURE_ESTIMATE, k / n);
 
   /* Classical tests in the chosen direction. */
-  double lpmf = tf_log_dbinom (k, n, t, u);
-  double d = tf_incbeta_lambda (k, n - k, t, u);          /* k − nθ0, exactly */
-  double dev = tf_bd0_delta (k, n * t, d) + tf_bd0_delta (n - k, n * u, -d); /* G / 2 */
-  double z = d / sqrt (n * t * u);
-  double r = (d < 0.0 ? -1.0 : 1.0) * sqrt (2.0 * dev);  /* signed root of G */
-
-  switch (dir)
+  null_tests (analysis, &t);
+  add_p (results, "p_value", _("p-value (exact)"), t.lp_exact);
+  add_p (results, "p_value_exact", _("Exact binomial p-value"), t.lp_exact);
+  add_p (results, "p_value_central", _("Exact p-value, twice the smaller tail"), t.lp_central);
+  add_p (results, "p_value_midp", _("Mid-p-value"), t.lp_mid);
+  add_p (results, "p_value_score", _("Score test p-value"), t.lp_score);
+  add_p (results, "p_value_score_cc", _("Score test p-value, continuity-corrected"), t.lp_score_cc);
+  add_p (results, "p_value_lr", _("Likelihood-ratio test p-value"), t.lp_lr);
+  tf_results_add (results, "z", _("Score statistic z"), TF_MEASURE_STATISTIC, t.z);
+  if (!point)
     {
-    case TF_DIRECTION_GREATER:
-      lp_exact = tf_binom_log_sf (k, n, t, u);
-      /* mid-p (Lancaster 1961): P(X > k) + ½ P(X = k) */
-      lp_mid = tf_log_add (tf_binom_log_sf (k + 1.0, n, t, u), lpmf - G_LN2);
-      lp_score = log_normal_upper (z);
-      lp_lr = log_normal_upper (r);
-      break;
-    case TF_DIRECTION_LESS:
-      lp_exact = tf_binom_log_cdf (k, n, t, u);
-      lp_mid = tf_log_add (tf_binom_log_cdf (k - 1.0, n, t, u), lpmf - G_LN2);
-      lp_score = log_normal_upper (-z);
-      lp_lr = log_normal_upper (-r);
-      break;
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      lp_exact = tf_binom_log_exact_two_sided (k, n, t);
-      /* two-sided mid-p (Lancaster 1961, with the minimum-likelihood rule):
-       * the exact p-value minus half the probability of the observed outcome */
-      lp_mid = tf_log_sub (lp_exact, lpmf - G_LN2);
-      /* 2 Φ(−|z|), from the upper tail */
-      lp_score = G_LN2 + log_normal_upper (fabs (z));
-      /* P(χ²₁ >= G) = erfc(√(G/2)) = erfc(√dev) */
-      {
-        gsl_sf_result er;
-        lp_lr = gsl_sf_log_erfc_e (sqrt (dev), &er) == GSL_SUCCESS ? er.val : NAN;
-      }
-      break;
+      /* The reverse question, θ inside [L, H] as the alternative: the larger of the
+       * two one-sided exact p-values at the ends (two one-sided tests, an
+       * intersection–union test, Berger & Hsu 1996). */
+      double lp_up = tf_binom_log_sf (k, n, L, 1.0 - L);
+      double lp_down = tf_binom_log_cdf (k, n, H, 1.0 - H);
+      add_p (results, "p_value_equivalence", _("Equivalence p-value (θ inside the interval)"),
+             MAX (lp_up, lp_down));
     }
-  double p_value = exp (lp_exact);
 
-  tf_results_add (results, "p_value", _("p-value (exact)"), TF_MEASURE_TAIL_PROBABILITY, p_value);
-  tf_results_add (results, "p_value_exact", _("Exact binomial p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, p_value);
-  tf_results_add (results, "p_value_midp", _("Mid-p-value"), TF_MEASURE_TAIL_PROBABILITY,
-                  MIN (exp (lp_mid), 1.0));
-  tf_results_add (results, "p_value_score", _("Score test p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (lp_score), 1.0));
-  tf_results_add (results, "p_value_lr", _("Likelihood-ratio test p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (lp_lr), 1.0));
-  tf_results_add (results, "z", _("Score statistic z"), TF_MEASURE_STATISTIC, z);
+  /* Intervals, always two-sided at level, whatever the direction of the test. */
+  double lo, hi;
+  tf_binom_clopper_pearson (k, n, level, &lo, &hi);
+  add_interval (results, "ci_low", _("Confidence interval, lower"),
+                "ci_high", _("Confidence interval, upper"), lo, hi);
+  tf_proportion_wilson (k, n, level, FALSE, &lo, &hi);
+  add_interval (results, "wilson_low", _("Wilson interval, lower"),
+                "wilson_high", _("Wilson interval, upper"), lo, hi);
+  tf_proportion_wilson (k, n, level, TRUE, &lo, &hi);
+  add_interval (results, "wilson_cc_low", _("Wilson interval with continuity correction, lower"),
+                "wilson_cc_high", _("Wilson interval with continuity correction, upper"), lo, hi);
+  tf_proportion_jeffreys (k, n, level, &lo, &hi);
+  add_interval (results, "jeffreys_low", _("Jeffreys interval, lower"),
+                "jeffreys_high", _("Jeffreys interval, upper"), lo, hi);
+  tf_proportion_agresti_coull (k, n, level, &lo, &hi);
+  add_interval (results, "agresti_coull_low", _("Agresti–Coull interval, lower"),
+                "agresti_coull_high", _("Agresti–Coull interval, upper"), lo, hi);
 
-  /* Clopper–Pearson, always the two-sided interval at level, whatever the direction
-   * of the test: it is the interval people expect beside any of the three tests. */
-  double ci_lo, ci_hi;
-  tf_binom_clopper_pearson (k, n, level, &ci_lo, &ci_hi);
-  tf_results_add (results, "ci_low", _("Confidence interval, lower"),
-                  TF_MEASURE_CONFIDENCE_LIMIT, ci_lo);
-  tf_results_add (results, "ci_high", _("Confidence interval, upper"),
-                  TF_MEASURE_CONFIDENCE_LIMIT, ci_hi);
-
-  /* Bayes factors. For a one-sided alternative the prior is Beta(a, b) truncated to
-   * the side: BF10± = BF10 · P(side | data, H1) / P(side | H1). */
-  double lbf01 = tf_one_proportion_log_bf01 (k, n, t, a, b);
-  double post_l, post_u, prior_l, prior_u;
-  tf_incbeta_log_both (t, u, P, Q, &post_l, &post_u);
-  tf_incbeta_log_both (t, u, a, b, &prior_l, &prior_u);
-  if (dir == TF_DIRECTION_GREATER)
-    lbf01 += prior_u - post_u;
-  else if (dir == TF_DIRECTION_LESS)
-    lbf01 += prior_l - post_l;
-
+  /* Bayes factors: the null (point or interval) against Beta(a, b) on the rest, or
+   * truncated to the side for a one-sided alternative. */
+  double lbf01 = tf_one_proportion_analysis_log_bf01 (analysis, k, n, a, b);
   if (isfinite (lbf01))
     {
       tf_results_add (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, exp (-lbf01));
@@ -275,38 +379,65 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
     }
   else
     {
-      const char *why = _("the posterior mass on the side of the alternative underflows, so the Bayes factor cannot be represented");
+      const char *why = _("the posterior or prior mass of a hypothesis underflows, so the Bayes factor cannot be represented");
       tf_results_add_undefined (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, why);
       tf_results_add_undefined (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, why);
     }
 
   /* P(H0 | data) = logistic(logit π0 + ln BF01), each side from its own argument. */
-  double lo = log (pi0) - log1p (-pi0) + lbf01;
+  double lo_odds = log (pi0) - log1p (-pi0) + lbf01;
   tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo));
+                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo_odds));
   tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo));
+                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo_odds));
 
-  /* The posterior under the alternative. */
+  /* The posterior under the alternative, truncated to its side when one-sided (above
+   * H, below L); for an interval null against both sides, the whole Beta posterior. */
+  double cut = dir == TF_DIRECTION_LESS ? L : H;
   double alpha2 = 0.5 * (1.0 - level);
   tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_quantile (alpha2, P, Q, t, dir));
+                  posterior_quantile (alpha2, P, Q, cut, dir));
   tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_quantile (1.0 - alpha2, P, Q, t, dir));
+                  posterior_quantile (1.0 - alpha2, P, Q, cut, dir));
+  if (dir == TF_DIRECTION_TWO_SIDED && tf_beta_hdi (P, Q, level, &lo, &hi))
+    {
+      tf_results_add (results, "hdi_low", _("Highest-density interval, lower"),
+                      TF_MEASURE_CREDIBLE_LIMIT, lo);
+      tf_results_add (results, "hdi_high", _("Highest-density interval, upper"),
+                      TF_MEASURE_CREDIBLE_LIMIT, hi);
+    }
+  else
+    {
+      const char *why = dir != TF_DIRECTION_TWO_SIDED
+                        ? _("the highest-density interval is reported for the two-sided alternative only")
+                        : _("the posterior density is flat or U-shaped, so no single interval has the highest density");
+      tf_results_add_undefined (results, "hdi_low", _("Highest-density interval, lower"),
+                                TF_MEASURE_CREDIBLE_LIMIT, why);
+      tf_results_add_undefined (results, "hdi_high", _("Highest-density interval, upper"),
+                                TF_MEASURE_CREDIBLE_LIMIT, why);
+    }
   tf_results_add (results, "posterior_mean", _("Posterior mean"), TF_MEASURE_ESTIMATE,
-                  posterior_mean (P, Q, t, dir));
+                  posterior_mean (P, Q, cut, dir));
   tf_results_add (results, "posterior_median", _("Posterior median"), TF_MEASURE_ESTIMATE,
-                  posterior_quantile (0.5, P, Q, t, dir));
+                  posterior_quantile (0.5, P, Q, cut, dir));
+  double mode;
+  if (posterior_mode (P, Q, cut, dir, &mode))
+    tf_results_add (results, "posterior_mode", _("Posterior mode"), TF_MEASURE_ESTIMATE, mode);
+  else
+    tf_results_add_undefined (results, "posterior_mode", _("Posterior mode"), TF_MEASURE_ESTIMATE,
+                              _("the posterior density is flat or U-shaped, so it has no single mode"));
   /* Under the untruncated Beta(k + a, n − k + b) posterior, whatever the direction. */
-  tf_results_add (results, "prob_greater", _("Posterior probability that θ > θ0"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (post_u));
+  tf_results_add (results, "prob_greater",
+                  point ? _("Posterior probability that θ > θ0")
+                        : _("Posterior probability that θ lies above the null interval"),
+                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_incbeta_log_upper (H, 1.0 - H, P, Q)));
 
   /* Bounds. −e p ln p (Sellke, Bayarri & Berger 2001), from ln p. */
-  if (lp_exact >= -1.0)
+  if (t.lp_exact >= -1.0)
     tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND, 1.0);
   else
     {
-      double v = exp (1.0 + lp_exact + log (-lp_exact));
+      double v = exp (1.0 + t.lp_exact + log (-t.lp_exact));
       if (v > 0.0)
         tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND, v);
       else
@@ -314,10 +445,11 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
                                   TF_MEASURE_BOUND,
                                   _("the p-value is so small that the bound underflows to 0"));
     }
-  /* L(θ0) / L(k/n) = exp(−G/2) (Edwards, Lindman & Savage 1963); for a one-sided
-   * alternative the best θ on the side is θ0 itself when k/n lies on the null side. */
-  double lr_bound = exp (-dev);
-  if ((dir == TF_DIRECTION_GREATER && d <= 0.0) || (dir == TF_DIRECTION_LESS && d >= 0.0))
+  /* L(θ0) / L(k/n) = exp(−G/2) (Edwards, Lindman & Savage 1963), at the null's end
+   * nearer the data; 1 when k/n lies in the null or on its side of a one-sided test. */
+  double lr_bound = exp (-t.dev);
+  if ((dir == TF_DIRECTION_GREATER && t.d <= 0.0) || (dir == TF_DIRECTION_LESS && t.d >= 0.0)
+      || (!point && k >= n * L && k <= n * H))
     lr_bound = 1.0;
   if (lr_bound > 0.0)
     tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, lr_bound);
@@ -327,13 +459,15 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
                               _("the likelihood ratio is so small that it underflows to 0"));
 
   /* Savage–Dickey density ratio (Dickey 1971), a check of bf01. */
-  if (dir == TF_DIRECTION_TWO_SIDED)
+  if (dir == TF_DIRECTION_TWO_SIDED && point)
     tf_results_add (results, "savage_dickey_bf01", _("Savage–Dickey BF01"), TF_MEASURE_BAYES_FACTOR,
-                    exp (tf_log_dbeta (t, u, P, Q) - tf_log_dbeta (t, u, a, b)));
+                    exp (tf_log_dbeta (L, 1.0 - L, P, Q) - tf_log_dbeta (L, 1.0 - L, a, b)));
   else
     tf_results_add_undefined (results, "savage_dickey_bf01", _("Savage–Dickey BF01"),
                               TF_MEASURE_BAYES_FACTOR,
-                              _("the density ratio is reported for the two-sided alternative only"));
+                              _("the density ratio is reported for a point null against the two-sided alternative only"));
+
+  tf_one_proportion_compute_models (analysis, results);
 }
 
 static double
@@ -347,15 +481,18 @@ void
 tf_one_proportion_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
 {
   const double k = analysis->successes, n = analysis->trials;
-  const double t = analysis->null_value;
   const double a = analysis->prior_a, b = analysis->prior_b;
   const double P = k + a, Q = n - k + b, S = P + Q;
   const guint np = curves->n;
+  double nl, nh;
+
+  tf_one_proportion_null_ends (analysis, &nl, &nh);
+  const double t = 0.5 * (nl + nh);
 
   /* The posterior's central 1 − 1e-6 and the null value, with a margin. */
   double qlo = tf_incbeta_inverse (0.5e-6, P, Q, TRUE);
   double qhi = tf_incbeta_inverse (0.5e-6, P, Q, FALSE);
-  double lo = MIN (qlo, t), hi = MAX (qhi, t);
+  double lo = MIN (qlo, nl), hi = MAX (qhi, nh);
   double post_sd = sqrt (P * Q / (S * S * (S + 1.0)));
   double margin = 0.05 * (hi - lo);
   lo = MAX (0.0, lo - margin);
@@ -399,7 +536,8 @@ tf_one_proportion_densities (const TfAnalysis *analysis, TfDensityCurves *curves
       curves->likelihood[i] = finite_exp (tf_log_dbeta (x, 1.0 - x, k + 1.0, n - k + 1.0));
     }
   curves->null_value = t;
-  curves->null_low = curves->null_high = t;
+  curves->null_low = nl;
+  curves->null_high = nh;
   curves->prior_at_null = finite_exp (tf_log_dbeta (t, 1.0 - t, a, b));
   curves->posterior_at_null = finite_exp (tf_log_dbeta (t, 1.0 - t, P, Q));
   curves->parameter_markup = g_strdup ("θ");

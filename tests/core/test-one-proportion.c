@@ -13,6 +13,9 @@
 #include "tf-results.h"
 #include "tf-curves.h"
 #include "tf-one-proportion.h"
+#include "tf-one-proportion-private.h"
+#include "tf-analysis-file.h"
+#include "tf-diagnostic.h"
 
 static void
 assert_rel (double got, double want, double tol)
@@ -205,9 +208,27 @@ test_validate (void)
   g_autoptr (TfAnalysis) iv = make (1, 2, 0.5, 1, 1, TF_DIRECTION_TWO_SIDED);
   iv->null_kind = TF_NULL_INTERVAL;
   iv->prior = TF_PRIOR_NORMAL;
+  iv->null_low = 0.0;
+  iv->null_high = 1.0;
   tf_one_proportion_validate (iv, p);
-  g_assert_nonnull (tf_problem_list_find (p, "Null", "Kind"));
+  g_assert_null (tf_problem_list_find (p, "Null", "Kind"));
+  g_assert_nonnull (tf_problem_list_find (p, "Null", "Low"));
+  g_assert_nonnull (tf_problem_list_find (p, "Null", "High"));
   g_assert_nonnull (tf_problem_list_find (p, "Alternative", "Prior"));
+
+  /* Low must be below High */
+  g_ptr_array_set_size (p, 0);
+  iv->prior = TF_PRIOR_BETA;
+  iv->null_low = 0.6;
+  iv->null_high = 0.4;
+  tf_one_proportion_validate (iv, p);
+  g_assert_cmpuint (p->len, ==, 1);
+  g_assert_nonnull (strstr (((TfProblem *) p->pdata[0])->message, "above its lower end"));
+  g_ptr_array_set_size (p, 0);
+  iv->null_low = 0.4;
+  iv->null_high = 0.6;
+  tf_one_proportion_validate (iv, p);
+  g_assert_cmpuint (p->len, ==, 0);
 }
 
 static void
@@ -233,6 +254,255 @@ test_densities (void)
     g_assert_true (isfinite (cb->posterior[i]) && cb->posterior[i] >= 0.0);
 }
 
+/* The tests in every direction at k = 7, n = 20, θ0 = 0.5 (references: scipy 1.10.1,
+ * the calls beside each; tolerance 1e-9 relative, closed forms and exact sums). */
+static void
+test_p_values (void)
+{
+  g_autoptr (TfAnalysis) an = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) r = compute (an);
+  assert_rel (get (r, "p_value_central"), 0.26317596435546875, 1e-12); /* 2*binom.cdf(7,20,.5) */
+  assert_rel (get (r, "p_value_exact"), 0.26317596435546875, 1e-12);   /* binomtest(7,20).pvalue */
+  assert_rel (get (r, "p_value_score_cc"), 0.2635524772829727, 1e-9);  /* 2*norm.sf(2.5/sqrt(5)) */
+  assert_rel (get (r, "p_value_lr"), 0.1763613958394882, 1e-9);        /* chi2.sf(G, 1) */
+  an->direction = TF_DIRECTION_GREATER;
+  g_autoptr (TfResults) g = compute (an);
+  assert_rel (get (g, "p_value_exact"), 0.9423408508300781, 1e-12);    /* binom.sf(6,20,.5) */
+  assert_rel (get (g, "p_value_central"), 0.9423408508300781, 1e-12);
+  assert_rel (get (g, "p_value_midp"), 0.9053764343261719, 1e-12);     /* sf(7) + pmf(7)/2 */
+  assert_rel (get (g, "p_value_score"), 0.9101437525605001, 1e-9);     /* norm.sf(-3/sqrt(5)) */
+  assert_rel (get (g, "p_value_score_cc"), 0.9412375659516804, 1e-9);  /* norm.sf(-3.5/sqrt(5)) */
+  an->direction = TF_DIRECTION_LESS;
+  g_autoptr (TfResults) l = compute (an);
+  assert_rel (get (l, "p_value_exact"), 0.13158798217773438, 1e-12);   /* binom.cdf(7,20,.5) */
+  assert_rel (get (l, "p_value_score_cc"), 0.13177623864148635, 1e-9); /* norm.cdf(-2.5/sqrt(5)) */
+  assert_rel (get (l, "p_value_lr"), 0.08818069791974609, 1e-9);       /* norm.cdf(-sqrt(G)) */
+  g_assert_false (tf_results_get (l, "hdi_low", NULL));
+}
+
+/* Intervals at 95%: k = 7, n = 20 against scipy 1.10.1
+ * binomtest(7, 20).proportion_ci(method=...) and beta.ppf; k = 3, n = 10^12 against
+ * the closed forms at mp.dps = 40 (mpmath 1.2.1); tolerance 1e-9 (1e-7 for quantiles). */
+static void
+test_intervals (void)
+{
+  g_autoptr (TfAnalysis) an = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) r = compute (an);
+  assert_rel (get (r, "wilson_low"), 0.1811918241010821, 1e-9);        /* method='wilson' */
+  assert_rel (get (r, "wilson_high"), 0.5671457233147637, 1e-9);
+  assert_rel (get (r, "wilson_cc_low"), 0.1630866797163093, 1e-9);     /* method='wilsoncc' */
+  assert_rel (get (r, "wilson_cc_high"), 0.5905104338485733, 1e-9);
+  assert_rel (get (r, "jeffreys_low"), 0.17227621363191212, 1e-7);     /* beta.ppf(.025, 7.5, 13.5) */
+  assert_rel (get (r, "jeffreys_high"), 0.5677660938414961, 1e-7);
+  assert_rel (get (r, "agresti_coull_low"), 0.17992636143822802, 1e-9); /* closed form, numpy */
+  assert_rel (get (r, "agresti_coull_high"), 0.5684111859776177, 1e-9);
+  /* HDI of Beta(9, 16): brentq on u of logpdf(ppf(u)) = logpdf(ppf(u + .95)), scipy */
+  assert_rel (get (r, "hdi_low"), 0.18103990144251977, 1e-9);
+  assert_rel (get (r, "hdi_high"), 0.5450261102591977, 1e-9);
+  assert_rel (get (r, "posterior_mode"), 8.0 / 23.0, 1e-15);           /* (P − 1)/(S − 2) */
+
+  g_autoptr (TfAnalysis) big = make (3, 1e12, 0.5, 1, 1, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) b = compute (big);
+  assert_rel (get (b, "wilson_low"), 1.0202707283648331e-12, 1e-9);
+  assert_rel (get (b, "wilson_high"), 8.8211880922914858e-12, 1e-9);
+  assert_rel (get (b, "wilson_cc_low"), 7.747935195907288e-13, 1e-9);
+  assert_rel (get (b, "wilson_cc_high"), 9.5600901508298868e-12, 1e-9);
+  assert_rel (get (b, "agresti_coull_low"), 5.7299673715372931e-13, 1e-9);
+  assert_rel (get (b, "agresti_coull_high"), 9.2684620835025896e-12, 1e-9);
+  assert_rel (get (b, "jeffreys_low"), 8.449345903393768e-13, 1e-7);   /* beta.ppf(.025, 3.5, 1e12 - 2.5) */
+  assert_rel (get (b, "jeffreys_high"), 8.00638213729262e-12, 1e-7);
+  big->successes = 1e12 - 3e5;
+  g_autoptr (TfResults) c = compute (big);
+  assert_rel (get (c, "agresti_coull_low"), 0.99999969892455951, 1e-12);
+  assert_rel (get (c, "agresti_coull_high"), 0.99999970107159903, 1e-12);
+  /* the boundary rules at k = 0 and k = n */
+  big->successes = 0;
+  g_autoptr (TfResults) z = compute (big);
+  g_assert_cmpfloat (get (z, "jeffreys_low"), ==, 0.0);
+  g_assert_cmpfloat (get (z, "wilson_cc_low"), ==, 0.0);
+  g_assert_cmpfloat (get (z, "hdi_low"), ==, 0.0);                      /* density falls from 0 */
+  big->successes = 1e12;
+  g_autoptr (TfResults) f = compute (big);
+  g_assert_cmpfloat (get (f, "jeffreys_high"), ==, 1.0);
+  g_assert_cmpfloat (get (f, "wilson_high"), ==, 1.0);
+}
+
+/* Interval null [0.4, 0.6], k = 7, n = 20, Beta(2, 3): BF01 from mpmath 1.2.1
+ * betainc at mp.dps = 40; p-values from scipy 1.10.1 binom; tolerance 1e-9. */
+static void
+test_interval_null (void)
+{
+  g_autoptr (TfAnalysis) an = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  an->null_kind = TF_NULL_INTERVAL;
+  an->null_low = 0.4;
+  an->null_high = 0.6;
+  g_autoptr (TfResults) r = compute (an);
+  assert_rel (get (r, "bf01"), 1.1213598844919479, 1e-9);
+  /* min(1, 2 min(binom.sf(6, 20, .6), binom.cdf(7, 20, .4))) */
+  assert_rel (get (r, "p_value"), 0.8317858751150711, 1e-9);
+  /* max(binom.sf(6, 20, .4), binom.cdf(7, 20, .6)) */
+  assert_rel (get (r, "p_value_equivalence"), 0.7499893280621777, 1e-9);
+  g_assert_false (tf_results_get (r, "savage_dickey_bf01", NULL));
+  an->direction = TF_DIRECTION_GREATER;
+  g_autoptr (TfResults) g = compute (an);
+  assert_rel (get (g, "bf01"), 25.830331485055838, 1e-9);
+  assert_rel (get (g, "p_value"), 0.993534124647965, 1e-9);           /* binom.sf(6, 20, .6) */
+}
+
+/* Set = null;less;greater, Priors = 0.5;0.25;0.25, k = 7, n = 20, θ0 = 0.5, Beta(2, 3):
+ * the marginal likelihoods by mpmath 1.2.1 quad at mp.dps = 40; tolerance 1e-9. */
+static void
+test_models (void)
+{
+  static const char file[] =
+    "[Analysis]\nFormat=1\nDesign=one-proportion\n[Data]\nSuccesses=7\nTrials=20\n"
+    "[Null]\nValue=0.5\n[Alternative]\nPriorA=2\nPriorB=3\n"
+    "[Models]\nSet=null;less;greater\nPriors=0.5;0.25;0.25\n";
+  g_autoptr (GPtrArray) p = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) an = tf_analysis_load_from_data (file, sizeof file - 1, p);
+  g_assert_nonnull (an);
+  g_assert_cmpuint (an->n_models, ==, 3);
+  g_autoptr (TfResults) r = compute (an);
+  assert_rel (get (r, "posterior_model_null"), 0.54100923060799644, 1e-9);
+  assert_rel (get (r, "posterior_model_less"), 0.38883558272783283, 1e-9);
+  assert_rel (get (r, "posterior_model_greater"), 0.070155186664170724, 1e-9);
+  assert_rel (get (r, "bf_null_less"), 0.69567865524626925, 1e-9);
+  assert_rel (get (r, "bf_null_greater"), 3.8558035145553803, 1e-9);
+  assert_rel (get (r, "bf_less_greater"), 5.5425065660386423, 1e-9);
+  g_autoptr (TfModelProbabilities) m = tf_model_probabilities_new (an, NULL, NULL);
+  g_assert_cmpuint (m->n, ==, 3);
+  assert_rel (m->posterior[0], 0.54100923060799644, 1e-9);
+  g_assert_cmpstr (m->names_markup[1], ==, "θ &lt; 0.5");
+
+  /* round trip */
+  g_autofree char *text = tf_analysis_to_data (an, NULL);
+  g_assert_nonnull (strstr (text, "Set=null;less;greater"));
+  g_assert_nonnull (strstr (text, "Priors=0.5;0.25;0.25"));
+
+  /* bad keys: each a problem naming its key, nothing renormalised */
+  static const char *const bad[][3] = {
+    { "Set=null;less;greater\nPriors=0.5;0.3;0.3\n", "Priors", "sum to 1 (they sum to 1.1)" },
+    { "Set=null;lower\n", "Set", "“lower” is not a model" },
+    { "Set=null;less\nPriors=0.5\n", "Priors", "1 values for the 2" },
+    { "Set=null;null\n", "Set", "listed twice" },
+    { "Set=null;less\nPriors=1;0\n", "Priors", "strictly between 0 and 1" },
+    { "Priors=0.5;0.5\n", "Priors", "name the models in Set" },
+  };
+  for (guint i = 0; i < G_N_ELEMENTS (bad); i++)
+    {
+      g_autofree char *data = g_strconcat ("[Analysis]\nFormat=1\nDesign=one-proportion\n[Data]\n"
+                                           "Successes=7\nTrials=20\n[Null]\nValue=0.5\n[Models]\n",
+                                           bad[i][0], NULL);
+      g_autoptr (GPtrArray) q = tf_problem_list_new ();
+      g_autoptr (TfAnalysis) b = tf_analysis_load_from_data (data, strlen (data), q);
+      g_assert_null (b);
+      const TfProblem *pr = tf_problem_list_find (q, "Models", bad[i][1]);
+      g_assert_nonnull (pr);
+      if (strstr (pr->message, bad[i][2]) == NULL)
+        g_error ("case %u: %s", i, pr->message);
+    }
+
+  /* without Set, the two models of the null and the alternative */
+  g_autoptr (TfAnalysis) two = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) t = compute (two);
+  g_assert_null (tf_results_lookup (t, "posterior_model_null"));
+  g_autoptr (TfModelProbabilities) m2 = tf_model_probabilities_new (two, NULL, NULL);
+  g_assert_cmpuint (m2->n, ==, 2);
+  assert_rel (m2->posterior[0], get (t, "posterior_null"), 1e-12);
+}
+
+/* The hook itself (tf-design.c does not register it yet: see tf-design.c). */
+static TfNullDistribution *
+null_distribution (const TfAnalysis *an)
+{
+  TfNullDistribution *d = g_new0 (TfNullDistribution, 1);
+  char *why = NULL;
+  g_assert_true (tf_one_proportion_null_distribution (an, d, &why));
+  g_assert_null (why);
+  return d;
+}
+
+static void
+test_curves (void)
+{
+  g_autoptr (TfAnalysis) an = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) r = compute (an);
+
+  /* sensitivity: x = a + b with a/(a + b) = 0.4 held, against the exact function */
+  g_autoptr (TfEvidenceCurve) s = tf_sensitivity_curve_new (an, 256, NULL, NULL);
+  g_assert_nonnull (s);
+  g_assert_true (s->x_log);
+  assert_rel (s->x[0], 1e-2, 1e-12);
+  assert_rel (s->x[255], 1e4, 1e-12);
+  assert_rel (s->chosen_x, 5.0, 0.0);
+  assert_rel (exp (s->chosen_log_bf01), get (r, "bf01"), 1e-12);
+  for (guint i = 0; i < 256; i += 51)
+    assert_rel (s->log_bf01[i],
+                tf_one_proportion_log_bf01 (7, 20, 0.5, 0.4 * s->x[i], 0.6 * s->x[i]), 1e-12);
+  /* a + b = 100: mpmath 1.2.1 at dps 40, ln[θ0^7 (1−θ0)^13 B(40, 60) / B(47, 73)] */
+  assert_rel (tf_one_proportion_log_bf01 (7, 20, 0.5, 40, 60), -0.73762821763585317, 1e-9);
+
+  /* sample size: the p-value held, BF01 grows like √n (ln BF01 by ½ ln 100 per two
+   * decades, within 1e-3 at n = 10^10..10^12) */
+  g_autoptr (TfEvidenceCurve) n = tf_sample_size_curve_new (an, 241, NULL, NULL);
+  g_assert_nonnull (n);
+  assert_rel (n->p_value, get (r, "p_value"), 1e-12);
+  assert_rel (n->x[240], 1e12, 1e-12);
+  assert_rel (n->x[200], 1e10, 1e-12);
+  g_assert_cmpfloat (fabs (n->log_bf01[240] - n->log_bf01[200] - log (10.0)), <, 1e-3);
+  g_assert_cmpfloat (n->chosen_x, ==, 20.0);
+
+  /* null distribution: the masses sum to 1 and the tail to the p-value (n = 20) */
+  g_autoptr (TfNullDistribution) d = null_distribution (an);
+  double sum = 0.0, tail = 0.0;
+  for (guint i = 0; i < d->n; i++)
+    {
+      sum += d->mass[i];
+      tail += d->in_tail[i] ? d->mass[i] : 0.0;
+    }
+  assert_rel (sum, 1.0, 1e-12);
+  assert_rel (tail, get (r, "p_value"), 1e-12);
+  g_assert_cmpfloat (d->observed, ==, 7.0);
+  /* n = 10^12: thinned to at most 2000 points */
+  g_autoptr (TfAnalysis) big = make (5e11 + 2e6, 1e12, 0.5, 1, 1, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfNullDistribution) db = null_distribution (big);
+  g_assert_cmpuint (db->n, <=, 2001);
+  g_assert_nonnull (strstr (db->x_markup, "every"));
+  /* interval nulls have no sample-size curve, with a reason */
+  an->null_kind = TF_NULL_INTERVAL;
+  an->null_low = 0.4;
+  an->null_high = 0.6;
+  g_autofree char *why = NULL;
+  g_assert_null (tf_sample_size_curve_new (an, 16, NULL, &why));
+  g_assert_nonnull (why);
+}
+
+/* Lindley's paradox (Lindley 1957): n = 10^6, k − nθ0 = 2.6 SD: p ≈ 0.009 while
+ * P(null | data) > ½ under Beta(1, 1). */
+static void
+test_diagnostic (void)
+{
+  g_autoptr (TfAnalysis) an = make (501300, 1e6, 0.5, 1, 1, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) r = compute (an);
+  g_assert_cmpfloat (get (r, "p_value"), <, 0.05);
+  g_assert_cmpfloat (get (r, "posterior_null"), >, 0.5);
+  g_autofree char *text = tf_diagnostic_text (an, r);
+  g_assert_nonnull (text);
+  g_assert_nonnull (strstr (text, "The sample is large"));
+  g_assert_nonnull (strstr (text, "The effect is small"));
+  g_assert_nonnull (strstr (text, "The null is precise"));
+  g_assert_nonnull (strstr (text, "The prior is diffuse"));
+  g_assert_nonnull (strstr (text, "near 1"));
+  g_autoptr (TfAnalysis) ok = make (10, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) r2 = compute (ok);
+  g_assert_null (tf_diagnostic_text (ok, r2));
+  /* the reverse: p >= α, yet P(null | data) < ½ (k = 7, n = 20, Beta(2, 3)) */
+  g_autoptr (TfAnalysis) rev = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
+  g_autoptr (TfResults) r3 = compute (rev);
+  g_autofree char *text3 = tf_diagnostic_text (rev, r3);
+  g_assert_nonnull (strstr (text3, "is not below"));
+}
+
 int
 main (int argc, char **argv)
 {
@@ -243,5 +513,11 @@ main (int argc, char **argv)
   g_test_add_func ("/one-proportion/edges", test_edges);
   g_test_add_func ("/one-proportion/validate", test_validate);
   g_test_add_func ("/one-proportion/densities", test_densities);
+  g_test_add_func ("/one-proportion/p-values", test_p_values);
+  g_test_add_func ("/one-proportion/intervals", test_intervals);
+  g_test_add_func ("/one-proportion/interval-null", test_interval_null);
+  g_test_add_func ("/one-proportion/models", test_models);
+  g_test_add_func ("/one-proportion/curves", test_curves);
+  g_test_add_func ("/one-proportion/diagnostic", test_diagnostic);
   return g_test_run ();
 }

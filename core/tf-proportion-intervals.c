@@ -1,0 +1,185 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-proportion-intervals.c: Wilson, Jeffreys and Agresti–Coull intervals for a
+ * proportion to n = 10^12, and the highest-density interval of a beta.
+ */
+#include "tf-proportion-intervals.h"
+#include "tf-incbeta.h"
+#include "tf-logspace.h"
+
+#include <math.h>
+#include <gsl/gsl_cdf.h>
+
+static double
+two_sided_z (double level)
+{
+  return gsl_cdf_ugaussian_Qinv (0.5 * (1.0 - level));
+}
+
+/* The larger root of (n + z²) θ² − (2c + z²) θ + c²/n = 0, the θ with
+ * (c − nθ)² = z² nθ(1 − θ): [(2c + z²) + z √(z² + 4c(n − c)/n)] / (2(n + z²)). */
+static double
+root_plus (double c, double n, double z2)
+{
+  double disc = z2 + 4.0 * c * ((n - c) / n);
+  return (2.0 * c + z2 + sqrt (z2 * MAX (disc, 0.0))) / (2.0 * (n + z2));
+}
+
+/* The smaller root as the product of the roots over the larger, free of the
+ * cancellation of the textbook form when c is small beside n. */
+static double
+root_minus (double c, double n, double z2)
+{
+  return c * c / (n * (n + z2) * root_plus (c, n, z2));
+}
+
+/* Wilson 1927; Newcombe 1998, methods 3 and 4, with the roots taken as above. */
+void
+tf_proportion_wilson (double k, double n, double level, gboolean cc, double *lo, double *hi)
+{
+  double z = two_sided_z (level), z2 = z * z;
+
+  if (!cc)
+    {
+      *lo = k > 0.0 ? root_minus (k, n, z2) : 0.0;
+      *hi = k < n ? root_plus (k, n, z2) : 1.0;
+    }
+  else
+    {
+      *lo = k > 0.0 ? root_minus (k - 0.5, n, z2) : 0.0;
+      *hi = k < n ? root_plus (k + 0.5, n, z2) : 1.0;
+    }
+  *lo = CLAMP (*lo, 0.0, 1.0);
+  *hi = CLAMP (*hi, 0.0, 1.0);
+}
+
+/* Brown, Cai & DasGupta 2001, §4.1.2: equal-tailed Jeffreys prior interval. */
+void
+tf_proportion_jeffreys (double k, double n, double level, double *lo, double *hi)
+{
+  double alpha2 = 0.5 * (1.0 - level);
+
+  *lo = k > 0.0 ? tf_incbeta_inverse (alpha2, k + 0.5, n - k + 0.5, TRUE) : 0.0;
+  *hi = k < n ? tf_incbeta_inverse (alpha2, k + 0.5, n - k + 0.5, FALSE) : 1.0;
+}
+
+/* Agresti & Coull 1998: ñ = n + z², p̃ = (k + z²/2)/ñ, p̃ ± z √(p̃(1 − p̃)/ñ). The lower
+ * limit as (p̃² − z² p̃(1 − p̃)/ñ) / (p̃ + z √·), its numerator p̃ (n(k − z²/2) + 2kz²)/ñ²,
+ * so that no digits cancel; the upper limit likewise from the other side. */
+void
+tf_proportion_agresti_coull (double k, double n, double level, double *lo, double *hi)
+{
+  double z = two_sided_z (level), z2 = z * z;
+  double nt = n + z2;
+  double pt = (k + 0.5 * z2) / nt, qt = (n - k + 0.5 * z2) / nt;
+  double h = z * sqrt (pt * qt / nt);
+  double num_lo = pt * (n * (k - 0.5 * z2) + 2.0 * k * z2) / (nt * nt);
+  double num_hi = qt * (n * ((n - k) - 0.5 * z2) + 2.0 * (n - k) * z2) / (nt * nt);
+
+  *lo = CLAMP (num_lo / (pt + h), 0.0, 1.0);
+  *hi = CLAMP (1.0 - num_hi / (qt + h), 0.0, 1.0);
+  if (pt + h < 0.5)
+    *hi = MIN (pt + h, 1.0);
+}
+
+/* ln f(mode) − ln f(θ) for Beta(P, Q), P, Q > 1: bd0(P − 1, (S − 2)θ) +
+ * bd0(Q − 1, (S − 2)(1 − θ)), no cancellation at huge shapes (Loader 2000). */
+static double
+drop (double P, double Q, double t)
+{
+  double M = P + Q - 2.0;
+  return tf_bd0 (P - 1.0, M * t) + tf_bd0 (Q - 1.0, M * (1.0 - t));
+}
+
+/* Its derivative, (S − 2)(θ − mode) / (θ(1 − θ)). */
+static double
+drop_slope (double P, double Q, double t)
+{
+  return ((P + Q - 2.0) * t - (P - 1.0)) / (t * (1.0 - t));
+}
+
+/* The θ on the far side of the mode from t with the same density: safeguarded Newton
+ * on the convex drop over the bracket (Press et al. 2007, rtsafe). */
+static double
+mirror (double P, double Q, double mode, double t)
+{
+  double target = drop (P, Q, t);
+  double a = t < mode ? mode : 0.0, b = t < mode ? 1.0 : mode;
+  double x = CLAMP (2.0 * mode - t, a + 0.5 * (b - a) * 1e-3, b - 0.5 * (b - a) * 1e-3);
+
+  for (int i = 0; i < 200; i++)
+    {
+      double f = drop (P, Q, x) - target;
+      double g = drop_slope (P, Q, x);
+      /* the drop rises with x above the mode and falls below it */
+      if ((f > 0.0) == (t < mode))
+        b = x;
+      else
+        a = x;
+      double nx = x - f / g;
+      if (!(nx > MIN (a, b) && nx < MAX (a, b)) || !isfinite (nx))
+        nx = 0.5 * (a + b);
+      if (fabs (nx - x) <= 1e-15 * MIN (nx, 1.0 - nx) || nx == x)
+        return nx;
+      x = nx;
+    }
+  return x;
+}
+
+/* Highest-density interval: the lower end lo solves F(lo) + S(mirror(lo)) = 1 − level,
+ * safeguarded Newton with slope f(lo) (1 − D'(lo)/D'(hi)) (Chen & Shao 1999 state the
+ * equal-density condition); the tails come from the log-space incomplete beta. */
+gboolean
+tf_beta_hdi (double P, double Q, double level, double *lo, double *hi)
+{
+  double alpha = 1.0 - level;
+
+  if (P <= 1.0 && Q <= 1.0)
+    return FALSE;
+  if (P <= 1.0)
+    {
+      *lo = 0.0;
+      *hi = tf_incbeta_inverse (alpha, P, Q, FALSE);
+      return TRUE;
+    }
+  if (Q <= 1.0)
+    {
+      *lo = tf_incbeta_inverse (alpha, P, Q, TRUE);
+      *hi = 1.0;
+      return TRUE;
+    }
+  double mode = (P - 1.0) / (P + Q - 2.0);
+  double a = 0.0, b = mode;
+  double x = tf_incbeta_inverse (0.5 * alpha, P, Q, TRUE);
+  double y = mirror (P, Q, mode, x);
+  double la = log (alpha);
+
+  if (!(x > 0.0 && x < mode))
+    x = 0.5 * mode;
+  for (int i = 0; i < 100; i++)
+    {
+      double fl, fu, gl, gu;
+      y = mirror (P, Q, mode, x);
+      tf_incbeta_log_both (x, 1.0 - x, P, Q, &fl, &fu);
+      tf_incbeta_log_both (y, 1.0 - y, P, Q, &gl, &gu);
+      double lout = tf_log_add (fl, gu);
+      /* g(x) = out − α, increasing in x; Newton on ln out for a steadier step */
+      if (lout > la)
+        b = x;
+      else
+        a = x;
+      double dens = exp (tf_log_dbeta (x, 1.0 - x, P, Q) - lout);
+      double slope = dens * (1.0 - drop_slope (P, Q, x) / drop_slope (P, Q, y));
+      double nx = x - (lout - la) / slope;
+      if (!(nx > a && nx < b) || !isfinite (nx))
+        nx = 0.5 * (a + b);
+      if (fabs (nx - x) <= 1e-14 * MIN (x, mode - x) || nx == x)
+        {
+          x = nx;
+          break;
+        }
+      x = nx;
+    }
+  *lo = x;
+  *hi = mirror (P, Q, mode, x);
+  return TRUE;
+}
