@@ -125,9 +125,61 @@ mirror (double P, double Q, double mode, double t)
   return x;
 }
 
-/* Highest-density interval: the lower end lo solves F(lo) + S(mirror(lo)) = 1 − level,
- * safeguarded Newton with slope f(lo) (1 − D'(lo)/D'(hi)) (Chen & Shao 1999 state the
- * equal-density condition); the tails come from the log-space incomplete beta. */
+/* Highest-density interval of Beta(P, Q), P, Q > 1, with P − 1 <= Q − 1, so that the
+ * end that may lie extremely close to its boundary is the lower one: lo solves
+ * F(lo) + S(mirror(lo)) = 1 − level, safeguarded Newton in ln lo (so that an end at
+ * 1e-40, P near 1, is found as easily as one at 0.3) with slope
+ * lo f(lo) (1 − D'(lo)/D'(hi)); the tails from the log-space incomplete beta. The
+ * equal-density condition is Box & Tiao's (1973, §2.8). */
+static void
+hdi_inside (double P, double Q, double level, double *lo, double *hi)
+{
+  double mode = (P - 1.0) / (P + Q - 2.0);
+  double la = log (1.0 - level);
+  double a = log (1e-300), b = log (mode);
+  double x = tf_incbeta_inverse (0.5 * (1.0 - level), P, Q, TRUE);
+  double v = x > 0.0 && x < mode ? log (x) : 0.5 * (a + b);
+
+  /* P so near 1 that the lower end is below 1e-300: take it as 0, the density as
+   * falling from there */
+  {
+    double fl, fu, gl, gu, y = mirror (P, Q, mode, 1e-300);
+    tf_incbeta_log_both (1e-300, 1.0, P, Q, &fl, &fu);
+    tf_incbeta_log_both (y, 1.0 - y, P, Q, &gl, &gu);
+    if (tf_log_add (fl, gu) >= la)
+      {
+        *lo = 0.0;
+        *hi = tf_incbeta_inverse (1.0 - level, P, Q, FALSE);
+        return;
+      }
+  }
+  for (int i = 0; i < 200; i++)
+    {
+      double fl, fu, gl, gu;
+      x = exp (v);
+      double y = mirror (P, Q, mode, x);
+      tf_incbeta_log_both (x, 1.0 - x, P, Q, &fl, &fu);
+      tf_incbeta_log_both (y, 1.0 - y, P, Q, &gl, &gu);
+      double lout = tf_log_add (fl, gu);
+      /* ln out − ln α rises with lo */
+      if (lout > la)
+        b = v;
+      else
+        a = v;
+      double dens = exp (tf_log_dbeta (x, 1.0 - x, P, Q) - lout);
+      double slope = x * dens * (1.0 - drop_slope (P, Q, x) / drop_slope (P, Q, y));
+      double nv = v - (lout - la) / slope;
+      if (!(nv > a && nv < b) || !isfinite (nv))
+        nv = 0.5 * (a + b);
+      double step = fabs (nv - v);
+      v = nv;
+      if (step <= 1e-14 || b - a <= 1e-14)
+        break;
+    }
+  *lo = exp (v);
+  *hi = mirror (P, Q, mode, *lo);
+}
+
 gboolean
 tf_beta_hdi (double P, double Q, double level, double *lo, double *hi)
 {
@@ -147,39 +199,14 @@ tf_beta_hdi (double P, double Q, double level, double *lo, double *hi)
       *hi = 1.0;
       return TRUE;
     }
-  double mode = (P - 1.0) / (P + Q - 2.0);
-  double a = 0.0, b = mode;
-  double x = tf_incbeta_inverse (0.5 * alpha, P, Q, TRUE);
-  double y = mirror (P, Q, mode, x);
-  double la = log (alpha);
-
-  if (!(x > 0.0 && x < mode))
-    x = 0.5 * mode;
-  for (int i = 0; i < 100; i++)
+  if (P <= Q)
+    hdi_inside (P, Q, level, lo, hi);
+  else
     {
-      double fl, fu, gl, gu;
-      y = mirror (P, Q, mode, x);
-      tf_incbeta_log_both (x, 1.0 - x, P, Q, &fl, &fu);
-      tf_incbeta_log_both (y, 1.0 - y, P, Q, &gl, &gu);
-      double lout = tf_log_add (fl, gu);
-      /* g(x) = out − α, increasing in x; Newton on ln out for a steadier step */
-      if (lout > la)
-        b = x;
-      else
-        a = x;
-      double dens = exp (tf_log_dbeta (x, 1.0 - x, P, Q) - lout);
-      double slope = dens * (1.0 - drop_slope (P, Q, x) / drop_slope (P, Q, y));
-      double nx = x - (lout - la) / slope;
-      if (!(nx > a && nx < b) || !isfinite (nx))
-        nx = 0.5 * (a + b);
-      if (fabs (nx - x) <= 1e-14 * MIN (x, mode - x) || nx == x)
-        {
-          x = nx;
-          break;
-        }
-      x = nx;
+      double l, h;
+      hdi_inside (Q, P, level, &l, &h);
+      *lo = 1.0 - h;
+      *hi = 1.0 - l;
     }
-  *lo = x;
-  *hi = mirror (P, Q, mode, x);
   return TRUE;
 }

@@ -16,6 +16,7 @@
 #include "tf-one-proportion-private.h"
 #include "tf-analysis-file.h"
 #include "tf-diagnostic.h"
+#include "tf-proportion-intervals.h"
 
 static void
 assert_rel (double got, double want, double tol)
@@ -300,6 +301,15 @@ test_intervals (void)
   assert_rel (get (r, "hdi_low"), 0.18103990144251977, 1e-9);
   assert_rel (get (r, "hdi_high"), 0.5450261102591977, 1e-9);
   assert_rel (get (r, "posterior_mode"), 8.0 / 23.0, 1e-15);           /* (P − 1)/(S − 2) */
+  /* P just above 1: the lower end below 1e-300 is 0, the upper one the upper 5% point,
+   * scipy 1.10.1 beta.isf(0.05, 1.000001, 2); and the mirror image */
+  double hl, hh;
+  g_assert_true (tf_beta_hdi (1.000001, 2, 0.95, &hl, &hh));
+  g_assert_cmpfloat (hl, ==, 0.0);
+  assert_rel (hh, 0.7763933516965706, 1e-9);
+  g_assert_true (tf_beta_hdi (2, 1.000001, 0.95, &hl, &hh));
+  assert_rel (hl, 1.0 - 0.7763933516965706, 1e-9);
+  g_assert_false (tf_beta_hdi (0.5, 0.5, 0.95, &hl, &hh));               /* U-shaped */
 
   g_autoptr (TfAnalysis) big = make (3, 1e12, 0.5, 1, 1, TF_DIRECTION_TWO_SIDED);
   g_autoptr (TfResults) b = compute (big);

@@ -274,6 +274,190 @@ for _ in range(N_ITER // 4):
     level = float(rng.choice([0.8, 0.9, 0.95, 0.99, 0.999]))
     add('cp', 'cp %r %r %r' % (k, n, level), ('cp', k, n, level))
 
+# --- the one-proportion numbers of the design (issue 3) -----------------------------
+
+def mp_z(k, n, t):
+    k, n, t = mpf(k), mpf(n), mpf(t)
+    return (k - n * t) / mp.sqrt(n * t * (1 - t))
+
+
+def mp_log_q(z):
+    """ln P(Z >= z) at 40 digits."""
+    return mp.log(mp.erfc(mp.mpf(z) / mp.sqrt(2)) / 2)
+
+
+def ref_tests(k, n, t, d):
+    """ln p of exact, central, mid-p (scipy 1.10.1 binom and binomtest, n <= 1e6 and p
+    above 1e-280, else None), score, score cc and LR (closed forms in mpmath)."""
+    K, N, T = mpf(k), mpf(n), mpf(t)
+    sd = mp.sqrt(N * T * (1 - T))
+    dd = K - N * T
+    z = dd / sd
+    dev = (K * mp.log(K / (N * T)) if k > 0 else 0) + \
+          ((N - K) * mp.log((N - K) / (N * (1 - T))) if n - k > 0 else 0)
+    r = mp.sign(dd) * mp.sqrt(2 * dev)
+    if d == 0:
+        zc = max(mp.mpf(0), abs(dd) - mp.mpf(0.5)) / sd
+        ls = min(0, mp.log(2) + mp_log_q(abs(z)))
+        lc = min(0, mp.log(2) + mp_log_q(zc))
+        ll = mp.log(mp.erfc(mp.sqrt(dev))) if dev > 0 else mp.mpf(0)
+    elif d == 1:
+        ls, lc, ll = mp_log_q(z), mp_log_q((dd - 0.5) / sd), mp_log_q(r)
+    else:
+        ls, lc, ll = mp_log_q(-z), mp_log_q(-(dd + 0.5) / sd), mp_log_q(-r)
+    ex = ce = mi = None
+    if n <= 1e6:
+        ki, ni = int(k), int(n)
+        lcdf = st.binom.logcdf(ki, ni, t); lsf = st.binom.logsf(ki - 1, ni, t)
+        lpmf = st.binom.logpmf(ki, ni, t)
+        if d == 0:
+            pv = st.binomtest(ki, ni, t).pvalue
+            if pv > 1e-280:
+                ex = math.log(pv)
+                mi = math.log(pv - 0.5 * math.exp(lpmf)) if pv > math.exp(lpmf) * 0.5 else None
+            if min(lcdf, lsf) > -640:
+                ce = min(0.0, math.log(2) + min(lcdf, lsf))
+        elif d == 1:
+            if lsf > -640:
+                ex = ce = lsf
+                mi = math.log(st.binom.sf(ki, ni, t) + 0.5 * math.exp(lpmf))
+        else:
+            if lcdf > -640:
+                ex = ce = lcdf
+                mi = math.log(st.binom.cdf(ki - 1, ni, t) + 0.5 * math.exp(lpmf))
+    return (ex, ce, mi, ls, lc, ll)
+
+
+def mp_wilson(k, n, level):
+    """Newcombe (1998) methods 3 and 4 at 40 digits: the roots of
+    (n + z²) θ² − (2c + z²) θ + c²/n = 0, c = k, k ∓ ½."""
+    K, N = mpf(k), mpf(n)
+    z = mp.sqrt(2) * mp.erfinv(mpf(level)); z2 = z * z
+    def roots(c):
+        s = z * mp.sqrt(z2 + 4 * c * (1 - c / N))
+        return ((2 * c + z2) - s) / (2 * (N + z2)), ((2 * c + z2) + s) / (2 * (N + z2))
+    lo = roots(K)[0] if k > 0 else 0
+    hi = roots(K)[1] if k < n else 1
+    lc = roots(K - mp.mpf(0.5))[0] if k > 0 else 0
+    hc = roots(K + mp.mpf(0.5))[1] if k < n else 1
+    return tuple(min(mp.mpf(1), max(mp.mpf(0), v)) for v in (lo, hi, lc, hc))
+
+
+def mp_ac(k, n, level):
+    K, N = mpf(k), mpf(n)
+    z = mp.sqrt(2) * mp.erfinv(mpf(level)); z2 = z * z
+    nt = N + z2; pt = (K + z2 / 2) / nt
+    h = z * mp.sqrt(pt * (1 - pt) / nt)
+    return max(mp.mpf(0), pt - h), min(mp.mpf(1), pt + h)
+
+
+def ref_hdi(P, Q, level):
+    """scipy 1.10.1: brentq on the split v of the tails, lower α σ(v) and upper
+    α σ(−v) (each kept to full relative precision), of
+    beta.logpdf(ppf(lower)) = beta.logpdf(isf(upper))."""
+    import scipy.optimize as so
+    al = 1 - level
+    ends = lambda v: (st.beta.ppf(al * sp.expit(v), P, Q), st.beta.isf(al * sp.expit(-v), P, Q))
+    def f(v):
+        lo, hi = ends(v)
+        return st.beta.logpdf(lo, P, Q) - st.beta.logpdf(hi, P, Q)
+    v = so.brentq(f, -300, 300, xtol=1e-13, rtol=1e-15, maxiter=400)
+    return ends(v)
+
+
+def ref_ibf(k, n, lo, hi, a, b, d):
+    """ln BF01 of [lo, hi] from mpmath's incomplete beta at 40 digits (ref_log_ibeta
+    at both ends, shapes up to 1e4), or None."""
+    def masses(P, Q):
+        r_lo = ref_log_ibeta(P, Q, lo); r_hi = ref_log_ibeta(P, Q, hi)
+        if r_lo is None or r_hi is None:
+            return None
+        with mp.workdps(60):
+            below, above = mp.exp(r_lo[0]), mp.exp(r_hi[1])
+            if r_hi[0] < -1:
+                inside = mp.exp(r_hi[0]) - below
+            elif r_lo[1] < -1:
+                inside = mp.exp(r_lo[1]) - above
+            else:
+                inside = 1 - below - above
+        return below, inside, above
+    try:
+        m1 = masses(k + a, n - k + b); m2 = masses(a, b)
+    except Exception:
+        return None
+    if m1 is None or m2 is None:
+        return None
+    (pb, pi, pa), (qb, qi, qa) = m1, m2
+    po, qo = (pb + pa, qb + qa) if d == 0 else (pa, qa) if d == 1 else (pb, qb)
+    if min(pb, pi, pa, qb, qi, qa) <= 0:
+        return None
+    return (mp.log(pi) - mp.log(qi) - mp.log(po) + mp.log(qo),)
+
+
+LEVELS = [0.8, 0.9, 0.95, 0.99, 0.999]
+for _ in range(N_CLOSED):
+    n = draw_n() if rng.uniform() < 0.7 else float(max(1, round(log_uniform(1, 1e6))))
+    t = draw_theta(); k = draw_k(n, t); d = int(rng.integers(0, 3))
+    add('tests', 'tests %r %r %r %d' % (k, n, t, d), ref_tests(k, n, t, d))
+for _ in range(N_CLOSED):
+    n = draw_n(); k = draw_k(n, draw_theta()); level = float(rng.choice(LEVELS))
+    add('wilson', 'wilson %r %r %r' % (k, n, level), mp_wilson(k, n, level))
+    add('ac', 'ac %r %r %r' % (k, n, level), mp_ac(k, n, level))
+# scipy's own Wilson limits where its textbook form keeps its digits (n <= 1e3, both
+# limits above 1e-2 from the ends)
+n_w = 0
+while n_w < N_ITER:
+    n = float(rng.integers(1, 1001)); k = float(rng.integers(0, int(n) + 1))
+    level = float(rng.choice(LEVELS))
+    r = st.binomtest(int(k), int(n)).proportion_ci(confidence_level=level, method='wilson')
+    rc = st.binomtest(int(k), int(n)).proportion_ci(confidence_level=level, method='wilsoncc')
+    if min(r.low, 1 - r.high, rc.low, 1 - rc.high) < 1e-2 and 0 < k < n:
+        continue
+    add('wilson_scipy', 'wilson %r %r %r' % (k, n, level), (r.low, r.high, rc.low, rc.high))
+    n_w += 1
+# Jeffreys: the tail at our limits by mpmath (as for Clopper–Pearson), and scipy's
+# beta.ppf for n <= 1e4
+n_quad = 0
+for _ in range(N_ITER):
+    n = draw_n(); k = draw_k(n, draw_theta())
+    if min(k, n - k) >= 1e3:
+        if n_quad >= N_QUAD // 2:
+            continue
+        n_quad += 1
+    level = float(rng.choice(LEVELS))
+    add('jeffreys', 'jeffreys %r %r %r' % (k, n, level), ('jeff', k, n, level))
+for _ in range(N_ITER):
+    n = float(rng.integers(1, 10001)); k = float(rng.integers(0, int(n) + 1))
+    level = float(rng.choice(LEVELS)); al = (1 - level) / 2
+    lo = st.beta.ppf(al, k + 0.5, n - k + 0.5) if k > 0 else 0.0
+    hi = st.beta.isf(al, k + 0.5, n - k + 0.5) if k < n else 1.0
+    add('jeffreys_scipy', 'jeffreys %r %r %r' % (k, n, level), (lo, hi))
+n_h = 0
+while n_h < N_ITER:
+    P = 1.0 + log_uniform(1e-2, 1e4); Q = 1.0 + log_uniform(1e-2, 1e4)
+    level = float(rng.choice(LEVELS))
+    try:
+        ref = ref_hdi(P, Q, level)
+    except (ValueError, RuntimeError):
+        continue
+    if not all(0 < x < 1 for x in ref):
+        continue
+    add('hdi', 'hdi %r %r %r' % (P, Q, level), ref)
+    n_h += 1
+n_i = 0
+while n_i < N_ITER:
+    n = float(max(1, round(log_uniform(1, 1e4)))); t = draw_theta(); k = draw_k(n, t)
+    w = log_uniform(1e-4, 0.5)
+    lo = max(1e-6, t - w * rng.uniform()); hi = min(1 - 1e-6, lo + w)
+    if not lo < hi:
+        continue
+    a = log_uniform(1e-1, 1e3); b = log_uniform(1e-1, 1e3); d = int(rng.integers(0, 3))
+    ref = ref_ibf(k, n, lo, hi, a, b, d)
+    if ref is None:
+        continue
+    add('ibf', 'ibf %r %r %r %r %r %r %d' % (k, n, lo, hi, a, b, d), ref)
+    n_i += 1
+
 inp = ''.join(c[1] + '\n' for c in cases)
 proc = subprocess.run([sys.argv[1]], input=inp, capture_output=True, text=True, check=True)
 outs = proc.stdout.splitlines()
@@ -292,8 +476,16 @@ TOL = {
     'btest': ('exact two-sided p, rel. error', 1e-7),
     'ppf': ('beta ppf/isf, rel. error in x', 1e-7),
     'cp': ('Clopper-Pearson limits, rel. in x', 1e-7),
+    'tests': ('ln p, six tests x 3 directions', 1e-9),
+    'wilson': ('Wilson, Wilson-cc (mpmath), rel.', 1e-9),
+    'wilson_scipy': ('Wilson, Wilson-cc (scipy), rel.', 1e-9),
+    'ac': ('Agresti-Coull limits, rel.', 1e-9),
+    'jeffreys': ('Jeffreys limits, rel. in x (mpmath)', 1e-7),
+    'jeffreys_scipy': ('Jeffreys limits (scipy beta.ppf)', 1e-7),
+    'hdi': ('beta HDI limits, rel.', 1e-7),
+    'ibf': ('interval-null ln BF01, abs/rel', 1e-9),
 }
-LOGS = {'lbf01', 'lbeta', 'ldbinom', 'ldbeta', 'ibeta', 'binom'}
+LOGS = {'lbf01', 'lbeta', 'ldbinom', 'ldbeta', 'ibeta', 'binom', 'tests', 'ibf'}
 
 worst = {q: (0.0, None) for q in TOL}
 count = {q: 0 for q in TOL}
@@ -301,11 +493,13 @@ failed = 0
 for (q, line, ref), out in zip(cases, outs):
     ours = [float(v) for v in out.split()]
     tol = TOL[q][1]
-    if ref[0] == 'cp':
-        _, k, n, level = ref
+    if ref[0] in ('cp', 'jeff'):
+        kind, k, n, level = ref
         al = (1 - level) / 2
         errs = []
-        for x, (a, b, side) in zip(ours, ((k, n - k + 1, 0), (k + 1, n - k, 1))):
+        shapes = ((k, n - k + 1, 0), (k + 1, n - k, 1)) if kind == 'cp' else \
+            ((k + 0.5, n - k + 0.5, 0), (k + 0.5, n - k + 0.5, 1))
+        for x, (a, b, side) in zip(ours, shapes):
             if (side == 0 and k == 0) or (side == 1 and k == n):
                 errs.append(0.0 if x == (0.0 if side == 0 else 1.0) else math.inf)
                 continue
@@ -343,6 +537,8 @@ for (q, line, ref), out in zip(cases, outs):
                 print('FAIL %s: x error %.3g' % (line, e))
         continue
     for o, r in zip(ours, ref):
+        if r is None:
+            continue
         r = float(r)
         if math.isinf(r) and r < 0:
             if q in ('binom',) and o < -700:      # scipy underflowed; ours is finite
