@@ -73,6 +73,9 @@ tf_one_proportion_analysis_log_bf01 (const TfAnalysis *an, double k, double n,
   TfModel pair[2] = { TF_MODEL_NULL, TF_MODEL_TWO_SIDED };
   double lm[2];
 
+  /* the common case without the tails it does not need */
+  if (an->null_kind == TF_NULL_POINT && an->direction == TF_DIRECTION_TWO_SIDED)
+    return tf_one_proportion_log_bf01 (k, n, an->null_value, pa, pb);
   if (an->direction == TF_DIRECTION_GREATER)
     pair[1] = TF_MODEL_GREATER;
   else if (an->direction == TF_DIRECTION_LESS)

@@ -137,8 +137,10 @@ hdi_inside (double P, double Q, double level, double *lo, double *hi)
   double mode = (P - 1.0) / (P + Q - 2.0);
   double la = log (1.0 - level);
   double a = log (1e-300), b = log (mode);
-  double x = tf_incbeta_inverse (0.5 * (1.0 - level), P, Q, TRUE);
-  double v = x > 0.0 && x < mode ? log (x) : 0.5 * (a + b);
+  /* start at the normal approximation's lower end, mode − z sd */
+  double S = P + Q;
+  double x = mode - two_sided_z (level) * sqrt (P * Q / (S * S * (S + 1.0)));
+  double v = x > 0.0 && x < mode ? log (x) : log (0.5 * mode);
 
   /* P so near 1 that the lower end is below 1e-300: take it as 0, the density as
    * falling from there */
