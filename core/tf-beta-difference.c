@@ -76,6 +76,20 @@ tf_beta_diff_init (TfBetaDiff *bd, double pa, double qa, double pb, double qb)
   for (guint i = 1; i < j; i++)
     if (!(bd->cut[i] >= bd->cut[i - 1]) || !(bd->cut[i] <= 1.0))
       bd->cut[i] = MIN (1.0, bd->cut[i - 1]);
+  /* 1 − cut, from the mirrored beta where the cut is near 1, so that it keeps its digits */
+  for (guint i = 0; i < j; i++)
+    {
+      bd->cut_y[i] = 1.0 - bd->cut[i];
+      if (bd->cut[i] > 0.5 && i > 0 && i + 1 < j)
+        {
+          double y = tf_incbeta_inverse_log (bd->log_tail[i], q, p, !bd->cut_lower[i]);
+          if (isfinite (y) && y >= 0.0 && y <= 0.5)
+            bd->cut_y[i] = y;
+        }
+    }
+  for (guint i = 1; i < j; i++)
+    if (bd->cut_y[i] > bd->cut_y[i - 1])
+      bd->cut_y[i] = bd->cut_y[i - 1];
 }
 
 typedef enum { FACTOR_LOWER, FACTOR_UPPER, FACTOR_DENSITY } Kind;
@@ -90,29 +104,29 @@ typedef struct {
 
 /* w, the other variable's argument: z − d over θA, x + d over θB; 1 − w beside it. */
 static void
-other_arg (const Integrand *in, double v, double *w, double *y)
+other_arg (const Integrand *in, double v, double vy, double *w, double *y)
 {
   if (in->bd->over_a)
     {
       *w = v - in->d;
-      *y = (1.0 - v) + in->d;
+      *y = vy + in->d;
     }
   else
     {
       *w = v + in->d;
-      *y = (1.0 - v) - in->d;
+      *y = vy - in->d;
     }
 }
 
 /* ln of the other factor at v: P(θB >= z − d), P(θB <= z − d) or f_B(z − d) over θA;
  * P(θA <= x + d), P(θA >= x + d) or f_A(x + d) over θB. */
 static double
-log_factor (const Integrand *in, double v)
+log_factor (const Integrand *in, double v, double vy)
 {
   double w, y, l, u;
   gboolean want_lower;
 
-  other_arg (in, v, &w, &y);
+  other_arg (in, v, vy, &w, &y);
   if (in->kind == FACTOR_DENSITY)
     {
       if (w <= 0.0 || y <= 0.0)
@@ -130,14 +144,26 @@ log_factor (const Integrand *in, double v)
 }
 
 static double
-integrand (double v, void *data)
+integrand_vy (const Integrand *in, double v, double vy)
 {
-  const Integrand *in = data;
-  if (v <= 0.0 || v >= 1.0)
+  if (v <= 0.0 || vy <= 0.0)
     return 0.0;
-  double l = tf_log_dbeta (v, 1.0 - v, in->pv, in->qv) + log_factor (in, v);
+  double l = tf_log_dbeta (v, vy, in->pv, in->qv) + log_factor (in, v, vy);
   double r = exp (l - in->ref);
   return isfinite (r) ? r : (l == -INFINITY ? 0.0 : GSL_DBL_MAX);
+}
+
+static double
+integrand (double v, void *data)
+{
+  return integrand_vy (data, v, 1.0 - v);
+}
+
+/* the same in y = 1 − v, for pieces near 1 */
+static double
+integrand_y (double y, void *data)
+{
+  return integrand_vy (data, 1.0 - y, y);
 }
 
 /* ln of the largest value of the other factor on [v0, v1]: the factor is monotone in v
@@ -147,21 +173,21 @@ log_factor_max (const Integrand *in, double v0, double v1)
 {
   if (in->kind != FACTOR_DENSITY)
     {
-      double a = log_factor (in, v0), b = log_factor (in, v1);
+      double a = log_factor (in, v0, 1.0 - v0), b = log_factor (in, v1, 1.0 - v1);
       return MAX (a, b);
     }
   if (in->po <= 1.0 || in->qo <= 1.0)
     return INFINITY;
   double mode = (in->po - 1.0) / (in->po + in->qo - 2.0), w0, w1, y;
-  other_arg (in, v0, &w0, &y);
-  other_arg (in, v1, &w1, &y);
+  other_arg (in, v0, 1.0 - v0, &w0, &y);
+  other_arg (in, v1, 1.0 - v1, &w1, &y);
   if (w0 <= mode && mode <= w1)
     return tf_log_dbeta (mode, 1.0 - mode, in->po, in->qo);
-  return MAX (log_factor (in, v0), log_factor (in, v1));
+  return MAX (log_factor (in, v0, 1.0 - v0), log_factor (in, v1, 1.0 - v1));
 }
 
 typedef struct {
-  double v0, v1, log_bound, log_mass;
+  double v0, v1, y0, y1, log_bound, log_mass;
 } Piece;
 
 static int
@@ -203,7 +229,7 @@ integrate (const TfBetaDiff *bd, double d, Kind kind, gboolean *ok)
   guint np = 0;
   Integrand in = { bd, d, kind, 0.0, 0, 0, 0, 0 };
   double kinks[2];
-  double total = -INFINITY;
+  double total = -INFINITY, log_err = -INFINITY;
 
   in.pv = bd->over_a ? bd->pa : bd->pb;
   in.qv = bd->over_a ? bd->qa : bd->qb;
@@ -216,8 +242,9 @@ integrate (const TfBetaDiff *bd, double d, Kind kind, gboolean *ok)
   for (guint i = 0; i + 1 < bd->n_cuts; i++)
     {
       double a = bd->cut[i], b = bd->cut[i + 1];
+      double ya = bd->cut_y[i], yb = bd->cut_y[i + 1];
       double lm;
-      if (!(b > a))
+      if (!(b > a) && !(ya > yb))
         continue;
       lm = piece_log_mass (bd, i);
       /* split at the kinks inside */
@@ -238,6 +265,8 @@ integrate (const TfBetaDiff *bd, double d, Kind kind, gboolean *ok)
           Piece *p = &pieces[np++];
           p->v0 = edges[k];
           p->v1 = edges[k + 1];
+          p->y0 = k == 0 ? ya : 1.0 - edges[k];
+          p->y1 = k + 1 == ne ? yb : 1.0 - edges[k + 1];
           p->log_mass = lm;       /* a bound when the piece was split */
           p->log_bound = lm + log_factor_max (&in, p->v0, p->v1);
           if (np == G_N_ELEMENTS (pieces))
@@ -259,18 +288,28 @@ integrate (const TfBetaDiff *bd, double d, Kind kind, gboolean *ok)
 
       if (p->log_bound == -INFINITY || p->log_bound < total - 41.0)
         continue;
-      in.ref = isfinite (p->log_bound) ? p->log_bound - log (p->v1 - p->v0) : 0.0;
-      status = gsl_integration_qags (&f, p->v0, p->v1, 0.0, bd->epsrel, 200, ws, &result, &abserr);
-      if (status != GSL_SUCCESS && !(abserr <= 1e-8 * fabs (result)))
+      gboolean in_y = p->v0 + p->v1 > 1.0;
+      double width = in_y ? p->y0 - p->y1 : p->v1 - p->v0;
+      if (!(width > 0.0))
+        continue;
+      in.ref = isfinite (p->log_bound) ? p->log_bound - log (width) : 0.0;
+      if (in_y)
         {
-          /* a roundoff stop on a piece that is negligible next to the sum is harmless */
-          if (!(in.ref + log (abserr + 1e-300) < total - 30.0))
-            *ok = FALSE;
+          f.function = integrand_y;
+          status = gsl_integration_qags (&f, p->y1, p->y0, 0.0, bd->epsrel, 200, ws, &result, &abserr);
         }
+      else
+        status = gsl_integration_qags (&f, p->v0, p->v1, 0.0, bd->epsrel, 200, ws, &result, &abserr);
+      /* a piece that stops short of its tolerance (roundoff near a singular end) only
+       * matters when its error is not negligible next to the whole */
+      if (status != GSL_SUCCESS)
+        log_err = tf_log_add (log_err, in.ref + log (abserr + 1e-300));
       if (result > 0.0)
         total = tf_log_add (total, in.ref + log (result));
     }
   gsl_integration_workspace_free (ws);
+  if (log_err > total + log (1e-8))
+    *ok = FALSE;
   return total;
 }
 

@@ -18,6 +18,7 @@ typedef struct {
    * of the integration variable's distribution between successive ones */
   guint n_cuts;
   double cut[TF_BETA_DIFF_N_CUTS];
+  double cut_y[TF_BETA_DIFF_N_CUTS];   /* 1 − cut, accurate near 1 */
   double log_tail[TF_BETA_DIFF_N_CUTS]; /* ln P(V <= cut) or ln P(V >= cut) */
   gboolean cut_lower[TF_BETA_DIFF_N_CUTS];
   double epsrel;

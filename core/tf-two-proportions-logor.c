@@ -20,7 +20,7 @@
 #include <gsl/gsl_integration.h>
 
 /* Beyond this the sums over outcomes get too long for one analysis. */
-#define TF_LOGOR_MAX_SD 3e4
+#define TF_LOGOR_MAX_SD 2e3
 
 typedef struct {
   TfHyper h;
