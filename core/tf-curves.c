@@ -202,6 +202,29 @@ tf_model_probabilities_allocate (TfModelProbabilities *models, guint n)
   models->posterior = g_new0 (double, n);
 }
 
+static gboolean
+two_models_from_results (const TfAnalysis *analysis, TfModelProbabilities *models,
+                         char **why_not)
+{
+  g_autoptr (TfResults) results = tf_analysis_compute (analysis, NULL);
+  double post_null, post_alt;
+
+  if (results == NULL || !tf_results_get (results, "posterior_null", &post_null)
+      || !tf_results_get (results, "posterior_alt", &post_alt))
+    {
+      *why_not = g_strdup (_("The posterior probabilities of the models are not defined for these data."));
+      return FALSE;
+    }
+  tf_model_probabilities_allocate (models, 2);
+  models->names_markup[0] = g_strdup (_("H₀, the null"));
+  models->names_markup[1] = g_strdup (_("H₁, the alternative"));
+  models->prior[0] = analysis->prior_null;
+  models->prior[1] = 1.0 - analysis->prior_null;
+  models->posterior[0] = post_null;
+  models->posterior[1] = post_alt;
+  return TRUE;
+}
+
 TfModelProbabilities *
 tf_model_probabilities_new (const TfAnalysis *analysis, GPtrArray *problems, char **why_not)
 {
@@ -211,12 +234,16 @@ tf_model_probabilities_new (const TfAnalysis *analysis, GPtrArray *problems, cha
 
   if (klass == NULL)
     return NULL;
+  models = g_new0 (TfModelProbabilities, 1);
   if (klass->model_probabilities == NULL)
     {
-      set_why_not (why_not, not_provided (analysis, _("The model probabilities are not available for the design “%s” in this version.")));
+      /* The two models every design compares, from its own numbers. */
+      if (two_models_from_results (analysis, models, &reason))
+        return models;
+      tf_model_probabilities_free (models);
+      set_why_not (why_not, reason);
       return NULL;
     }
-  models = g_new0 (TfModelProbabilities, 1);
   if (!klass->model_probabilities (analysis, models, &reason))
     {
       tf_model_probabilities_free (models);
