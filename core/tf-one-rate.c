@@ -8,6 +8,7 @@
  */
 #include "tf-one-rate.h"
 #include "tf-poisson.h"
+#include "tf-evidence.h"
 #include "tf-logspace.h"
 
 #include <math.h>
@@ -232,25 +233,6 @@ posterior_quantile (double u, double P, double R, double c, TfDirection dir)
     }
 }
 
-static void
-add_bound_from_p (TfResults *results, double lp)
-{
-  const char *label = _("Smallest BF01 from the p-value");
-
-  /* −e p ln p (Sellke, Bayarri & Berger 2001), from ln p */
-  if (lp >= -1.0)
-    tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, 1.0);
-  else
-    {
-      double v = exp (1.0 + lp + log (-lp));
-      if (v > 0.0)
-        tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, v);
-      else
-        tf_results_add_undefined (results, "min_bf01", label, TF_MEASURE_BOUND,
-                                  _("the p-value is so small that the bound underflows to 0"));
-    }
-}
-
 void
 tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
 {
@@ -286,22 +268,8 @@ tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
                   TF_MEASURE_CONFIDENCE_LIMIT, hi / E);
 
   double lbf01 = analysis_log_bf01 (a, alpha, beta, k, E);
-  if (isfinite (lbf01))
-    {
-      tf_results_add (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, exp (-lbf01));
-      tf_results_add (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, exp (lbf01));
-    }
-  else
-    {
-      const char *why = _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented");
-      tf_results_add_undefined (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, why);
-      tf_results_add_undefined (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, why);
-    }
-  double lo_odds = log (a->prior_null) - log1p (-a->prior_null) + lbf01;
-  tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo_odds));
-  tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo_odds));
+  tf_results_add_bayes_factors (results, lbf01, a->prior_null,
+                                _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
 
   /* The posterior under the alternative, truncated to its side for a one-sided one. */
   double cut = a->null_kind == TF_NULL_POINT ? a->null_value
@@ -319,26 +287,11 @@ tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
                                                 : _("Posterior probability that λ lies above the null interval"),
                   TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_gamma_inc_log_upper (P, R * top)));
 
-  add_bound_from_p (results, t.lp_exact);
   /* L(λ0) / L(k/E) = exp(−G/2) (Edwards, Lindman & Savage 1963); 1 when the estimate
    * lies in the null or on its side. */
-  double lr = exp (-t.dev);
-  if (inside || (dir == TF_DIRECTION_GREATER && k <= lam * E)
-      || (dir == TF_DIRECTION_LESS && k >= lam * E))
-    lr = 1.0;
-  if (lr > 0.0)
-    tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, lr);
-  else
-    tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"),
-                              TF_MEASURE_BOUND,
-                              _("the likelihood ratio is so small that it underflows to 0"));
-}
-
-static double
-finite_exp (double l)
-{
-  double v = exp (l);
-  return isfinite (v) ? v : DBL_MAX;
+  gboolean null_side = inside || (dir == TF_DIRECTION_GREATER && k <= lam * E)
+                       || (dir == TF_DIRECTION_LESS && k >= lam * E);
+  tf_results_add_bounds (results, t.lp_exact, null_side ? 0.0 : -t.dev);
 }
 
 static double
@@ -384,24 +337,18 @@ tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
     {
       double x = i + 1 == np ? hi : lo + i * step;
       curves->x[i] = x;
-      curves->prior[i] = finite_exp (tf_log_dgamma (x, alpha, beta));
-      curves->posterior[i] = finite_exp (tf_log_dgamma (x, P, R));
-      curves->likelihood[i] = finite_exp (tf_log_dgamma (x, k + 1.0, E));
+      curves->prior[i] = tf_finite_exp (tf_log_dgamma (x, alpha, beta));
+      curves->posterior[i] = tf_finite_exp (tf_log_dgamma (x, P, R));
+      curves->likelihood[i] = tf_finite_exp (tf_log_dgamma (x, k + 1.0, E));
     }
   double mid = 0.5 * (nl + nh);
   curves->null_value = mid;
   curves->null_low = nl;
   curves->null_high = nh;
-  curves->prior_at_null = finite_exp (tf_log_dgamma (mid, alpha, beta));
-  curves->posterior_at_null = finite_exp (tf_log_dgamma (mid, P, R));
+  curves->prior_at_null = tf_finite_exp (tf_log_dgamma (mid, alpha, beta));
+  curves->posterior_at_null = tf_finite_exp (tf_log_dgamma (mid, P, R));
   curves->posterior_mode = P >= 1.0 ? (P - 1.0) / R : lo;
   curves->parameter_markup = g_strdup ("λ");
-}
-
-static double
-log_bf01_to_posterior_null (double lbf01, double pi0)
-{
-  return tf_logistic (log (pi0) - log1p (-pi0) + lbf01);
 }
 
 /* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
@@ -417,13 +364,13 @@ tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
       double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
       curve->x[i] = s;
       curve->log_bf01[i] = analysis_log_bf01 (a, s, s / mean, a->events, a->exposure);
-      curve->posterior_null[i] = log_bf01_to_posterior_null (curve->log_bf01[i], a->prior_null);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
     }
   curve->x_log = TRUE;
   curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
   curve->chosen_x = a->prior_shape;
   curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events, a->exposure);
-  curve->chosen_posterior_null = log_bf01_to_posterior_null (curve->chosen_log_bf01, a->prior_null);
+  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
   return TRUE;
 }
 
@@ -461,13 +408,13 @@ tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
       double k = MAX (0.0, m + z * sqrt (m));
       curve->x[i] = e;
       curve->log_bf01[i] = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, k, e);
-      curve->posterior_null[i] = log_bf01_to_posterior_null (curve->log_bf01[i], a->prior_null);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
     }
   curve->x_log = TRUE;
   curve->x_markup = g_strdup (_("exposure <i>E</i>"));
   curve->chosen_x = a->exposure;
   curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events, a->exposure);
-  curve->chosen_posterior_null = log_bf01_to_posterior_null (curve->chosen_log_bf01, a->prior_null);
+  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
   curve->p_value = exp (lp);
   return TRUE;
 }

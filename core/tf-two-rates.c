@@ -16,6 +16,7 @@
 #include "tf-poisson.h"
 #include "tf-binomial.h"
 #include "tf-incbeta.h"
+#include "tf-evidence.h"
 #include "tf-logspace.h"
 
 #include <math.h>
@@ -302,25 +303,6 @@ boundary_ratio (const TfAnalysis *a, gboolean *inside)
 #undef BELOW
 }
 
-static void
-add_bound_from_p (TfResults *results, double lp)
-{
-  const char *label = _("Smallest BF01 from the p-value");
-
-  /* −e p ln p (Sellke, Bayarri & Berger 2001), from ln p */
-  if (lp >= -1.0)
-    tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, 1.0);
-  else
-    {
-      double v = exp (1.0 + lp + log (-lp));
-      if (v > 0.0)
-        tf_results_add (results, "min_bf01", label, TF_MEASURE_BOUND, v);
-      else
-        tf_results_add_undefined (results, "min_bf01", label, TF_MEASURE_BOUND,
-                                  _("the p-value is so small that the bound underflows to 0"));
-    }
-}
-
 /* A quantile u of the posterior ratio, truncated above c (greater) or below c (less). */
 static double
 posterior_ratio_quantile (double u, double sa, double ra, double sb, double rb, double c,
@@ -392,22 +374,8 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
                               _("group B has no events, so the data set no upper limit on the ratio"));
 
   double lbf01 = analysis_log_bf01 (a, s, r, ka, ea, kb, eb);
-  if (isfinite (lbf01))
-    {
-      tf_results_add (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, exp (-lbf01));
-      tf_results_add (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, exp (lbf01));
-    }
-  else
-    {
-      const char *why = _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented");
-      tf_results_add_undefined (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, why);
-      tf_results_add_undefined (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, why);
-    }
-  double lo_odds = log (a->prior_null) - log1p (-a->prior_null) + lbf01;
-  tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo_odds));
-  tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo_odds));
+  tf_results_add_bayes_factors (results, lbf01, a->prior_null,
+                                _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
 
   double cut = a->null_kind == TF_NULL_POINT ? tf_two_rates_null_ratio (a)
                : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
@@ -422,26 +390,12 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
                                                 : _("Posterior probability that λA/λB lies above the null interval"),
                   TF_MEASURE_POSTERIOR_PROBABILITY, exp (log_ratio_upper (sa, ra, sb, rb, top)));
 
-  add_bound_from_p (results, t.lp_exact);
   /* The conditional likelihood ratio at its maximum, exp(−G/2), equal to the profile
-   * likelihood ratio of the two Poisson counts (Edwards, Lindman & Savage 1963). */
-  double lr = exp (-t.dev);
-  if (inside || (dir == TF_DIRECTION_GREATER && ka <= n * p0)
-      || (dir == TF_DIRECTION_LESS && ka >= n * p0))
-    lr = 1.0;
-  if (lr > 0.0)
-    tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, lr);
-  else
-    tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"),
-                              TF_MEASURE_BOUND,
-                              _("the likelihood ratio is so small that it underflows to 0"));
-}
-
-static double
-finite_exp (double l)
-{
-  double v = exp (l);
-  return isfinite (v) ? v : DBL_MAX;
+   * likelihood ratio of the two Poisson counts (Edwards, Lindman & Savage 1963); 1 when
+   * the estimate lies in the null or on its side. */
+  gboolean null_side = inside || (dir == TF_DIRECTION_GREATER && ka <= n * p0)
+                       || (dir == TF_DIRECTION_LESS && ka >= n * p0);
+  tf_results_add_bounds (results, t.lp_exact, null_side ? 0.0 : -t.dev);
 }
 
 /* ln density of l = ln ρ when c ρ is beta-prime(sa, sb): with w = c ρ / (1 + c ρ),
@@ -505,10 +459,10 @@ tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
     {
       double x = i + 1 == np ? hi : lo + i * step;
       curves->x[i] = x;
-      curves->prior[i] = finite_exp (log_density_log_ratio (x, s, s, 0.0));
-      curves->posterior[i] = finite_exp (log_density_log_ratio (x, sa, sb, lc_post));
+      curves->prior[i] = tf_finite_exp (log_density_log_ratio (x, s, s, 0.0));
+      curves->posterior[i] = tf_finite_exp (log_density_log_ratio (x, sa, sb, lc_post));
       if (closed)
-        curves->likelihood[i] = finite_exp (log_density_log_ratio (x, ka, kb, lc_lik));
+        curves->likelihood[i] = tf_finite_exp (log_density_log_ratio (x, ka, kb, lc_lik));
       else
         {
           /* ln of w^kA (1 − w)^kB, one count being 0 */
@@ -532,16 +486,10 @@ tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
   curves->null_value = mid;
   curves->null_low = nl;
   curves->null_high = nh;
-  curves->prior_at_null = finite_exp (log_density_log_ratio (mid, s, s, 0.0));
-  curves->posterior_at_null = finite_exp (log_density_log_ratio (mid, sa, sb, lc_post));
+  curves->prior_at_null = tf_finite_exp (log_density_log_ratio (mid, s, s, 0.0));
+  curves->posterior_at_null = tf_finite_exp (log_density_log_ratio (mid, sa, sb, lc_post));
   curves->posterior_mode = log (sa) - log (sb) - lc_post;     /* the mode of w^sa (1 − w)^sb */
   curves->parameter_markup = g_strdup ("ln(λ<sub>A</sub>/λ<sub>B</sub>)");
-}
-
-static double
-posterior_null_of (double lbf01, double pi0)
-{
-  return tf_logistic (log (pi0) - log1p (-pi0) + lbf01);
 }
 
 /* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
@@ -558,14 +506,14 @@ tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
       curve->x[i] = s;
       curve->log_bf01[i] = analysis_log_bf01 (a, s, s / mean, a->events_a, a->exposure_a,
                                               a->events_b, a->exposure_b);
-      curve->posterior_null[i] = posterior_null_of (curve->log_bf01[i], a->prior_null);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
     }
   curve->x_log = TRUE;
   curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
   curve->chosen_x = a->prior_shape;
   curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events_a,
                                               a->exposure_a, a->events_b, a->exposure_b);
-  curve->chosen_posterior_null = posterior_null_of (curve->chosen_log_bf01, a->prior_null);
+  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
   return TRUE;
 }
 
@@ -612,14 +560,14 @@ tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
       curve->x[i] = f;
       curve->log_bf01[i] = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, kaf,
                                               a->exposure_a * f, nf - kaf, a->exposure_b * f);
-      curve->posterior_null[i] = posterior_null_of (curve->log_bf01[i], a->prior_null);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
     }
   curve->x_log = TRUE;
   curve->x_markup = g_strdup (_("exposures × <i>f</i> (both groups)"));
   curve->chosen_x = 1.0;
   curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, ka,
                                               a->exposure_a, kb, a->exposure_b);
-  curve->chosen_posterior_null = posterior_null_of (curve->chosen_log_bf01, a->prior_null);
+  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
   curve->p_value = exp (lp);
   return TRUE;
 }
