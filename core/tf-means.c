@@ -3,6 +3,7 @@
  * two-means designs.
  */
 #include "tf-means.h"
+#include "tf-evidence.h"
 #include "tf-jzs.h"
 #include "tf-noncentral-t.h"
 #include "tf-logspace.h"
@@ -211,8 +212,7 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
 
   /* Bayes factors on δ */
   double lbf01 = tf_means_log_bf01 (&prior, s->t_delta, s->n_eff, s->df_delta);
-  add_bf (results, "bf10", _("Bayes factor BF10"), -lbf01);
-  add_bf (results, "bf01", _("Bayes factor BF01"), lbf01);
+  tf_results_add_bayes_factors (results, lbf01, analysis->prior_null, NULL);
   TfDeltaPrior other = prior;
   other.prior = prior.prior == TF_PRIOR_CAUCHY ? TF_PRIOR_NORMAL : TF_PRIOR_CAUCHY;
   if (other.prior == TF_PRIOR_NORMAL)
@@ -221,11 +221,6 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
   else
     add_bf (results, "bf01_jzs", _("BF01 with the JZS (Cauchy) prior"),
             tf_means_log_bf01 (&other, s->t_delta, s->n_eff, s->df_delta));
-  double lo = log (analysis->prior_null) - log1p (-analysis->prior_null) + lbf01;
-  tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo));
-  tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo));
 
   /* Posterior of δ under the alternative, truncated to the side when one-sided. */
   g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&prior, s->t_delta, s->n_eff,
@@ -248,21 +243,9 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
   /* Bounds: −e p ln p (Sellke, Bayarri & Berger 2001); the likelihood ratio at the
    * maximum (Edwards, Lindman & Savage 1963) in its generalised-likelihood-ratio form
    * (1 + t²/ν)^(−n/2), n the number of observations, or exp(−z²/2) with a known SD. */
-  if (p_value >= exp (-1.0))
-    tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND, 1.0);
-  else if (p_value > 0.0 && -M_E * p_value * log (p_value) > 0.0)
-    tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND,
-                    -M_E * p_value * log (p_value));
-  else
-    tf_results_add_undefined (results, "min_bf01", _("Smallest BF01 from the p-value"),
-                              TF_MEASURE_BOUND, _("the p-value is so small that the bound underflows to 0"));
   double llr = s->known_sd ? -0.5 * s->t * s->t
                : -0.5 * s->n_total * log1p (s->t * s->t / s->df);
   if ((dir == TF_DIRECTION_GREATER && s->t <= 0.0) || (dir == TF_DIRECTION_LESS && s->t >= 0.0))
     llr = 0.0;
-  if (exp (llr) > 0.0)
-    tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, exp (llr));
-  else
-    tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND,
-                              _("the likelihood ratio is so small that it underflows to 0"));
+  tf_results_add_bounds (results, log (p_value), llr);
 }

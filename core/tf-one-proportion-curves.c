@@ -7,21 +7,17 @@
 #include "tf-logspace.h"
 
 #include <math.h>
+#include "tf-evidence.h"
+
 #include <glib/gi18n-lib.h>
 #include <gsl/gsl_cdf.h>
-
-static double
-to_posterior_null (double lbf01, double pi0)
-{
-  return tf_logistic (log (pi0) - log1p (-pi0) + lbf01);
-}
 
 static void
 set_chosen (const TfAnalysis *an, TfEvidenceCurve *curve)
 {
   curve->chosen_log_bf01 = tf_one_proportion_analysis_log_bf01 (an, an->successes, an->trials,
                                                                 an->prior_a, an->prior_b);
-  curve->chosen_posterior_null = to_posterior_null (curve->chosen_log_bf01, an->prior_null);
+  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, an->prior_null);
 }
 
 /* x = prior concentration a + b from 1e-2 to 1e4, log-spaced, the prior mean
@@ -38,7 +34,7 @@ tf_one_proportion_sensitivity (const TfAnalysis *an, TfEvidenceCurve *curve,
       curve->x[i] = s;
       curve->log_bf01[i] = tf_one_proportion_analysis_log_bf01 (an, an->successes, an->trials,
                                                                 s * mean, s * (1.0 - mean));
-      curve->posterior_null[i] = to_posterior_null (curve->log_bf01[i], an->prior_null);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], an->prior_null);
     }
   curve->x_log = TRUE;
   curve->x_markup = g_strdup (_("prior concentration <i>a</i> + <i>b</i> (prior mean held)"));
@@ -86,7 +82,7 @@ tf_one_proportion_sample_size (const TfAnalysis *an, TfEvidenceCurve *curve, cha
       double k = CLAMP (n * t + z * sqrt (n * t * (1.0 - t)), 0.0, n);
       curve->x[i] = n;
       curve->log_bf01[i] = tf_one_proportion_analysis_log_bf01 (an, k, n, an->prior_a, an->prior_b);
-      curve->posterior_null[i] = to_posterior_null (curve->log_bf01[i], an->prior_null);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], an->prior_null);
     }
   curve->x_log = TRUE;
   curve->x_markup = g_strdup (_("trials <i>n</i> (p-value held)"));

@@ -6,6 +6,7 @@
 #include "tf-binomial.h"
 #include "tf-incbeta.h"
 #include "tf-incbeta-private.h"
+#include "tf-evidence.h"
 #include "tf-logspace.h"
 #include "tf-one-proportion-private.h"
 #include "tf-proportion-intervals.h"
@@ -372,24 +373,8 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
   /* Bayes factors: the null (point or interval) against Beta(a, b) on the rest, or
    * truncated to the side for a one-sided alternative. */
   double lbf01 = tf_one_proportion_analysis_log_bf01 (analysis, k, n, a, b);
-  if (isfinite (lbf01))
-    {
-      tf_results_add (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, exp (-lbf01));
-      tf_results_add (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, exp (lbf01));
-    }
-  else
-    {
-      const char *why = _("the posterior or prior mass of a hypothesis underflows, so the Bayes factor cannot be represented");
-      tf_results_add_undefined (results, "bf10", _("Bayes factor BF10"), TF_MEASURE_BAYES_FACTOR, why);
-      tf_results_add_undefined (results, "bf01", _("Bayes factor BF01"), TF_MEASURE_BAYES_FACTOR, why);
-    }
-
-  /* P(H0 | data) = logistic(logit π0 + ln BF01), each side from its own argument. */
-  double lo_odds = log (pi0) - log1p (-pi0) + lbf01;
-  tf_results_add (results, "posterior_null", _("Posterior probability of the null"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (lo_odds));
-  tf_results_add (results, "posterior_alt", _("Posterior probability of the alternative"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, tf_logistic (-lo_odds));
+  tf_results_add_bayes_factors (results, lbf01, pi0,
+                                _("the posterior or prior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
 
   /* The posterior under the alternative, truncated to its side when one-sided (above
    * H, below L); for an interval null against both sides, the whole Beta posterior. */
@@ -432,31 +417,13 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
                         : _("Posterior probability that θ lies above the null interval"),
                   TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_incbeta_log_upper (H, 1.0 - H, P, Q)));
 
-  /* Bounds. −e p ln p (Sellke, Bayarri & Berger 2001), from ln p. */
-  if (t.lp_exact >= -1.0)
-    tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND, 1.0);
-  else
-    {
-      double v = exp (1.0 + t.lp_exact + log (-t.lp_exact));
-      if (v > 0.0)
-        tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND, v);
-      else
-        tf_results_add_undefined (results, "min_bf01", _("Smallest BF01 from the p-value"),
-                                  TF_MEASURE_BOUND,
-                                  _("the p-value is so small that the bound underflows to 0"));
-    }
-  /* L(θ0) / L(k/n) = exp(−G/2) (Edwards, Lindman & Savage 1963), at the null's end
-   * nearer the data; 1 when k/n lies in the null or on its side of a one-sided test. */
-  double lr_bound = exp (-t.dev);
-  if ((dir == TF_DIRECTION_GREATER && t.d <= 0.0) || (dir == TF_DIRECTION_LESS && t.d >= 0.0)
-      || (!point && k >= n * L && k <= n * H))
-    lr_bound = 1.0;
-  if (lr_bound > 0.0)
-    tf_results_add (results, "min_bf01_lr", _("Smallest BF01 over all priors"), TF_MEASURE_BOUND, lr_bound);
-  else
-    tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"),
-                              TF_MEASURE_BOUND,
-                              _("the likelihood ratio is so small that it underflows to 0"));
+  /* Bounds: −e p ln p (Sellke, Bayarri & Berger 2001) from ln p, and
+   * L(θ0) / L(k/n) = exp(−G/2) (Edwards, Lindman & Savage 1963) at the null's end
+   * nearer the data, 1 when k/n lies in the null or on its side of a one-sided test. */
+  gboolean null_side = (dir == TF_DIRECTION_GREATER && t.d <= 0.0)
+                       || (dir == TF_DIRECTION_LESS && t.d >= 0.0)
+                       || (!point && k >= n * L && k <= n * H);
+  tf_results_add_bounds (results, t.lp_exact, null_side ? 0.0 : -t.dev);
 
   /* Savage–Dickey density ratio (Dickey 1971), a check of bf01. */
   if (dir == TF_DIRECTION_TWO_SIDED && point)
@@ -468,13 +435,6 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
                               _("the density ratio is reported for a point null against the two-sided alternative only"));
 
   tf_one_proportion_compute_models (analysis, results);
-}
-
-static double
-finite_exp (double l)
-{
-  double v = exp (l);
-  return isfinite (v) ? v : DBL_MAX;
 }
 
 void
@@ -531,14 +491,14 @@ tf_one_proportion_densities (const TfAnalysis *analysis, TfDensityCurves *curves
     {
       double x = i + 1 == np ? hi : lo + i * step;
       curves->x[i] = x;
-      curves->prior[i] = finite_exp (tf_log_dbeta (x, 1.0 - x, a, b));
-      curves->posterior[i] = finite_exp (tf_log_dbeta (x, 1.0 - x, P, Q));
-      curves->likelihood[i] = finite_exp (tf_log_dbeta (x, 1.0 - x, k + 1.0, n - k + 1.0));
+      curves->prior[i] = tf_finite_exp (tf_log_dbeta (x, 1.0 - x, a, b));
+      curves->posterior[i] = tf_finite_exp (tf_log_dbeta (x, 1.0 - x, P, Q));
+      curves->likelihood[i] = tf_finite_exp (tf_log_dbeta (x, 1.0 - x, k + 1.0, n - k + 1.0));
     }
   curves->null_value = t;
   curves->null_low = nl;
   curves->null_high = nh;
-  curves->prior_at_null = finite_exp (tf_log_dbeta (t, 1.0 - t, a, b));
-  curves->posterior_at_null = finite_exp (tf_log_dbeta (t, 1.0 - t, P, Q));
+  curves->prior_at_null = tf_finite_exp (tf_log_dbeta (t, 1.0 - t, a, b));
+  curves->posterior_at_null = tf_finite_exp (tf_log_dbeta (t, 1.0 - t, P, Q));
   curves->parameter_markup = g_strdup ("θ");
 }
