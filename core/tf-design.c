@@ -17,8 +17,7 @@ static const TfDesignClass one_proportion = {
   .densities = tf_one_proportion_densities,
   .sensitivity = tf_one_proportion_sensitivity,
   .sample_size = tf_one_proportion_sample_size,
-  /* .null_distribution = tf_one_proportion_null_distribution, once the null figure's
-   * legend fits a 60 mm figure (tests/figures fails on its width) */
+  .null_distribution = tf_one_proportion_null_distribution,
   .model_probabilities = tf_one_proportion_model_probabilities,
 };
 

@@ -75,10 +75,16 @@ tf_one_proportion_sample_size (const TfAnalysis *an, TfEvidenceCurve *curve, cha
   if (an->direction == TF_DIRECTION_LESS
       || (an->direction == TF_DIRECTION_TWO_SIDED && tests.d < 0.0))
     z = -z;
+  /* The p-value can be held only where k = nθ0 + z·sqrt(nθ0(1 − θ0)) stays inside
+   * [0, n], that is from n = z² max(θ0/(1 − θ0), (1 − θ0)/θ0); start at twice that, or
+   * at the observed n if it is smaller, so the curve shows no clipping artefacts. */
+  double n_min = 2.0 * z * z * MAX (t / (1.0 - t), (1.0 - t) / t);
+  double bottom = MAX (1.0, MIN (n_min, an->trials));
   double top = MAX (1e12, an->trials);
   for (guint i = 0; i < curve->n; i++)
     {
-      double n = i + 1 == curve->n ? top : pow (top, (double) i / (curve->n - 1));
+      double n = i + 1 == curve->n ? top
+                 : bottom * pow (top / bottom, (double) i / (curve->n - 1));
       double k = CLAMP (n * t + z * sqrt (n * t * (1.0 - t)), 0.0, n);
       curve->x[i] = n;
       curve->log_bf01[i] = tf_one_proportion_analysis_log_bf01 (an, k, n, an->prior_a, an->prior_b);

@@ -98,6 +98,15 @@ tf_figure_draw_null_distribution (cairo_t *cr, double width, double height, doub
               break;
           }
       tf_legend_measure (cr, &theme, entries, n_entries, columns, &legend_w, &legend_h);
+      if (above && legend_w > width - 2 * pad)
+        {
+          /* A narrow figure: the tail's entry says only the p-value. */
+          g_autofree char *p = tf_fig_number (d->p_value, 3);
+          g_free (tail_label);
+          tail_label = g_strdup_printf ("<i>p</i> = %s", p);
+          entries[1].markup = tail_label;
+          tf_legend_measure (cr, &theme, entries, n_entries, columns, &legend_w, &legend_h);
+        }
       tf_fig_layout_single (cr, &theme, width, height,
                             obs_h + tf_figure_theme_pt (&theme, 2.0)
                             + (above ? legend_h + tf_figure_theme_pt (&theme, 2.0) : 0),
