@@ -3,6 +3,7 @@
  * the live numbers. The side pane and the reports read the same text.
  */
 #include "tf-explain.h"
+#include "tf-diagnostic.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -281,40 +282,19 @@ explain_bounds (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
                    "a bound near 1.")));
 }
 
-/* Fires when the two readings point different ways. */
+/* When the two readings point different ways: which conditions make them (the
+ * diagnostic's own words), and what to do about it. */
 static void
 explain_disagreement (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
 {
-  double p, post, alpha = 1.0 - a->level;
-  g_autofree char *ps = NULL, *posts = NULL, *alphas = NULL;
+  char *text = tf_diagnostic_text (a, r);
 
-  if (!tf_results_get (r, "p_value", &p) || !tf_results_get (r, "posterior_null", &post))
+  if (text == NULL)
     return;
-  if (!((p < alpha && post > 0.5) || (p >= alpha && post < 0.5)))
-    return;
-  ps = value_of (r, "p_value");
-  posts = value_of (r, "posterior_null");
-  alphas = tf_format_value (alpha, TF_MEASURE_TAIL_PROBABILITY);
-  if (p < alpha)
-    add (list, _("The two readings disagree"),
-         g_strdup_printf (_("The test rejects the null at %s (p = %s), yet the null keeps a "
-                            "posterior probability of %s. This happens when there are many "
-                            "observations, the departure from the null is small, the null is "
-                            "precise and the prior under the alternative is wide: the data sit "
-                            "closer to the null value than to most values the alternative "
-                            "expected."),
-                          alphas, ps, posts),
-         g_strdup (_("Neither number is wrong; they answer different questions. Report both, "
-                     "with the prior, and show how the conclusion moves with the prior's "
-                     "width.")));
-  else
-    add (list, _("The two readings disagree"),
-         g_strdup_printf (_("The test does not reject the null at %s (p = %s), yet the null's "
-                            "posterior probability is only %s: the alternative, as its prior "
-                            "spreads it, predicted these data better."),
-                          alphas, ps, posts),
-         g_strdup (_("Neither number is wrong; they answer different questions. Report both, "
-                     "with the prior.")));
+  add (list, _("The two readings disagree"), text,
+       g_strdup (_("Neither number is wrong; they answer different questions. Report both, "
+                   "with the prior, and show how the conclusion moves with the prior's width "
+                   "and with the sample size.")));
 }
 
 GPtrArray *
