@@ -302,12 +302,13 @@ tf_explain (const TfAnalysis *analysis, const TfResults *results)
 {
   GPtrArray *list = g_ptr_array_new_with_free_func ((GDestroyNotify) tf_explanation_free);
 
+  /* When the readings disagree, that comes first: it is what the reader must see. */
+  explain_disagreement (list, analysis, results);
   explain_p_value (list, analysis, results);
   explain_confidence (list, analysis, results);
   explain_bayes_factor (list, analysis, results);
   explain_posterior (list, analysis, results);
   explain_credible (list, analysis, results);
   explain_bounds (list, analysis, results);
-  explain_disagreement (list, analysis, results);
   return list;
 }
