@@ -11,17 +11,9 @@
 #include "tf-jzs.h"
 #include "tf-noncentral-t.h"
 #include "tf-means.h"
+#include "tf-check.h"
 
 #define REL(got, want, tol) g_assert_cmpfloat_with_epsilon ((got), (want), (tol) * fabs (want))
-
-static double
-get (const TfResults *r, const char *id)
-{
-  double v = NAN;
-  if (!tf_results_get (r, id, &v))
-    g_error ("result %s is missing or undefined", id);
-  return v;
-}
 
 static GArray *
 array_of (const double *v, guint n)

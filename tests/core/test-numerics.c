@@ -11,14 +11,7 @@
 #include "tf-logspace.h"
 #include "tf-incbeta.h"
 #include "tf-binomial.h"
-
-static void
-assert_rel (double got, double want, double tol)
-{
-  double err = want == 0.0 ? fabs (got) : fabs (got - want) / fabs (want);
-  if (!(err <= tol))
-    g_error ("got %.17g, want %.17g (relative error %.3g > %.3g)", got, want, err, tol);
-}
+#include "tf-check.h"
 
 static void
 test_stirling (void)

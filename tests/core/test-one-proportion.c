@@ -17,14 +17,7 @@
 #include "tf-analysis-file.h"
 #include "tf-diagnostic.h"
 #include "tf-proportion-intervals.h"
-
-static void
-assert_rel (double got, double want, double tol)
-{
-  double err = want == 0.0 ? fabs (got) : fabs (got - want) / fabs (want);
-  if (!(err <= tol))
-    g_error ("got %.17g, want %.17g (relative error %.3g > %.3g)", got, want, err, tol);
-}
+#include "tf-check.h"
 
 static TfAnalysis *
 make (double k, double n, double theta0, double a, double b, TfDirection dir)
@@ -58,15 +51,6 @@ compute (const TfAnalysis *an)
       g_assert_true (isfinite (num->value));
     }
   return r;
-}
-
-static double
-get (const TfResults *r, const char *id)
-{
-  double v = NAN;
-  if (!tf_results_get (r, id, &v))
-    g_error ("%s is not defined", id);
-  return v;
 }
 
 static void

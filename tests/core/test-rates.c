@@ -8,25 +8,10 @@
 #include "tf-results.h"
 #include "tf-one-rate.h"
 #include "tf-two-rates.h"
+#include "tf-check.h"
 
 #include <math.h>
 #include <gsl/gsl_errno.h>
-
-static void
-assert_rel (double got, double want, double tol)
-{
-  if (!(fabs (got - want) <= tol * fabs (want)))
-    g_error ("got %.17g, want %.17g (relative tolerance %g)", got, want, tol);
-}
-
-static double
-get (const TfResults *r, const char *id)
-{
-  double v = NAN;
-  if (!tf_results_get (r, id, &v))
-    g_error ("result %s is missing or undefined", id);
-  return v;
-}
 
 static TfAnalysis *
 one_rate (double k, double e, double l0)
