@@ -39,6 +39,7 @@ usage_error (const char *message)
   g_printerr (_("Usage: twofold-cli analyse FILE [--json]\n"
                 "       twofold-cli figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
                 "                   [--width-mm W] [--height-mm H] [--dpi D] [--style light|dark|print]\n"
+                "                   [--grades kass-raftery|jeffreys|none]\n"
                 "       twofold-cli --help\n"));
   return EXIT_USAGE;
 }
@@ -124,6 +125,7 @@ command_figure (int argc, char **argv)
   double width_mm = TF_FIGURE_DEFAULT_WIDTH_MM, height_mm = TF_FIGURE_DEFAULT_HEIGHT_MM;
   double dpi = TF_FIGURE_DEFAULT_DPI;
   g_autofree char *style = NULL;
+  g_autofree char *grades = NULL;
   TfFigureOptions options = TF_FIGURE_OPTIONS_INIT;
   GOptionEntry entries[] = {
     { "kind", 0, 0, G_OPTION_ARG_STRING, &kind,
@@ -133,6 +135,9 @@ command_figure (int argc, char **argv)
     { "height-mm", 0, 0, G_OPTION_ARG_DOUBLE, &height_mm, N_("Height in millimetres (default 80)"), N_("H") },
     { "dpi", 0, 0, G_OPTION_ARG_DOUBLE, &dpi, N_("Dots per inch of a PNG (default 300)"), N_("D") },
     { "style", 0, 0, G_OPTION_ARG_STRING, &style, N_("light (default), dark or print (greyscale)"), N_("STYLE") },
+    { "grades", 0, 0, G_OPTION_ARG_STRING, &grades,
+      N_("evidence grades on Bayes factor axes: kass-raftery (Kass & Raftery 1995, default), jeffreys (Jeffreys 1961) or none"),
+      N_("GRADES") },
     { NULL }
   };
   g_autoptr (GOptionContext) context = g_option_context_new (_("figure FILE"));
@@ -153,6 +158,8 @@ command_figure (int argc, char **argv)
     return usage_error (_("figure needs --output"));
   if (style && !tf_figure_style_from_string (style, &options.style))
     return usage_error (_("--style must be light, dark or print"));
+  if (grades && !tf_evidence_scale_from_string (grades, &options.evidence_scale))
+    return usage_error (_("--grades must be kass-raftery, jeffreys or none"));
 
   analysis = tf_analysis_load (argv[2], problems);
   if (analysis == NULL)
@@ -192,6 +199,7 @@ main (int argc, char **argv)
                  "  analyse FILE [--json]   every number of an analysis, as text or JSON\n"
                  "  figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
                  "         [--width-mm W] [--height-mm H] [--dpi D] [--style light|dark|print]\n"
+                 "         [--grades kass-raftery|jeffreys|none]\n"
                  "                          a figure at the size a journal asks\n\n"
                  "Exit codes: 0 done; 1 the analysis could not be computed;\n"
                  "2 bad usage or a bad file (the message names file, group and key).\n"));

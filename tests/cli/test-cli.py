@@ -242,6 +242,21 @@ with tempfile.TemporaryDirectory() as tmp:
     check("nothing written on error", not os.path.exists(os.path.join(tmp, "x.png"))
           and not os.path.exists(os.path.join(tmp, "x.gif")))
 
+# --- evidence grades on the Bayes factor axes -------------------------------------------
+with tempfile.TemporaryDirectory() as tmp:
+    for grades in ("kass-raftery", "jeffreys", "none"):
+        out_png = os.path.join(tmp, f"s-{grades}.png")
+        code, out, err = run("figure", demo, "--kind", "sensitivity", "--output", out_png,
+                             "--grades", grades, "--dpi", "100")
+        check(f"grades {grades}: exit 0", code == 0, err)
+    # Jeffreys' and Kass & Raftery's grades sit at different heights: the files differ.
+    a = open(os.path.join(tmp, "s-kass-raftery.png"), "rb").read()
+    b = open(os.path.join(tmp, "s-jeffreys.png"), "rb").read()
+    check("grades change the figure", a != b)
+    code, out, err = run("figure", demo, "--kind", "sensitivity", "--output",
+                         os.path.join(tmp, "x.png"), "--grades", "loud")
+    check("grades loud: exit 2", code == 2, f"{code} {err}")
+
 # --- bad usage ------------------------------------------------------------------------
 for args in [(), ("frobnicate",), ("analyse",), ("analyse", demo, "--colour")]:
     code, out, err = run(*args)
