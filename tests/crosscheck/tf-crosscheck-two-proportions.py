@@ -95,10 +95,18 @@ class Hyper:
         self.mode = min(self.hi, max(self.lo, ((na + 1) * (m + 1)) // (Nt + 2)))
         sd = math.sqrt(na * (m / Nt) * ((Nt - m) / Nt) * (nb / max(1, Nt - 1)))
         half = int(12 * sd + 1.5 * abs(x - self.mode) + 60)
-        self.too_wide = half > 10 ** 6
-        if self.too_wide:
-            return
-        self.w0, self.w1 = max(self.lo, self.mode - half), min(self.hi, self.mode + half)
+        lx = float(lC(na, x) + lC(nb, m - x) - lC(Nt, m))
+        while True:
+            # widen until both ends are support ends or 40 below the observed outcome,
+            # so that the far tail of a skewed distribution is inside
+            self.too_wide = half > 4 * 10 ** 6
+            if self.too_wide:
+                return
+            self.w0, self.w1 = max(self.lo, self.mode - half), min(self.hi, self.mode + half)
+            ends = [e for e in (self.w0, self.w1) if e not in (self.lo, self.hi)]
+            if all(float(lC(na, e) + lC(nb, m - e) - lC(Nt, m)) < lx - 40 for e in ends):
+                break
+            half *= 2
         j = np.arange(self.w0, self.w1, dtype=np.longdouble)   # ratios j -> j + 1
         lr = (np.log(np.longdouble(na) - j) + np.log(np.longdouble(m) - j)
               - np.log(j + 1) - np.log(np.longdouble(nb - m) + j + 1))
@@ -240,11 +248,18 @@ def beta_diff_ref(pa, qa, pb, qb, d):
     pts.add(1 - sgn * d)
     pts = sorted(p for p in pts if 0 < p < 1)
     over_a = sa <= sb
+    mirror = mv > 0.5        # integrate in y = 1 − v, whose density keeps its digits near 1
+    if mirror:
+        pts = sorted(1 - p for p in pts)
     out = []
     for lower in (True, False):
         want_lower = lower != over_a
-        f = (lambda v: st.beta.pdf(v, pv, qv) * (st.beta.cdf(v + sgn * d, po, qo) if want_lower
-                                                  else st.beta.sf(v + sgn * d, po, qo)))
+        if mirror:
+            f = (lambda y: st.beta.pdf(y, qv, pv) * (st.beta.cdf((1 - y) + sgn * d, po, qo) if want_lower
+                                                      else st.beta.sf((1 - y) + sgn * d, po, qo)))
+        else:
+            f = (lambda v: st.beta.pdf(v, pv, qv) * (st.beta.cdf(v + sgn * d, po, qo) if want_lower
+                                                      else st.beta.sf(v + sgn * d, po, qo)))
         tot = 0.0
         edges = [0.0] + pts + [1.0]
         for e0, e1 in zip(edges[:-1], edges[1:]):
