@@ -8,7 +8,7 @@ Random cases (fixed seed), trials log-uniform from 1 to 10^9 with the edges (k =
 k = n, n = 1) drawn on purpose, N per quantity (default 10^4; the normal-prior Bayes
 factor, whose reference sums scipy's noncentral hypergeometric, N/5 with margins to
 400; the difference's tails and quantiles, whose reference quadratures take ~1 s a
-case, N/50 and N/100). References, Debian 12: mpmath 1.2.1 at mp.dps = 40, scipy 1.10.1, numpy.
+case, N/100 and N/200). References, Debian 12: mpmath 1.2.1 at mp.dps = 40, scipy 1.10.1, numpy.
   lbf     ln BF01: the four ln B by mpmath.loggamma, 40 digits.      |Δ|/max(1,|r|) 1e-9
   hyper   ln pmf by mpmath.loggamma; ln cdf, ln sf by summing the pmf over a window of
           ±(12 SD + 1.5 |x − mode|) in extended precision (numpy longdouble
@@ -45,7 +45,7 @@ mp.mp.dps = 40
 rng = np.random.default_rng(20240611)
 N = int(sys.argv[2]) if len(sys.argv) > 2 else 10000
 # scipy's quad over boost's beta tails takes ~1 s a case at shapes of 1e9
-N_QUAD = max(20, N // 50)
+N_QUAD = max(20, N // 100)
 
 
 def draw_n(top=1e9):
