@@ -4,6 +4,7 @@
  * probability beside it) or a band (an interval null), with the Savage–Dickey heights.
  */
 #include <math.h>
+#include <string.h>
 #include <glib/gi18n-lib.h>
 #include "tf-figure-private.h"
 
@@ -157,7 +158,12 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
   else
     {
       g_autofree char *value = tf_fig_number (curves->null_value, 6);
-      null_label = g_strdup_printf ("<i>%s</i>₀ = %s", parameter, value);
+      /* "θ₀ = 0.8" for a single parameter; a compound one (θA − θB, ln(λA/λB))
+       * takes no subscript: "θA − θB = 0" */
+      if (strchr (parameter, '<') || strchr (parameter, ' ') || strchr (parameter, '('))
+        null_label = g_strdup_printf ("<i>%s</i> = %s", parameter, value);
+      else
+        null_label = g_strdup_printf ("<i>%s</i>₀ = %s", parameter, value);
     }
   if (isfinite (null_mass))
     {
@@ -339,12 +345,16 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
               cairo_stroke (cr);
             }
 
-          /* Savage–Dickey heights: both densities at the null value. */
-          tf_fig_marker (cr, &theme, area, TF_SERIES_PRIOR, curves->null_value,
-                         curves->prior_at_null, FALSE);
-          if (!spike_posterior)
-            tf_fig_marker (cr, &theme, area, TF_SERIES_POSTERIOR, curves->null_value,
-                           curves->posterior_at_null, TRUE);
+          /* Savage–Dickey heights: both densities at the null value, where the models
+           * nest (a design that leaves both at 0 has no such ratio). */
+          if (curves->prior_at_null > 0.0 || curves->posterior_at_null > 0.0)
+            {
+              tf_fig_marker (cr, &theme, area, TF_SERIES_PRIOR, curves->null_value,
+                             curves->prior_at_null, FALSE);
+              if (!spike_posterior)
+                tf_fig_marker (cr, &theme, area, TF_SERIES_POSTERIOR, curves->null_value,
+                               curves->posterior_at_null, TRUE);
+            }
         }
       else
         x = tf_plot_area_map_x (area, (curves->null_low + curves->null_high) / 2);
