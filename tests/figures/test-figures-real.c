@@ -74,7 +74,9 @@ check_pdf (const char *file, double width_mm, double height_mm)
   const char *line;
   double w, h;
 
-  if (!g_find_program_in_path ("pdfinfo"))
+  g_autofree char *pdfinfo = g_find_program_in_path ("pdfinfo");
+
+  if (pdfinfo == NULL)
     {
       g_test_message ("pdfinfo not found: page size not checked");
       return;
@@ -92,8 +94,9 @@ static void
 check_svg (const char *file)
 {
   const char *argv[] = { "xmllint", "--noout", file, NULL };
+  g_autofree char *xmllint = g_find_program_in_path ("xmllint");
 
-  if (!g_find_program_in_path ("xmllint"))
+  if (xmllint == NULL)
     {
       g_autofree char *text = NULL;
       g_assert_true (g_file_get_contents (file, &text, NULL, NULL));

@@ -138,6 +138,8 @@ static void
 canvas_init (Canvas *c, TfFigureStyle style)
 {
   c->surface = cairo_image_surface_create (CAIRO_FORMAT_RGB24, W, H);
+  /* freed when the test ends, after its pixel checks */
+  g_test_queue_destroy ((GDestroyNotify) cairo_surface_destroy, c->surface);
   c->cr = cairo_create (c->surface);
   c->options = (TfFigureOptions) TF_FIGURE_OPTIONS_INIT;
   c->options.style = style;
