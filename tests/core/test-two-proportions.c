@@ -10,25 +10,10 @@
 #include "tf-fisher.h"
 #include "tf-beta-difference.h"
 #include "tf-two-proportions.h"
+#include "tf-check.h"
 
 #include <math.h>
 #include <gsl/gsl_errno.h>
-
-static void
-assert_rel (double got, double want, double tol)
-{
-  if (!(fabs (got - want) <= tol * fabs (want)))
-    g_error ("got %.17g, want %.17g (relative tolerance %g)", got, want, tol);
-}
-
-static double
-get (const TfResults *r, const char *id)
-{
-  double v = NAN;
-  if (!tf_results_get (r, id, &v))
-    g_error ("result %s is missing or undefined", id);
-  return v;
-}
 
 static TfAnalysis *
 two_props (double ka, double na, double kb, double nb)
