@@ -235,7 +235,8 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
   double lp_fisher = tf_fisher_log_p (&h, ka, dir);
   const char *fisher_label = dir == TF_DIRECTION_TWO_SIDED ? _("Fisher's exact p-value")
                              : _("Fisher's exact p-value (one-sided)");
-  add_p (results, "p_value", fisher_label, lp_fisher);
+  /* the main test, named as such, like one proportion's "p-value (exact)" */
+  add_p (results, "p_value", _("p-value (Fisher's exact test)"), lp_fisher);
   add_p (results, "p_value_fisher", fisher_label, lp_fisher);
 
   /* Pearson's χ² (Pearson 1900) with and without Yates' correction (Yates 1934),
