@@ -20,8 +20,9 @@ G_DECLARE_FINAL_TYPE (TfResultList, tf_result_list, TF, RESULT_LIST, GtkWidget)
 GtkWidget *tf_result_list_new (void);
 
 /* Shows every number of results, one row each, except that the two limits of an
- * interval (ci_low and ci_high, cri_low and cri_high) share one row, titled with the
- * level of analysis and the interval's method. */
+ * interval ("<stem>_low" and "<stem>_high": ci, cri, hdi, wilson, or_ci, ...) share one
+ * row, titled with the level of the analysis, what the interval is of and its method;
+ * an interval that repeats one already shown (the same limits) reads back that row. */
 void tf_result_list_set_results (TfResultList *self, const TfAnalysis *analysis,
                                  const TfResults *results);
 /* Removes every number and shows a placeholder saying why (plain text). */

@@ -54,19 +54,25 @@ type_into (TfWindow *window, const char *group, const char *key, const char *tex
   iterate ();
 }
 
-/* The limits the list shows as one row: the other limit of id, or NULL. */
-static const char *
+/* The limits the list shows as one row ("<stem>_low" with "<stem>_high"): the other
+ * limit of id, or NULL. */
+static char *
 other_limit (const char *id, gboolean *is_low)
 {
-  static const char *const pairs[][2] = { { "ci_low", "ci_high" }, { "cri_low", "cri_high" } };
+  if (g_str_has_suffix (id, "_low"))
+    {
+      g_autofree char *stem = g_strndup (id, strlen (id) - 4);
 
-  for (guint i = 0; i < G_N_ELEMENTS (pairs); i++)
-    for (guint j = 0; j < 2; j++)
-      if (g_strcmp0 (id, pairs[i][j]) == 0)
-        {
-          *is_low = j == 0;
-          return pairs[i][1 - j];
-        }
+      *is_low = TRUE;
+      return g_strconcat (stem, "_high", NULL);
+    }
+  if (g_str_has_suffix (id, "_high"))
+    {
+      g_autofree char *stem = g_strndup (id, strlen (id) - 5);
+
+      *is_low = FALSE;
+      return g_strconcat (stem, "_low", NULL);
+    }
   return NULL;
 }
 
@@ -111,7 +117,7 @@ assert_list_shows (TfResultList *list, const TfResults *expected)
     {
       const TfNumber *number = g_ptr_array_index (expected->numbers, i);
       gboolean is_low = FALSE;
-      const char *other_id = other_limit (number->id, &is_low);
+      g_autofree char *other_id = other_limit (number->id, &is_low);
       const TfNumber *other = other_id ? tf_results_lookup (expected, other_id) : NULL;
 
       if (other)
@@ -1211,6 +1217,52 @@ test_result_list_intervals (void)
     assert_list_shows (list, lone);
     g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_low"), ==, "0.25");
     g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==, "Confidence interval, lower");
+  }
+
+  /* Each design's intervals, one row each, titled with what they are of and their
+   * published method; two proportions' diff_ci repeats its ci and shares its row. */
+  {
+    static const struct { TfDesign design; const char *id; const char *title; } titles[] = {
+      { TF_DESIGN_ONE_PROPORTION, "wilson_cc_low", "95% confidence interval (Wilson, continuity-\u2060corrected)" },
+      { TF_DESIGN_ONE_PROPORTION, "hdi_high", "95% credible interval (highest density)" },
+      { TF_DESIGN_ONE_PROPORTION, "agresti_coull_low", "95% confidence interval (Agresti–\u2060Coull)" },
+      { TF_DESIGN_TWO_PROPORTIONS, "ci_low", "95% confidence interval (Newcombe)" },
+      { TF_DESIGN_TWO_PROPORTIONS, "diff_ci_high", "95% confidence interval (Newcombe)" },
+      { TF_DESIGN_TWO_PROPORTIONS, "or_ci_low", "95% confidence interval of odds ratio (Woolf)" },
+      { TF_DESIGN_TWO_PROPORTIONS, "rr_ci_high", "95% confidence interval of risk ratio (Katz)" },
+      { TF_DESIGN_ONE_MEAN, "ci_low", "95% confidence interval (t)" },
+      { TF_DESIGN_ONE_MEAN, "cri_high", "95% credible interval of δ (equal-\u2060tailed)" },
+      { TF_DESIGN_ONE_MEAN, "effect_ci_low", "95% confidence interval of Cohen's d (noncentral t)" },
+      { TF_DESIGN_PAIRED_MEANS, "hdi_low", "95% credible interval of δ (highest density)" },
+      { TF_DESIGN_TWO_MEANS, "ci_high", "95% confidence interval (Student)" },
+      { TF_DESIGN_ONE_RATE, "ci_low", "95% confidence interval (Garwood)" },
+      { TF_DESIGN_TWO_RATES, "ci_low", "95% confidence interval (conditional Clopper–\u2060Pearson)" },
+    };
+
+    for (guint t = 0; t < G_N_ELEMENTS (titles); t++)
+      for (guint c = 0; c < G_N_ELEMENTS (design_cases); c++)
+        if (design_cases[c].design == titles[t].design)
+          {
+            g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
+            g_autoptr (TfResults) dr = compute_or_fail (dc);
+
+            dc->level = 0.95;
+            tf_result_list_set_results (list, dc, dr);
+            assert_list_shows (list, dr);
+            g_assert_cmpstr (tf_result_list_get_title (list, titles[t].id), ==, titles[t].title);
+          }
+    /* the last case was two rates; two proportions again: the repeated interval reads
+     * back the very row of its ci (the same title string), not a second row */
+    for (guint c = 0; c < G_N_ELEMENTS (design_cases); c++)
+      if (design_cases[c].design == TF_DESIGN_TWO_PROPORTIONS)
+        {
+          g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
+          g_autoptr (TfResults) dr = compute_or_fail (dc);
+
+          tf_result_list_set_results (list, dc, dr);
+          g_assert_true (tf_result_list_get_title (list, "ci_low")
+                         == tf_result_list_get_title (list, "diff_ci_low"));
+        }
   }
 
   /* Cleared, nothing is left to read back. */
