@@ -28,6 +28,29 @@ tf_plot_area_unmap_x (const TfPlotArea *area, double x)
   return area->x_log ? pow (10.0, c) : c;
 }
 
+const TfPlotArea *
+tf_figure_panels_at (const TfFigurePanels *panels, double x, double y)
+{
+  const TfPlotArea *first, *best = NULL;
+  double best_d = INFINITY;
+
+  if (panels == NULL || panels->n == 0)
+    return NULL;
+  first = &panels->area[0];
+  if (y < first->y || x < first->x || x > first->x + first->width)
+    return NULL;
+  for (guint i = 0; i < panels->n && i < TF_FIGURE_PANELS_MAX; i++)
+    {
+      const TfPlotArea *a = &panels->area[i];
+      double d = y < a->y ? a->y - y : y > a->y + a->height ? y - a->y - a->height : 0;
+
+      /* the nearest: below them all, the lowest */
+      if (d < best_d)
+        best = a, best_d = d;
+    }
+  return best;
+}
+
 /* Heckbert (1990), "Nice numbers for graph labels", Graphics Gems I, pp. 61-63. */
 double
 tf_nice_number (double x, gboolean round)

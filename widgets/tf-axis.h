@@ -16,7 +16,21 @@ struct _TfPlotArea {
   double x_lo, x_hi;
   double y_lo, y_hi;
   gboolean x_log, y_log;
+  guint panel;                  /* which of the figure's panels, 0 the top one */
 };
+
+/* Every plot area of one figure, top to bottom: one, or two sharing x (the sensitivity
+ * and sample-size figures: the Bayes factor above P(H0 | data)). */
+#define TF_FIGURE_PANELS_MAX 2
+struct _TfFigurePanels {
+  guint n;
+  TfPlotArea area[TF_FIGURE_PANELS_MAX];
+};
+
+/* The panel at (x, y), user units: the one whose height holds y, the nearer one in a gap
+ * between two, the lowest one below them all (over its x axis). NULL above the top one
+ * and left or right of the plot areas. */
+const TfPlotArea *tf_figure_panels_at (const TfFigurePanels *panels, double x, double y);
 
 /* The data value at user-unit column x (10^coordinate on a log axis). */
 double tf_plot_area_unmap_x (const TfPlotArea *area, double x);

@@ -144,10 +144,10 @@ label_beside (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
   tf_fig_text_halo (cr, theme, &theme->foreground, theme->text_size, markup, x, y);
 }
 
-static gboolean
-draw_evidence (cairo_t *cr, double width, double height, double scale,
-               const TfEvidenceCurve *curve, const TfFigureOptions *options,
-               gboolean sample_size, TfPlotArea *area_out)
+gboolean
+tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
+                      const TfEvidenceCurve *curve, const TfFigureOptions *options,
+                      gboolean sample_size, TfFigurePanels *panels_out)
 {
   const TfFigureOptions *opt = tf_fig_options (options);
   TfFigureTheme theme;
@@ -169,6 +169,8 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
   Grade g[8];
   guint n_grades;
 
+  if (panels_out)
+    panels_out->n = 0;
   tf_figure_theme_init (&theme, opt->style, scale);
   pad = tf_figure_theme_pt (&theme, TF_FIG_PAD_PT);
   gap = tf_figure_theme_pt (&theme, 3.0);
@@ -275,6 +277,7 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
   low_area.y_lo = p_ticks.lo;
   low_area.y_hi = p_ticks.hi;
   low_area.y_log = FALSE;
+  low_area.panel = 1;
 
   /* Reference lines under the data. */
   draw_grades (cr, &theme, &top_area, opt->evidence_scale);
@@ -365,12 +368,30 @@ draw_evidence (cairo_t *cr, double width, double height, double scale,
   tf_axis_draw_bottom (cr, &theme, &low_area, &x_ticks, x_label);
   tf_axis_draw_left (cr, &theme, &low_area, &p_ticks, p_label);
 
-  if (area_out)
-    *area_out = top_area;
+  if (panels_out)
+    {
+      panels_out->n = 2;
+      panels_out->area[0] = top_area;
+      panels_out->area[1] = low_area;
+    }
   tf_fig_points_clear (&bf_line);
   tf_fig_points_clear (&p_line);
   cairo_restore (cr);
   return TRUE;
+}
+
+static gboolean
+draw_upper (cairo_t *cr, double width, double height, double scale,
+            const TfEvidenceCurve *curve, const TfFigureOptions *options,
+            gboolean sample_size, TfPlotArea *area_out)
+{
+  TfFigurePanels panels;
+  gboolean ok = tf_fig_draw_evidence (cr, width, height, scale, curve, options, sample_size,
+                                      &panels);
+
+  if (ok && area_out)
+    *area_out = panels.area[0];
+  return ok;
 }
 
 gboolean
@@ -378,7 +399,7 @@ tf_figure_draw_sensitivity (cairo_t *cr, double width, double height, double sca
                             const TfEvidenceCurve *curve, const TfFigureOptions *options,
                             TfPlotArea *area_out)
 {
-  return draw_evidence (cr, width, height, scale, curve, options, FALSE, area_out);
+  return draw_upper (cr, width, height, scale, curve, options, FALSE, area_out);
 }
 
 gboolean
@@ -386,5 +407,5 @@ tf_figure_draw_sample_size (cairo_t *cr, double width, double height, double sca
                             const TfEvidenceCurve *curve, const TfFigureOptions *options,
                             TfPlotArea *area_out)
 {
-  return draw_evidence (cr, width, height, scale, curve, options, TRUE, area_out);
+  return draw_upper (cr, width, height, scale, curve, options, TRUE, area_out);
 }

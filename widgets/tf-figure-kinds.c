@@ -204,31 +204,56 @@ tf_figure_get_kind (const TfFigure *figure)
 }
 
 gboolean
-tf_figure_draw (const TfFigure *figure, cairo_t *cr, double width, double height,
-                double scale, const TfFigureOptions *options, TfPlotArea *area_out)
+tf_figure_draw_panels (const TfFigure *figure, cairo_t *cr, double width, double height,
+                       double scale, const TfFigureOptions *options, TfFigurePanels *panels_out)
 {
+  TfFigurePanels panels = { 0 };
+  TfPlotArea *one = &panels.area[0];
+  gboolean ok = FALSE;
+
   g_return_val_if_fail (figure != NULL, FALSE);
   switch (figure->kind)
     {
     case TF_FIGURE_DENSITIES:
-      return tf_figure_draw_density_curves (cr, width, height, scale, figure->densities,
-                                            figure->null_mass, options, area_out);
+      ok = tf_figure_draw_density_curves (cr, width, height, scale, figure->densities,
+                                          figure->null_mass, options, one);
+      break;
     case TF_FIGURE_SENSITIVITY:
-      return tf_figure_draw_sensitivity (cr, width, height, scale, figure->evidence, options,
-                                         area_out);
     case TF_FIGURE_SAMPLE_SIZE:
-      return tf_figure_draw_sample_size (cr, width, height, scale, figure->evidence, options,
-                                         area_out);
+      ok = tf_fig_draw_evidence (cr, width, height, scale, figure->evidence, options,
+                                 figure->kind == TF_FIGURE_SAMPLE_SIZE, &panels);
+      break;
     case TF_FIGURE_NULL_DISTRIBUTION:
-      return tf_figure_draw_null_distribution (cr, width, height, scale,
-                                               figure->null_distribution, options, area_out);
+      ok = tf_figure_draw_null_distribution (cr, width, height, scale,
+                                             figure->null_distribution, options, one);
+      break;
     case TF_FIGURE_MODEL_PROBABILITIES:
-      return tf_figure_draw_model_probabilities (cr, width, height, scale, figure->models,
-                                                 options, area_out);
+      ok = tf_figure_draw_model_probabilities (cr, width, height, scale, figure->models,
+                                               options, one);
+      break;
     case TF_N_FIGURE_KINDS:
     default:
-      return FALSE;
+      break;
     }
+  if (ok && panels.n == 0)
+    panels.n = 1;
+  if (!ok)
+    panels.n = 0;
+  if (panels_out)
+    *panels_out = panels;
+  return ok;
+}
+
+gboolean
+tf_figure_draw (const TfFigure *figure, cairo_t *cr, double width, double height,
+                double scale, const TfFigureOptions *options, TfPlotArea *area_out)
+{
+  TfFigurePanels panels;
+  gboolean ok = tf_figure_draw_panels (figure, cr, width, height, scale, options, &panels);
+
+  if (ok && area_out)
+    *area_out = panels.area[0];
+  return ok;
 }
 
 gboolean
@@ -271,6 +296,19 @@ nearest (const double *grid, guint n, double x)
   return x - grid[lo] <= grid[hi] - x ? lo : hi;
 }
 
+/* One value of the reading, and where it is drawn in area (y a coordinate of its axis). */
+static void
+add_value (TfFigureReading *reading, const TfPlotArea *area, const char *name, double value,
+           double y)
+{
+  guint i = reading->n++;
+  double lo = MIN (area->y_lo, area->y_hi), hi = MAX (area->y_lo, area->y_hi);
+
+  reading->names[i] = name;
+  reading->values[i] = value;
+  reading->y[i] = isfinite (y) && y >= lo && y <= hi ? tf_plot_area_map_y (area, y) : NAN;
+}
+
 gboolean
 tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
                    TfFigureReading *reading)
@@ -285,32 +323,31 @@ tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
   x = tf_plot_area_unmap_x (area, px);
   reading->x = x;
   reading->x_markup = figure->x_markup;
+  reading->panel = area->panel;
   switch (figure->kind)
     {
     case TF_FIGURE_DENSITIES:
       {
         const TfDensityCurves *c = figure->densities;
         i = nearest (c->x, c->n, x);
-        reading->names[0] = _("posterior");
-        reading->values[0] = c->posterior[i];
-        reading->names[1] = _("prior");
-        reading->values[1] = c->prior[i];
-        reading->names[2] = _("likelihood, scaled");
-        reading->values[2] = c->likelihood[i];
-        reading->n = 3;
+        add_value (reading, area, _("posterior"), c->posterior[i], c->posterior[i]);
+        add_value (reading, area, _("prior"), c->prior[i], c->prior[i]);
+        add_value (reading, area, _("likelihood, scaled"), c->likelihood[i], c->likelihood[i]);
       }
       return TRUE;
     case TF_FIGURE_SENSITIVITY:
     case TF_FIGURE_SAMPLE_SIZE:
       {
+        /* the Bayes factor above (log10 on its axis), P(H0 | data) below */
         const TfEvidenceCurve *c = figure->evidence;
         i = nearest (c->x, c->n, x);
         reading->x = c->x[i];
-        reading->names[0] = "BF<sub>01</sub>";
-        reading->values[0] = exp (c->log_bf01[i]);
-        reading->names[1] = _("P(H₀ | data)");
-        reading->values[1] = c->posterior_null[i];
-        reading->n = 2;
+        if (area->panel == 0)
+          add_value (reading, area, "BF<sub>01</sub>", exp (c->log_bf01[i]),
+                     c->log_bf01[i] / G_LN10);
+        else
+          add_value (reading, area, _("P(H₀ | data)"), c->posterior_null[i],
+                     c->posterior_null[i]);
       }
       return TRUE;
     case TF_FIGURE_NULL_DISTRIBUTION:
@@ -318,9 +355,8 @@ tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
         const TfNullDistribution *d = figure->null_distribution;
         i = nearest (d->x, d->n, x);
         reading->x = d->x[i];
-        reading->names[0] = d->discrete ? _("probability") : _("density");
-        reading->values[0] = d->mass[i];
-        reading->n = 1;
+        add_value (reading, area, d->discrete ? _("probability") : _("density"), d->mass[i],
+                   d->mass[i]);
       }
       return TRUE;
     case TF_FIGURE_MODEL_PROBABILITIES:
@@ -328,6 +364,21 @@ tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
     default:
       return FALSE;
     }
+}
+
+gboolean
+tf_figure_read_at_point (const TfFigure *figure, const TfFigurePanels *panels, double px,
+                         double py, TfFigureReading *reading)
+{
+  const TfPlotArea *area = tf_figure_panels_at (panels, px, py);
+
+  g_return_val_if_fail (figure != NULL && reading != NULL, FALSE);
+  if (area == NULL)
+    {
+      memset (reading, 0, sizeof *reading);
+      return FALSE;
+    }
+  return tf_figure_read_at (figure, area, px, reading);
 }
 
 char *

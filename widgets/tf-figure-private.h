@@ -76,4 +76,9 @@ void tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width
                            const char *y_label, double x_lo, double x_hi, gboolean x_log,
                            double y_lo, double y_hi, TfFigLayout *out);
 
+/* The sensitivity (sample_size FALSE) or sample-size figure, with both panels' areas. */
+gboolean tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
+                               const TfEvidenceCurve *curve, const TfFigureOptions *options,
+                               gboolean sample_size, TfFigurePanels *panels_out);
+
 G_END_DECLS

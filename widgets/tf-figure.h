@@ -46,8 +46,9 @@ typedef struct {
 
 #define TF_FIGURE_OPTIONS_INIT { TF_FIGURE_STYLE_LIGHT, TF_EVIDENCE_SCALE_KASS_RAFTERY }
 
-/* Where a figure put its data (see tf-axis.h). */
+/* Where a figure put its data (see tf-axis.h): one plot area, and all of a figure's. */
 typedef struct _TfPlotArea TfPlotArea;
+typedef struct _TfFigurePanels TfFigurePanels;
 
 const char *tf_figure_kind_to_string (TfFigureKind kind);      /* "sample-size" */
 gboolean tf_figure_kind_from_string (const char *name, TfFigureKind *kind);
@@ -70,6 +71,11 @@ TfFigureKind tf_figure_get_kind (const TfFigure *figure);
  * share x). Returns FALSE when there was nothing to draw (a message is drawn). */
 gboolean tf_figure_draw (const TfFigure *figure, cairo_t *cr, double width, double height,
                          double scale, const TfFigureOptions *options, TfPlotArea *area_out);
+/* The same, with every panel's plot area and axis ranges, top to bottom (n = 0 when
+ * nothing was drawn). */
+gboolean tf_figure_draw_panels (const TfFigure *figure, cairo_t *cr, double width,
+                                double height, double scale, const TfFigureOptions *options,
+                                TfFigurePanels *panels_out);
 
 /* tf_figure_new() and tf_figure_draw() at once; when the kind does not apply, draws the
  * reason in the box and returns FALSE with *why_not set. */
@@ -82,21 +88,29 @@ gboolean tf_figure_draw_kind (cairo_t *cr, TfFigureKind kind, double width, doub
 void tf_figure_draw_message (cairo_t *cr, double width, double height, double scale,
                              TfFigureStyle style, const char *title, const char *reason);
 
-/* The crosshair readout: what the curves show at pixel column px (user units, in the
- * area tf_figure_draw() returned). Returns FALSE when px is outside the plot area or the
- * kind has no x to read (model probabilities). names are Pango markup owned by the
- * library; values are the curves' values at the nearest grid point. */
+/* The crosshair readout: what the curves of one panel show at column px (user units).
+ * area is one of the panels tf_figure_draw_panels() returned (tf_figure_draw()'s, the
+ * top one): the curves drawn in it are read, on its axes. Returns FALSE when px is
+ * outside the plot area or the kind has no x to read (model probabilities). names are
+ * Pango markup owned by the library; values are the curves' values at the nearest grid
+ * point, and y where each is drawn in that panel (user units; NAN off the panel). */
 #define TF_FIGURE_READING_MAX 4
 typedef struct {
   double x;                                 /* the parameter, scale, n or statistic */
   const char *x_markup;                     /* its name */
+  guint panel;                              /* the panel read, 0 the top one */
   guint n;
   const char *names[TF_FIGURE_READING_MAX];
   double values[TF_FIGURE_READING_MAX];
+  double y[TF_FIGURE_READING_MAX];
 } TfFigureReading;
 
 gboolean tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
                             TfFigureReading *reading);
+/* The readout under the pointer at (px, py): the curves of the panel there
+ * (tf_figure_panels_at()), read by tf_figure_read_at(). FALSE where there is none. */
+gboolean tf_figure_read_at_point (const TfFigure *figure, const TfFigurePanels *panels,
+                                  double px, double py, TfFigureReading *reading);
 /* "θ = 0.412   posterior 3.05   prior 1.00 ...": one line of markup. Free with g_free. */
 char *tf_figure_reading_markup (const TfFigureReading *reading);
 

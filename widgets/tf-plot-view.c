@@ -9,6 +9,8 @@
  * so that moving the pointer redraws one line and not the figure. The readout label
  * takes no pointer events (it cannot make the pointer "leave" the plot and flicker) and
  * sits beside the line just above the plot area, never over the data under the pointer.
+ * In a figure of two panels the readout is of the panel under the pointer, on its axes
+ * (tf_figure_read_at_point()), and a dot marks each value read on its curve.
  */
 #include <math.h>
 #include <glib/gi18n-lib.h>
@@ -46,8 +48,9 @@ struct _TfPlotView
   char *why_not;                /* why the kind does not apply, or NULL */
   guint n_computed;
 
-  TfPlotArea area;              /* where the last drawing put its data */
+  TfFigurePanels panels;        /* where the last drawing put its data, top to bottom */
   gboolean area_valid;          /* drawn since the figure or the size changed */
+  TfFigureReading reading;      /* what the readout shows, while it does */
 
   gboolean pointer_in;
   double pointer_x, pointer_y;
@@ -109,11 +112,10 @@ update_readout (TfPlotView *self)
   g_autofree char *markup = NULL;
   g_autofree char *text = NULL;
 
-  /* below the top of the plot area: a figure of two panels reports the upper one, and
-   * the lower one shares its x */
+  /* the panel under the pointer, read on its own axes */
   if (!self->pointer_in || self->figure == NULL || !self->area_valid
-      || self->pointer_y < self->area.y
-      || !tf_figure_read_at (self->figure, &self->area, self->pointer_x, &reading))
+      || !tf_figure_read_at_point (self->figure, &self->panels, self->pointer_x,
+                                   self->pointer_y, &reading))
     {
       hide_readout (self);
       return;
@@ -128,6 +130,7 @@ update_readout (TfPlotView *self)
       g_free (self->readout_markup);
       self->readout_markup = g_steal_pointer (&markup);
     }
+  self->reading = reading;
   gtk_widget_set_visible (GTK_WIDGET (self->readout), TRUE);
   gtk_widget_set_visible (GTK_WIDGET (self->crosshair), TRUE);
   /* the line and the label follow the pointer even within one grid step */
@@ -172,30 +175,42 @@ draw_figure (GtkDrawingArea *area, cairo_t *cr, int width, int height, gpointer 
     return;
   options.style = current_style (self);
   if (self->figure)
-    self->area_valid = tf_figure_draw (self->figure, cr, width, height, PIXELS_PER_POINT,
-                                       &options, &self->area);
+    self->area_valid = tf_figure_draw_panels (self->figure, cr, width, height,
+                                              PIXELS_PER_POINT, &options, &self->panels);
   else
     tf_figure_draw_message (cr, width, height, PIXELS_PER_POINT, options.style,
                             _("Nothing to draw"), self->why_not);
 }
 
+/* A thin line through every panel (they share x), on the pixel grid so that it stays
+ * one sharp pixel wide, and a dot on each curve read in the panel under the pointer. */
 static void
 draw_crosshair (GtkDrawingArea *area, cairo_t *cr, int width, int height, gpointer user_data)
 {
   TfPlotView *self = TF_PLOT_VIEW (user_data);
+  const TfPlotArea *top = &self->panels.area[0];
+  const TfPlotArea *bottom = &self->panels.area[MAX (self->panels.n, 1) - 1];
   TfFigureTheme theme;
   double x;
 
   if (self->readout_markup == NULL || !self->area_valid)
     return;
   tf_figure_theme_init (&theme, current_style (self), PIXELS_PER_POINT);
-  /* a thin line on the pixel grid, so that it stays one sharp pixel wide */
-  x = floor (CLAMP (self->pointer_x, self->area.x, self->area.x + self->area.width)) + 0.5;
+  x = floor (CLAMP (self->pointer_x, top->x, top->x + top->width)) + 0.5;
   tf_figure_theme_set_source_alpha (cr, &theme.foreground, 0.55);
   cairo_set_line_width (cr, 1.0);
-  cairo_move_to (cr, x, self->area.y);
-  cairo_line_to (cr, x, self->area.y + self->area.height);
+  cairo_move_to (cr, x, top->y);
+  cairo_line_to (cr, x, bottom->y + bottom->height);
   cairo_stroke (cr);
+  for (guint i = 0; i < self->reading.n; i++)
+    if (isfinite (self->reading.y[i]))
+      {
+        cairo_arc (cr, x, self->reading.y[i], 3.0, 0, 2 * G_PI);
+        tf_figure_theme_set_source (cr, &theme.background);
+        cairo_fill_preserve (cr);
+        tf_figure_theme_set_source (cr, &theme.foreground);
+        cairo_stroke (cr);
+      }
 }
 
 /* The readout beside the crosshair, on the side with room, and just above the plot area
@@ -220,7 +235,7 @@ on_get_child_position (GtkOverlay *overlay, GtkWidget *child, GdkRectangle *allo
     x = line - READOUT_GAP_X - w;
   else
     x = CLAMP (line - w / 2, 0, width - w);
-  y = (int) floor (self->area.y) - h - READOUT_GAP_Y;
+  y = (int) floor (self->panels.area[0].y) - h - READOUT_GAP_Y;
   y = CLAMP (y, 0, MAX (height - h, 0));
   *allocation = (GdkRectangle) { x, y, w, h };
   return TRUE;
@@ -541,7 +556,16 @@ tf_plot_view_get_plot_area_for_test (TfPlotView *self, TfPlotArea *area)
 {
   g_return_val_if_fail (TF_IS_PLOT_VIEW (self), FALSE);
   if (self->area_valid && area)
-    *area = self->area;
+    *area = self->panels.area[0];
+  return self->area_valid;
+}
+
+gboolean
+tf_plot_view_get_panels_for_test (TfPlotView *self, TfFigurePanels *panels)
+{
+  g_return_val_if_fail (TF_IS_PLOT_VIEW (self), FALSE);
+  if (self->area_valid && panels)
+    *panels = self->panels;
   return self->area_valid;
 }
 

@@ -36,11 +36,12 @@ const char *tf_plot_view_get_readout_markup (TfPlotView *self);
 const char *tf_plot_view_get_description (TfPlotView *self);
 
 /* For the tests. The pointer at x, y in the plot's coordinates, as a motion event would
- * put it (NAN: the pointer left). The plot area of the last drawing: FALSE when the
- * figure has not been drawn at the current size yet. How many times curves were
+ * put it (NAN: the pointer left). The plot area of the last drawing (the top panel's),
+ * and all its panels: FALSE when the figure has not been drawn at the current size yet. How many times curves were
  * computed since the view was made. */
 void tf_plot_view_set_pointer_for_test (TfPlotView *self, double x, double y);
 gboolean tf_plot_view_get_plot_area_for_test (TfPlotView *self, TfPlotArea *area);
+gboolean tf_plot_view_get_panels_for_test (TfPlotView *self, TfFigurePanels *panels);
 guint tf_plot_view_get_n_computed_for_test (TfPlotView *self);
 GtkWidget *tf_plot_view_get_kind_chooser_for_test (TfPlotView *self);
 
