@@ -1,7 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-analysis-file.c: reading and writing *.twofold analysis files (DESIGN.md).
  */
-#include "tf-analysis-file.h"
+#include "tf-analysis-file-private.h"
 
 #include <errno.h>
 #include <glib/gi18n-lib.h>
@@ -48,14 +48,14 @@ tf_format_double (double value)
   return g_strdup (buffer);
 }
 
-typedef struct {
-  GKeyFile *key_file;
-  GPtrArray *problems;
-  guint n_before;
-} Reader;
+gboolean
+tf_reader_has (TfReader *r, const char *group, const char *key)
+{
+  return g_key_file_has_key (r->key_file, group, key, NULL);
+}
 
-static char *
-reader_string (Reader *r, const char *group, const char *key)
+char *
+tf_reader_string (TfReader *r, const char *group, const char *key)
 {
   g_autofree char *raw = g_key_file_get_value (r->key_file, group, key, NULL);
 
@@ -63,11 +63,11 @@ reader_string (Reader *r, const char *group, const char *key)
 }
 
 /* A number in C notation; missing keys take the default when optional. */
-static double
-reader_number (Reader *r, const char *group, const char *key, gboolean required,
+double
+tf_reader_number (TfReader *r, const char *group, const char *key, gboolean required,
                double fallback)
 {
-  g_autofree char *text = reader_string (r, group, key);
+  g_autofree char *text = tf_reader_string (r, group, key);
   char *end = NULL;
   double value;
 
@@ -106,10 +106,10 @@ reader_number (Reader *r, const char *group, const char *key, gboolean required,
 }
 
 /* A list of numbers separated by ';' (DESIGN.md), each item checked like a number. */
-static GArray *
-reader_list (Reader *r, const char *group, const char *key)
+GArray *
+tf_reader_list (TfReader *r, const char *group, const char *key)
 {
-  g_autofree char *text = reader_string (r, group, key);
+  g_autofree char *text = tf_reader_string (r, group, key);
   g_auto (GStrv) items = NULL;
   g_autoptr (GArray) values = NULL;
   guint count = 0;
@@ -149,10 +149,10 @@ reader_list (Reader *r, const char *group, const char *key)
   return g_steal_pointer (&values);
 }
 
-static gboolean
-reader_boolean (Reader *r, const char *group, const char *key, gboolean fallback)
+gboolean
+tf_reader_boolean (TfReader *r, const char *group, const char *key, gboolean fallback)
 {
-  g_autofree char *text = reader_string (r, group, key);
+  g_autofree char *text = tf_reader_string (r, group, key);
 
   if (text == NULL)
     return fallback;
@@ -167,10 +167,10 @@ reader_boolean (Reader *r, const char *group, const char *key, gboolean fallback
 
 /* One of a list of words. */
 static void
-reader_word (Reader *r, const char *group, const char *key, gboolean required,
+reader_word (TfReader *r, const char *group, const char *key, gboolean required,
              gboolean (*parse) (const char *, int *), int *out, const char *allowed)
 {
-  g_autofree char *text = reader_string (r, group, key);
+  g_autofree char *text = tf_reader_string (r, group, key);
 
   if (text == NULL)
     {
@@ -196,16 +196,16 @@ WORD_PARSER (parse_null_kind, TfNullKind, tf_null_kind_from_string)
  * equal priors when absent). The ranges and the sum are checked by the design's
  * validation, so that an analysis made in code is held to them too. */
 static void
-read_models (Reader *r, TfAnalysis *a)
+read_models (TfReader *r, TfAnalysis *a)
 {
-  g_autofree char *text = reader_string (r, "Models", "Set");
+  g_autofree char *text = tf_reader_string (r, "Models", "Set");
   g_auto (GStrv) words = NULL;
   g_autoptr (GArray) priors = NULL;
   guint n = 0;
 
   if (text == NULL)
     {
-      if (g_key_file_has_key (r->key_file, "Models", "Priors", NULL))
+      if (tf_reader_has (r, "Models", "Priors"))
         g_ptr_array_add (r->problems,
                          tf_problem_new ("Models", "Priors",
                                          _("Priors gives the prior probabilities of a model set; name the models in Set.")));
@@ -244,8 +244,8 @@ read_models (Reader *r, TfAnalysis *a)
         }
       a->models[n++] = model;
     }
-  priors = reader_list (r, "Models", "Priors");
-  if (priors == NULL && g_key_file_has_key (r->key_file, "Models", "Priors", NULL))
+  priors = tf_reader_list (r, "Models", "Priors");
+  if (priors == NULL && tf_reader_has (r, "Models", "Priors"))
     return;  /* the list's problem is already reported */
   if (priors != NULL && priors->len != n)
     {
@@ -278,95 +278,15 @@ write_models (GKeyFile *key_file, const TfAnalysis *a)
   g_key_file_set_value (key_file, "Models", "Priors", priors->str);
 }
 
-/* The three summary keys of a sample: its size, mean and SD. */
-static void
-read_summaries (Reader *r, const char *n_key, const char *mean_key, const char *sd_key,
-                        double *n, double *mean, double *sd)
-{
-  *n = reader_number (r, "Data", n_key, TRUE, *n);
-  *mean = reader_number (r, "Data", mean_key, TRUE, *mean);
-  *sd = reader_number (r, "Data", sd_key, TRUE, *sd);
-}
-
-static void
-read_data (Reader *r, TfAnalysis *a)
-{
-  switch (a->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      a->successes = reader_number (r, "Data", "Successes", TRUE, a->successes);
-      a->trials = reader_number (r, "Data", "Trials", TRUE, a->trials);
-      break;
-    case TF_DESIGN_TWO_PROPORTIONS:
-      a->successes_a = reader_number (r, "Data", "SuccessesA", TRUE, a->successes_a);
-      a->trials_a = reader_number (r, "Data", "TrialsA", TRUE, a->trials_a);
-      a->successes_b = reader_number (r, "Data", "SuccessesB", TRUE, a->successes_b);
-      a->trials_b = reader_number (r, "Data", "TrialsB", TRUE, a->trials_b);
-      break;
-    case TF_DESIGN_ONE_MEAN:
-      if (g_key_file_has_key (r->key_file, "Data", "Values", NULL))
-        tf_analysis_set_values (&a->values, reader_list (r, "Data", "Values"));
-      else
-        read_summaries (r, "N", "Mean", "SD", &a->n, &a->mean, &a->sd);
-      if (g_key_file_has_key (r->key_file, "Data", "KnownSD", NULL))
-        {
-          a->has_known_sd = TRUE;
-          a->known_sd = reader_number (r, "Data", "KnownSD", TRUE, 1.0);
-        }
-      break;
-    case TF_DESIGN_PAIRED_MEANS:
-      if (g_key_file_has_key (r->key_file, "Data", "ValuesA", NULL)
-          || g_key_file_has_key (r->key_file, "Data", "ValuesB", NULL))
-        {
-          tf_analysis_set_values (&a->values_a, reader_list (r, "Data", "ValuesA"));
-          tf_analysis_set_values (&a->values_b, reader_list (r, "Data", "ValuesB"));
-          if (!g_key_file_has_key (r->key_file, "Data", "ValuesA", NULL))
-            g_ptr_array_add (r->problems, tf_problem_new ("Data", "ValuesA",
-                                                          _("ValuesB is given, so ValuesA is needed too.")));
-          if (!g_key_file_has_key (r->key_file, "Data", "ValuesB", NULL))
-            g_ptr_array_add (r->problems, tf_problem_new ("Data", "ValuesB",
-                                                          _("ValuesA is given, so ValuesB is needed too.")));
-        }
-      else
-        read_summaries (r, "N", "MeanDiff", "SDDiff", &a->n, &a->mean, &a->sd);
-      break;
-    case TF_DESIGN_TWO_MEANS:
-      if (g_key_file_has_key (r->key_file, "Data", "ValuesA", NULL))
-        tf_analysis_set_values (&a->values_a, reader_list (r, "Data", "ValuesA"));
-      else
-        read_summaries (r, "NA", "MeanA", "SDA", &a->n_a, &a->mean_a, &a->sd_a);
-      if (g_key_file_has_key (r->key_file, "Data", "ValuesB", NULL))
-        tf_analysis_set_values (&a->values_b, reader_list (r, "Data", "ValuesB"));
-      else
-        read_summaries (r, "NB", "MeanB", "SDB", &a->n_b, &a->mean_b, &a->sd_b);
-      a->equal_variances = reader_boolean (r, "Data", "EqualVariances", a->equal_variances);
-      break;
-    case TF_DESIGN_ONE_RATE:
-      a->events = reader_number (r, "Data", "Events", TRUE, a->events);
-      a->exposure = reader_number (r, "Data", "Exposure", TRUE, a->exposure);
-      break;
-    case TF_DESIGN_TWO_RATES:
-      a->events_a = reader_number (r, "Data", "EventsA", TRUE, a->events_a);
-      a->exposure_a = reader_number (r, "Data", "ExposureA", TRUE, a->exposure_a);
-      a->events_b = reader_number (r, "Data", "EventsB", TRUE, a->events_b);
-      a->exposure_b = reader_number (r, "Data", "ExposureB", TRUE, a->exposure_b);
-      break;
-    case TF_N_DESIGNS:
-    default:
-      break;
-    }
-  tf_analysis_summarise_values (a);
-}
-
 TfAnalysis *
 tf_analysis_from_key_file (GKeyFile *key_file, GPtrArray *problems)
 {
-  Reader r = { key_file, problems, problems->len };
+  TfReader r = { key_file, problems, problems->len };
   g_autoptr (TfAnalysis) a = NULL;
   int design = TF_DESIGN_ONE_PROPORTION, word;
   double format;
 
-  format = reader_number (&r, "Analysis", "Format", TRUE, TF_ANALYSIS_FORMAT);
+  format = tf_reader_number (&r, "Analysis", "Format", TRUE, TF_ANALYSIS_FORMAT);
   if (problems->len == r.n_before && format != TF_ANALYSIS_FORMAT)
     g_ptr_array_add (problems,
                      tf_problem_new ("Analysis", "Format",
@@ -383,21 +303,21 @@ tf_analysis_from_key_file (GKeyFile *key_file, GPtrArray *problems)
     tf_analysis_set_title (a, title ? g_strstrip (title) : NULL);
   }
 
-  read_data (&r, a);
+  tf_analysis_read_data (&r, a);
 
   word = a->null_kind;
   reader_word (&r, "Null", "Kind", FALSE, parse_null_kind, &word, "point, interval");
   a->null_kind = (TfNullKind) word;
   if (a->null_kind == TF_NULL_POINT)
-    a->null_value = reader_number (&r, "Null", "Value",
+    a->null_value = tf_reader_number (&r, "Null", "Value",
                                    a->design == TF_DESIGN_ONE_PROPORTION
                                    || a->design == TF_DESIGN_ONE_MEAN
                                    || a->design == TF_DESIGN_ONE_RATE,
                                    a->null_value);
   else
     {
-      a->null_low = reader_number (&r, "Null", "Low", TRUE, a->null_low);
-      a->null_high = reader_number (&r, "Null", "High", TRUE, a->null_high);
+      a->null_low = tf_reader_number (&r, "Null", "Low", TRUE, a->null_low);
+      a->null_high = tf_reader_number (&r, "Null", "High", TRUE, a->null_high);
     }
 
   word = a->direction;
@@ -408,15 +328,15 @@ tf_analysis_from_key_file (GKeyFile *key_file, GPtrArray *problems)
   reader_word (&r, "Alternative", "Prior", FALSE, parse_prior, &word,
                "beta, normal, cauchy, gamma");
   a->prior = (TfPriorFamily) word;
-  a->prior_a = reader_number (&r, "Alternative", "PriorA", FALSE, a->prior_a);
-  a->prior_b = reader_number (&r, "Alternative", "PriorB", FALSE, a->prior_b);
-  a->prior_scale = reader_number (&r, "Alternative", "PriorScale", FALSE, a->prior_scale);
-  a->prior_shape = reader_number (&r, "Alternative", "PriorShape", FALSE, a->prior_shape);
-  a->prior_rate = reader_number (&r, "Alternative", "PriorRate", FALSE, a->prior_rate);
+  a->prior_a = tf_reader_number (&r, "Alternative", "PriorA", FALSE, a->prior_a);
+  a->prior_b = tf_reader_number (&r, "Alternative", "PriorB", FALSE, a->prior_b);
+  a->prior_scale = tf_reader_number (&r, "Alternative", "PriorScale", FALSE, a->prior_scale);
+  a->prior_shape = tf_reader_number (&r, "Alternative", "PriorShape", FALSE, a->prior_shape);
+  a->prior_rate = tf_reader_number (&r, "Alternative", "PriorRate", FALSE, a->prior_rate);
 
-  a->prior_null = reader_number (&r, "Models", "PriorNull", FALSE, a->prior_null);
+  a->prior_null = tf_reader_number (&r, "Models", "PriorNull", FALSE, a->prior_null);
   read_models (&r, a);
-  a->level = reader_number (&r, "Options", "Level", FALSE, a->level);
+  a->level = tf_reader_number (&r, "Options", "Level", FALSE, a->level);
 
   if (problems->len != r.n_before)
     return NULL;
@@ -479,16 +399,16 @@ tf_analysis_load (const char *filename, GPtrArray *problems)
   return tf_analysis_load_from_data (data, length, problems);
 }
 
-static void
-set_number (GKeyFile *key_file, const char *group, const char *key, double value)
+void
+tf_key_file_set_number (GKeyFile *key_file, const char *group, const char *key, double value)
 {
   g_autofree char *text = tf_format_double (value);
 
   g_key_file_set_value (key_file, group, key, text);
 }
 
-static void
-set_list (GKeyFile *key_file, const char *group, const char *key, const GArray *values)
+void
+tf_key_file_set_list (GKeyFile *key_file, const char *group, const char *key, const GArray *values)
 {
   g_autoptr (GString) text = g_string_new (NULL);
 
@@ -503,81 +423,6 @@ set_list (GKeyFile *key_file, const char *group, const char *key, const GArray *
   g_key_file_set_value (key_file, group, key, text->str);
 }
 
-static void
-write_data (GKeyFile *k, const TfAnalysis *a)
-{
-  switch (a->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      set_number (k, "Data", "Successes", a->successes);
-      set_number (k, "Data", "Trials", a->trials);
-      break;
-    case TF_DESIGN_TWO_PROPORTIONS:
-      set_number (k, "Data", "SuccessesA", a->successes_a);
-      set_number (k, "Data", "TrialsA", a->trials_a);
-      set_number (k, "Data", "SuccessesB", a->successes_b);
-      set_number (k, "Data", "TrialsB", a->trials_b);
-      break;
-    case TF_DESIGN_ONE_MEAN:
-      if (a->values)
-        set_list (k, "Data", "Values", a->values);
-      else
-        {
-          set_number (k, "Data", "N", a->n);
-          set_number (k, "Data", "Mean", a->mean);
-          set_number (k, "Data", "SD", a->sd);
-        }
-      if (a->has_known_sd)
-        set_number (k, "Data", "KnownSD", a->known_sd);
-      break;
-    case TF_DESIGN_PAIRED_MEANS:
-      if (a->values_a && a->values_b)
-        {
-          set_list (k, "Data", "ValuesA", a->values_a);
-          set_list (k, "Data", "ValuesB", a->values_b);
-        }
-      else
-        {
-          set_number (k, "Data", "N", a->n);
-          set_number (k, "Data", "MeanDiff", a->mean);
-          set_number (k, "Data", "SDDiff", a->sd);
-        }
-      break;
-    case TF_DESIGN_TWO_MEANS:
-      if (a->values_a)
-        set_list (k, "Data", "ValuesA", a->values_a);
-      else
-        {
-          set_number (k, "Data", "NA", a->n_a);
-          set_number (k, "Data", "MeanA", a->mean_a);
-          set_number (k, "Data", "SDA", a->sd_a);
-        }
-      if (a->values_b)
-        set_list (k, "Data", "ValuesB", a->values_b);
-      else
-        {
-          set_number (k, "Data", "NB", a->n_b);
-          set_number (k, "Data", "MeanB", a->mean_b);
-          set_number (k, "Data", "SDB", a->sd_b);
-        }
-      g_key_file_set_value (k, "Data", "EqualVariances", a->equal_variances ? "true" : "false");
-      break;
-    case TF_DESIGN_ONE_RATE:
-      set_number (k, "Data", "Events", a->events);
-      set_number (k, "Data", "Exposure", a->exposure);
-      break;
-    case TF_DESIGN_TWO_RATES:
-      set_number (k, "Data", "EventsA", a->events_a);
-      set_number (k, "Data", "ExposureA", a->exposure_a);
-      set_number (k, "Data", "EventsB", a->events_b);
-      set_number (k, "Data", "ExposureB", a->exposure_b);
-      break;
-    case TF_N_DESIGNS:
-    default:
-      break;
-    }
-}
-
 GKeyFile *
 tf_analysis_to_key_file (const TfAnalysis *a)
 {
@@ -589,15 +434,15 @@ tf_analysis_to_key_file (const TfAnalysis *a)
   if (a->title)
     g_key_file_set_string (key_file, "Analysis", "Title", a->title);
 
-  write_data (key_file, a);
+  tf_analysis_write_data (key_file, a);
 
   g_key_file_set_value (key_file, "Null", "Kind", tf_null_kind_to_string (a->null_kind));
   if (a->null_kind == TF_NULL_POINT)
-    set_number (key_file, "Null", "Value", a->null_value);
+    tf_key_file_set_number (key_file, "Null", "Value", a->null_value);
   else
     {
-      set_number (key_file, "Null", "Low", a->null_low);
-      set_number (key_file, "Null", "High", a->null_high);
+      tf_key_file_set_number (key_file, "Null", "Low", a->null_low);
+      tf_key_file_set_number (key_file, "Null", "High", a->null_high);
     }
 
   g_key_file_set_value (key_file, "Alternative", "Direction", tf_direction_to_string (a->direction));
@@ -605,21 +450,21 @@ tf_analysis_to_key_file (const TfAnalysis *a)
   switch (a->prior)
     {
     case TF_PRIOR_BETA:
-      set_number (key_file, "Alternative", "PriorA", a->prior_a);
-      set_number (key_file, "Alternative", "PriorB", a->prior_b);
+      tf_key_file_set_number (key_file, "Alternative", "PriorA", a->prior_a);
+      tf_key_file_set_number (key_file, "Alternative", "PriorB", a->prior_b);
       break;
     case TF_PRIOR_NORMAL:
     case TF_PRIOR_CAUCHY:
-      set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
+      tf_key_file_set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
       break;
     case TF_PRIOR_GAMMA:
-      set_number (key_file, "Alternative", "PriorShape", a->prior_shape);
-      set_number (key_file, "Alternative", "PriorRate", a->prior_rate);
+      tf_key_file_set_number (key_file, "Alternative", "PriorShape", a->prior_shape);
+      tf_key_file_set_number (key_file, "Alternative", "PriorRate", a->prior_rate);
       break;
     }
-  set_number (key_file, "Models", "PriorNull", a->prior_null);
+  tf_key_file_set_number (key_file, "Models", "PriorNull", a->prior_null);
   write_models (key_file, a);
-  set_number (key_file, "Options", "Level", a->level);
+  tf_key_file_set_number (key_file, "Options", "Level", a->level);
 
   /* Keep what Twofold does not know. */
   if (a->source)
