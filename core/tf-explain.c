@@ -151,11 +151,45 @@ prior_words (const TfAnalysis *a)
   return g_strdup ("?");
 }
 
+/* The two-sample count designs put one prior on each group's parameter, not on the
+ * difference or ratio: "θA and θB each spread as Beta(1, 1), independently". */
+static const char *
+group_parameters (TfDesign design)
+{
+  switch (design)
+    {
+    case TF_DESIGN_TWO_PROPORTIONS:
+      return "θA and θB";
+    case TF_DESIGN_TWO_RATES:
+      return "λA and λB";
+    default:
+      return NULL;
+    }
+}
+
 static char *
 alternative_words (const TfAnalysis *a)
 {
   g_autofree char *prior = prior_words (a);
   const char *what = parameter_words (a->design);
+  const char *groups = group_parameters (a->design);
+
+  if (groups)
+    {
+      g_autofree char *spread = g_strdup_printf (_("%s each spread as %s, independently"), groups, prior);
+
+      switch (a->direction)
+        {
+        case TF_DIRECTION_GREATER:
+          /* TRANSLATORS: %s is e.g. "θA and θB each spread as Beta(1, 1), independently" */
+          return g_strdup_printf (_("%s, cut to where %s lies above the null value"), spread, what);
+        case TF_DIRECTION_LESS:
+          return g_strdup_printf (_("%s, cut to where %s lies below the null value"), spread, what);
+        case TF_DIRECTION_TWO_SIDED:
+          break;
+        }
+      return g_steal_pointer (&spread);
+    }
 
   switch (a->direction)
     {

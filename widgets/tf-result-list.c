@@ -45,8 +45,8 @@ static const TfIntervalKind interval_kinds[] = {
   { "jeffreys", FALSE, NULL, N_("Jeffreys") },
   { "agresti_coull", FALSE, NULL, N_("Agresti–Coull") },
   { "diff_ci", FALSE, NULL, N_("Newcombe") },
-  { "or_ci", FALSE, N_("odds ratio"), N_("Woolf") },
-  { "rr_ci", FALSE, N_("risk ratio"), N_("Katz") },
+  { "or_ci", FALSE, N_("the odds ratio"), N_("Woolf") },
+  { "rr_ci", FALSE, N_("the risk ratio"), N_("Katz") },
   { "effect_ci", FALSE, N_("Cohen's d"), N_("noncentral t") },
 };
 
