@@ -452,6 +452,9 @@ tf_analysis_to_key_file (const TfAnalysis *a)
     case TF_PRIOR_BETA:
       tf_key_file_set_number (key_file, "Alternative", "PriorA", a->prior_a);
       tf_key_file_set_number (key_file, "Alternative", "PriorB", a->prior_b);
+      /* two proportions' second Bayes factor: a normal prior on the log odds ratio */
+      if (a->design == TF_DESIGN_TWO_PROPORTIONS)
+        tf_key_file_set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
       break;
     case TF_PRIOR_NORMAL:
     case TF_PRIOR_CAUCHY:

@@ -96,6 +96,8 @@ static const TfFormField two_proportions[] = {
               TF_FIELD_NUMBER),
   DIRECTION (two_proportions_directions),
   BETA_PRIOR (N_("Beta prior of each group’s θ")),
+  ALT ("PriorScale", N_("SD of the log odds ratio _prior"),
+       N_("Normal prior on ln OR, for the second Bayes factor"), FALSE, prior_scale),
   MODELS_AND_OPTIONS,
 };
 

@@ -122,6 +122,61 @@ test_save_failure_leaves_nothing (void)
 }
 
 /* Numbers are written with '.' and read back bit for bit whatever the locale. */
+/* Every data key of every design, and every prior key the design uses, survives a save
+ * and a reload: the written file reads back to the same analysis, written the same. */
+static void
+test_every_design_round_trip (void)
+{
+  static const char *const files[] = {
+    "[Analysis]\nFormat=1\nDesign=one-proportion\n[Data]\nSuccesses=7\nTrials=19\n"
+    "[Null]\nValue=0.25\n[Alternative]\nPriorA=2.5\nPriorB=0.5\n",
+    "[Analysis]\nFormat=1\nDesign=two-proportions\n[Data]\nSuccessesA=3\nTrialsA=11\n"
+    "SuccessesB=0\nTrialsB=9\n[Alternative]\nPriorA=0.5\nPriorB=0.5\nPriorScale=1.75\n",
+    "[Analysis]\nFormat=1\nDesign=one-mean\n[Data]\nN=12\nMean=-0.25\nSD=3.5\nKnownSD=3\n"
+    "[Null]\nValue=1\n[Alternative]\nPrior=normal\nPriorScale=0.3\n",
+    "[Analysis]\nFormat=1\nDesign=one-mean\n[Data]\nValues=1.5;2;-3.25;8\n[Null]\nValue=0\n",
+    "[Analysis]\nFormat=1\nDesign=paired-means\n[Data]\nN=30\nMeanDiff=0.75\nSDDiff=1.25\n",
+    "[Analysis]\nFormat=1\nDesign=paired-means\n[Data]\nValuesA=1;2;3.5\nValuesB=0.5;2.5;3\n",
+    "[Analysis]\nFormat=1\nDesign=two-means\n[Data]\nValuesA=1;2;4\nNB=8\nMeanB=2.5\nSDB=0.75\n"
+    "EqualVariances=true\n",
+    "[Analysis]\nFormat=1\nDesign=one-rate\n[Data]\nEvents=0\nExposure=120.5\n"
+    "[Null]\nValue=0.01\n[Alternative]\nPriorShape=0.5\nPriorRate=20\n",
+    "[Analysis]\nFormat=1\nDesign=two-rates\n[Data]\nEventsA=4\nExposureA=10\nEventsB=9\n"
+    "ExposureB=12.25\n",
+  };
+
+  for (guint i = 0; i < G_N_ELEMENTS (files); i++)
+    {
+      g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+      g_autoptr (TfAnalysis) first = load_string (files[i], problems);
+      g_autoptr (TfAnalysis) second = NULL;
+      g_autofree char *written = NULL, *rewritten = NULL;
+
+      g_test_message ("%s", files[i]);
+      g_assert_cmpuint (problems->len, ==, 0);
+      g_assert_nonnull (first);
+      written = tf_analysis_to_data (first, NULL);
+      second = load_string (written, problems);
+      g_assert_cmpuint (problems->len, ==, 0);
+      g_assert_nonnull (second);
+      rewritten = tf_analysis_to_data (second, NULL);
+      g_assert_cmpstr (rewritten, ==, written);
+      g_assert_cmpfloat (second->prior_scale, ==, first->prior_scale);
+      g_assert_cmpfloat (second->n, ==, first->n);
+      g_assert_cmpfloat (second->mean_a, ==, first->mean_a);
+      g_assert_cmpfloat (second->sd_b, ==, first->sd_b);
+      g_assert_cmpfloat (second->exposure_b, ==, first->exposure_b);
+    }
+  /* the log odds ratio prior's SD of two proportions is written, though its Prior is beta */
+  {
+    g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+    g_autoptr (TfAnalysis) a = load_string (files[1], problems);
+    g_autofree char *written = tf_analysis_to_data (a, NULL);
+
+    g_assert_nonnull (strstr (written, "PriorScale=1.75\n"));
+  }
+}
+
 static void
 test_numbers_round_trip (void)
 {
@@ -303,6 +358,7 @@ main (int argc, char **argv)
   g_test_add_func ("/analysis-file/round-trip-keeps-unknown-keys", test_round_trip_keeps_unknown_keys);
   g_test_add_func ("/analysis-file/save-failure-leaves-nothing", test_save_failure_leaves_nothing);
   g_test_add_func ("/analysis-file/numbers-round-trip", test_numbers_round_trip);
+  g_test_add_func ("/analysis-file/every-design-round-trip", test_every_design_round_trip);
   g_test_add_func ("/analysis-file/locale-independent", test_locale_independent);
   g_test_add_func ("/analysis-file/bad-values-named", test_bad_values_named);
   g_test_add_func ("/analysis-file/not-an-analysis", test_not_an_analysis);
