@@ -3,12 +3,22 @@
  * prior on the log odds ratio ψ = ln[θA(1 − θB) / (θB(1 − θA))].
  *
  * Model: given the margins, kA has Fisher's noncentral hypergeometric distribution
- * with odds ratio e^ψ (Fisher 1935; the conditional likelihood, free of the nuisance
- * parameter). H0: ψ = 0; H1: ψ ~ N(0, σ²), σ = [Alternative] PriorScale. Then
- * BF10 = ∫ e^{ψ kA} / E0[e^{ψ X}] φ(ψ; 0, σ²) dψ, E0 under the central hypergeometric,
- * by GSL's QAG (Piessens et al. 1983) over pieces around the normal approximation of
- * the posterior of ψ; E0[e^{ψ X}] is summed outward from its largest term with the
- * ratio recurrence, stopped at 1e-17 relative.
+ * with odds ratio e^ψ (Fisher 1935; the conditional likelihood). The nuisance
+ * parameter, the baseline log odds, is not given a prior: conditioning on the margins
+ * removes it from the likelihood. H0: ψ = 0; H1: ψ ~ N(0, σ²), σ = PriorScale. Then
+ *   BF10 = ∫ e^{ψ kA} / M(ψ) φ(ψ; 0, σ²) dψ,   M(ψ) = E0[e^{ψ X}],
+ * X central hypergeometric. Everything is in log space, relative to a reference
+ * outcome u_r near the posterior's mean of X:
+ *   ln M(ψ) = ln P0(u_r) + ψ u_r + ln S(ψ),   S(ψ) = Σ_u P0(u)/P0(u_r) e^{ψ(u − u_r)}.
+ * S(ψ) is summed outcome by outcome, outward from its largest term, when the tilted
+ * distribution's SD is below 30; above, the sum equals the integral over u of the same
+ * terms continued by Γ to within e^{−2π²·900} (Poisson summation), and that integral is
+ * taken by 40-point Gauss–Hermite quadrature on u standardised at its largest term,
+ * each term in Loader's deviance form about that outcome (Loader 2000). The outer
+ * integral is centred on the mode of the log integrand, found by safeguarded Newton
+ * steps (it is concave), scaled by its curvature there (a Laplace-style substitution),
+ * and taken by GSL's QAG (Piessens et al. 1983) over pieces of doubling width outward
+ * until the integrand is below e^{−60} of its peak.
  */
 #include "tf-two-proportions-private.h"
 #include "tf-fisher.h"
@@ -19,73 +29,250 @@
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_integration.h>
 
-/* Beyond this the sums over outcomes get too long for one analysis. */
-#define TF_LOGOR_MAX_SD 2e3
+#define TF_LN_SQRT_2PI 0.918938533204672741780329736406
+#define TF_GH_NODES 40
+#define TF_GH_MIN_SD 30.0
 
 typedef struct {
   TfHyper h;
-  double ka, sd, ref;
+  double ka, sd;
+  double ur, lp_ur;             /* reference outcome and ln P0(u_r) */
+  double mode, scale, g_mode;   /* the outer substitution ψ = mode + s · scale */
+  int evals;
 } LogOr;
 
-/* ln E0[e^{ψ X}] */
-static double
-log_mgf (const TfHyper *h, double psi)
-{
-  const double na = h->n_a, nb = h->n_b, m = h->m, w = exp (psi);
-  double lo = h->lo, hi = h->hi;
+typedef struct {
+  double ls;                    /* ln S(ψ) */
+  double mean, var;             /* of X − u_r under the tilted distribution */
+} Tilt;
 
-  if (h->lo == h->hi)
-    return psi * h->lo;
-  /* the largest term: the smallest u with ratio(u) = P(u+1)/P(u) · e^ψ < 1 */
+static const gsl_integration_fixed_workspace *
+gauss_hermite (void)
+{
+  static gsize once = 0;
+  static gsl_integration_fixed_workspace *w;
+  if (g_once_init_enter (&once))
+    {
+      /* weight e^{−x²/2} */
+      w = gsl_integration_fixed_alloc (gsl_integration_fixed_hermite, TF_GH_NODES, 0.0, 0.5,
+                                       0.0, 0.0);
+      g_once_init_leave (&once, 1);
+    }
+  return w;
+}
+
+/* The cells (kA, nA − kA, m − kA, nB − m + kA) at kA = u, and their signs in u. */
+static void
+cells_at (const TfHyper *h, double u, double x[4])
+{
+  x[0] = u;
+  x[1] = h->n_a - u;
+  x[2] = h->m - u;
+  x[3] = h->n_b - h->m + u;
+}
+
+static const double sign[4] = { 1.0, -1.0, -1.0, 1.0 };
+
+/* ln P0(u + 1)/P0(u) */
+static double
+log_ratio (const TfHyper *h, double u)
+{
+  double x[4];
+  cells_at (h, u, x);
+  return log ((x[1] * x[2]) / ((x[0] + 1.0) * (x[3] + 1.0)));
+}
+
+/* The largest term of the tilted distribution: the smallest u with
+ * ln P0(u + 1)/P0(u) + ψ < 0 (the log ratio decreases in u). */
+static double
+tilted_mode (const TfHyper *h, double psi)
+{
+  double lo = h->lo, hi = h->hi;
   while (lo < hi)
     {
       double mid = floor (lo + (hi - lo) / 2.0);
-      double r = (na - mid) * (m - mid) * w / ((mid + 1.0) * (nb - m + mid + 1.0));
-      if (r < 1.0)
+      if (log_ratio (h, mid) + psi < 0.0)
         hi = mid;
       else
         lo = mid + 1.0;
     }
-  double u0 = lo, s = 1.0, t = 1.0;
+  return lo;
+}
+
+/* ln Γ(x + t + 1) − ln Γ(x + 1) − t ln x, x >= 1, x + t > 0 (Loader 2000: the
+ * deviance and the Stirling remainders). */
+static double
+lgamma_step_rest (double x, double t)
+{
+  return tf_bd0_delta (x + t, x, t) + 0.5 * log1p (t / x) + tf_stirling_remainder (x + t)
+         - tf_stirling_remainder (x);
+}
+
+/* S(ψ) term by term: the terms relative to the largest, by the ratio recurrence,
+ * outward until below 1e-17 of the sum. */
+static void
+tilt_exact (const LogOr *lo, double psi, double u0, Tilt *t)
+{
+  const TfHyper *h = &lo->h;
+  const double w = exp (psi), wi = exp (-psi);
+  double s = 1.0, s1 = 0.0, s2 = 0.0, term = 1.0, x[4];
+
   for (double j = u0; j < h->hi; j += 1.0)
     {
-      t *= (na - j) * (m - j) * w / ((j + 1.0) * (nb - m + j + 1.0));
-      s += t;
-      if (t < 1e-17 * s)
+      cells_at (h, j, x);
+      term *= (x[1] * x[2]) / ((x[0] + 1.0) * (x[3] + 1.0)) * w;
+      double k = j + 1.0 - u0;
+      s += term, s1 += k * term, s2 += k * k * term;
+      if (term < 1e-17 * s)
         break;
     }
-  t = 1.0;
+  term = 1.0;
   for (double j = u0; j > h->lo; j -= 1.0)
     {
-      t *= j * (nb - m + j) / ((na - j + 1.0) * (m - j + 1.0) * w);
-      s += t;
-      if (t < 1e-17 * s)
+      cells_at (h, j, x);
+      term *= (x[0] * x[3]) / ((x[1] + 1.0) * (x[2] + 1.0)) * wi;
+      double k = j - 1.0 - u0;
+      s += term, s1 += k * term, s2 += k * k * term;
+      if (term < 1e-17 * s)
         break;
     }
-  return tf_hyper_log_pmf (h, u0) + psi * u0 + log (s);
+  double m1 = s1 / s;
+  t->ls = psi * (u0 - lo->ur) + (tf_hyper_log_pmf (h, u0) - lo->lp_ur) + log (s);
+  t->mean = (u0 - lo->ur) + m1;
+  t->var = MAX (s2 / s - m1 * m1, 0.0);
 }
 
-static double
-log_integrand (const LogOr *lo, double psi)
+/* S(ψ) as the integral over u, by Gauss–Hermite on u = u0 + σ̂ x; each term's log
+ * relative to u0 is η(ψ − ln OR(u0)) − Σ the cells' deviance parts, η = u − u0. */
+static void
+tilt_integral (const LogOr *lo, double psi, double u0, const double x[4], double sd, Tilt *t)
 {
+  const gsl_integration_fixed_workspace *gh = gauss_hermite ();
+  const double slope = psi - log ((x[0] * x[3]) / (x[1] * x[2]));
+  double q[TF_GH_NODES], qmax = -INFINITY;
+
+  for (guint k = 0; k < TF_GH_NODES; k++)
+    {
+      double eta = sd * gh->x[k];
+      double v = eta * slope + 0.5 * gh->x[k] * gh->x[k];
+      for (int i = 0; i < 4; i++)
+        v -= lgamma_step_rest (x[i], sign[i] * eta);
+      q[k] = v;
+      qmax = MAX (qmax, v);
+    }
+  double s = 0.0, s1 = 0.0, s2 = 0.0;
+  for (guint k = 0; k < TF_GH_NODES; k++)
+    {
+      double wk = gh->weights[k] * exp (q[k] - qmax), eta = sd * gh->x[k];
+      s += wk, s1 += wk * eta, s2 += wk * eta * eta;
+    }
+  double m1 = s1 / s;
+  t->ls = psi * (u0 - lo->ur) + (tf_hyper_log_pmf (&lo->h, u0) - lo->lp_ur) + log (sd)
+          + qmax + log (s);
+  t->mean = (u0 - lo->ur) + m1;
+  t->var = MAX (s2 / s - m1 * m1, 0.0);
+}
+
+static void
+tilt (LogOr *lo, double psi, Tilt *t)
+{
+  double u0 = tilted_mode (&lo->h, psi), x[4], inv = 0.0;
+
+  lo->evals++;
+  cells_at (&lo->h, u0, x);
+  for (int i = 0; i < 4; i++)
+    inv += 1.0 / (x[i] + 0.5);
+  double sd = 1.0 / sqrt (inv);
+  if (sd < TF_GH_MIN_SD)
+    tilt_exact (lo, psi, u0, t);
+  else
+    tilt_integral (lo, psi, u0, x, sd, t);
+}
+
+/* The log integrand G(ψ) = ψ kA − ln M(ψ) + ln φ(ψ; 0, σ²), and G', G''. */
+static double
+log_integrand (LogOr *lo, double psi, double *d1, double *d2)
+{
+  Tilt t;
   double z = psi / lo->sd;
-  return psi * lo->ka - log_mgf (&lo->h, psi) - 0.5 * z * z - log (lo->sd) - 0.918938533204672741780329736406;
+
+  tilt (lo, psi, &t);
+  if (d1)
+    *d1 = ((lo->ka - lo->ur) - t.mean) - z / lo->sd;
+  if (d2)
+    *d2 = -t.var - 1.0 / (lo->sd * lo->sd);
+  return psi * (lo->ka - lo->ur) - lo->lp_ur - t.ls - 0.5 * z * z - log (lo->sd) - TF_LN_SQRT_2PI;
+}
+
+/* The mode of the concave G by Newton steps kept inside the bracket found so far
+ * (bisection when a step leaves it). Returns FALSE when it does not settle. */
+static gboolean
+find_mode (LogOr *lo, double start, double *mode, double *curv)
+{
+  double psi = start, bl = -INFINITY, bh = INFINITY, d1, d2;
+
+  for (int it = 0; it < 300; it++)
+    {
+      log_integrand (lo, psi, &d1, &d2);
+      if (!isfinite (d1) || !isfinite (d2) || d2 >= 0.0)
+        return FALSE;
+      if (d1 > 0.0)
+        bl = psi;
+      else
+        bh = psi;
+      double step = -d1 / d2, next = psi + step;
+      if (fabs (step) <= 1e-4 / sqrt (-d2) || bh - bl <= 1e-12 * MAX (1.0, fabs (psi)))
+        {
+          *mode = psi;
+          *curv = -d2;
+          return TRUE;
+        }
+      if (!(next > bl && next < bh))
+        next = isfinite (bl) && isfinite (bh) ? 0.5 * (bl + bh) : psi + 0.5 * step;
+      psi = next;
+    }
+  return FALSE;
 }
 
 static double
-integrand (double psi, void *data)
+integrand (double s, void *data)
 {
-  const LogOr *lo = data;
-  return exp (log_integrand (lo, psi) - lo->ref);
+  LogOr *lo = data;
+  return exp (log_integrand (lo, lo->mode + s * lo->scale, NULL, NULL) - lo->g_mode);
+}
+
+/* ∫ over s of e^{G(mode + s·scale) − G(mode)} on one side (dir = ±1): pieces
+ * [0, 1], [1, 2], [2, 4], ... until the integrand at a piece's end is below e^{−60}. */
+static gboolean
+integrate_side (LogOr *lo, gsl_integration_workspace *ws, double dir, double *sum)
+{
+  gsl_function f = { integrand, lo };
+  double a = 0.0, b = 1.0;
+
+  *sum = 0.0;
+  for (int piece = 0; piece < 80; piece++)
+    {
+      double r, e;
+      int status = gsl_integration_qag (&f, MIN (dir * a, dir * b), MAX (dir * a, dir * b),
+                                        0.0, 1e-11, 200, GSL_INTEG_GAUSS21, ws, &r, &e);
+      if (status != GSL_SUCCESS && !(e <= 1e-9 * (*sum + r)))
+        return FALSE;
+      *sum += r;
+      double end = log_integrand (lo, lo->mode + dir * b * lo->scale, NULL, NULL) - lo->g_mode;
+      if (!(end > -60.0))
+        return isfinite (*sum);
+      a = b;
+      b *= 2.0;
+    }
+  return FALSE;
 }
 
 double
 tf_two_proportions_log_or_bf01 (double ka, double na, double kb, double nb, double sd,
                                 const char **why)
 {
-  LogOr lo;
-  static const double steps[] = { -40, -20, -10, -5, -2, 0, 2, 5, 10, 20, 40 };
-  const guint ns = G_N_ELEMENTS (steps);
+  LogOr lo = { 0 };
+  double curv;
 
   if (!(isfinite (sd) && sd > 0.0))
     {
@@ -95,49 +282,41 @@ tf_two_proportions_log_or_bf01 (double ka, double na, double kb, double nb, doub
   tf_hyper_init (&lo.h, na, nb, ka + kb);
   if (lo.h.lo == lo.h.hi)
     return 0.0;               /* a margin is 0: the data say nothing about ψ */
-  if (lo.h.sd > TF_LOGOR_MAX_SD)
-    {
-      *why = _("the margins are too large for the conditional likelihood to be summed outcome by outcome");
-      return NAN;
-    }
   lo.ka = ka;
   lo.sd = sd;
-  /* normal approximation: Woolf's estimate with 0.5 in every cell, and the prior */
+  lo.ur = ka;
+  lo.lp_ur = tf_hyper_log_pmf (&lo.h, ka);
+  /* start from the normal approximation: Woolf's estimate with 0.5 in every cell,
+   * shrunk by the prior */
   double c0 = ka + 0.5, c1 = na - ka + 0.5, c2 = kb + 0.5, c3 = nb - kb + 0.5;
-  double est = log (c0) + log (c3) - log (c1) - log (c2);
+  double est = log ((c0 * c3) / (c1 * c2));
   double v = 1.0 / c0 + 1.0 / c1 + 1.0 / c2 + 1.0 / c3;
-  double tau = sqrt (1.0 / (1.0 / v + 1.0 / (sd * sd)));
-  double mu = est * (sd * sd) / (sd * sd + v);
+  double start = est * (sd * sd) / (sd * sd + v);
 
-  double edges[G_N_ELEMENTS (steps)];
-  lo.ref = -INFINITY;
-  for (guint i = 0; i < ns; i++)
+  if (!find_mode (&lo, start, &lo.mode, &curv))
     {
-      edges[i] = CLAMP (mu + steps[i] * tau, -700.0, 700.0);
-      lo.ref = MAX (lo.ref, log_integrand (&lo, edges[i]));
+      *why = _("the mode of the integrand over the log odds ratio was not found");
+      return NAN;
     }
-  gsl_integration_workspace *ws = gsl_integration_workspace_alloc (100);
-  gsl_function f = { integrand, &lo };
-  double total = 0.0;
-  gboolean ok = TRUE;
-  for (guint i = 0; i + 1 < ns; i++)
-    {
-      double r, e;
-      if (!(edges[i + 1] > edges[i]))
-        continue;
-      int status = gsl_integration_qag (&f, edges[i], edges[i + 1], 0.0, 1e-10, 100,
-                                        GSL_INTEG_GAUSS21, ws, &r, &e);
-      if (status != GSL_SUCCESS && !(e <= 1e-8 * (total + fabs (r))))
-        ok = FALSE;
-      total += r;
-    }
+  /* the reference outcome at the posterior mean of X, for the fewest digits lost */
+  Tilt t;
+  tilt (&lo, lo.mode, &t);
+  lo.ur = CLAMP (round (lo.ur + t.mean), lo.h.lo, lo.h.hi);
+  lo.lp_ur = tf_hyper_log_pmf (&lo.h, lo.ur);
+  lo.scale = 1.0 / sqrt (curv);
+  lo.g_mode = log_integrand (&lo, lo.mode, NULL, NULL);
+
+  gsl_integration_workspace *ws = gsl_integration_workspace_alloc (200);
+  double left, right;
+  gboolean ok = integrate_side (&lo, ws, -1.0, &left) && integrate_side (&lo, ws, 1.0, &right);
   gsl_integration_workspace_free (ws);
-  if (!ok || !(total > 0.0))
+  double total = left + right;
+  if (!ok || !(total > 0.0) || !isfinite (total) || !isfinite (lo.g_mode))
     {
       *why = _("the integral over the log odds ratio did not converge");
       return NAN;
     }
-  return -(lo.ref + log (total));
+  return -(lo.g_mode + log (lo.scale) + log (total));
 }
 
 void
