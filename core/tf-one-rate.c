@@ -77,15 +77,26 @@ tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems)
                                      a->prior_rate));
 }
 
-/* BF01 = Poisson(k; λ0 E) / NB(k; α, β / (β + E)): the Poisson–gamma marginal under
- * the alternative is negative binomial (Greenwood & Yule 1920); both in Loader's
- * deviance form (Loader 2000). */
+/* BF01 = Gamma(λ0; α + k, β + E) / Gamma(λ0; α, β), the posterior over the prior
+ * density at λ0 (Dickey 1971: the Poisson probability of k over its Poisson–gamma
+ * marginal). With Stirling's formula and Loader's deviance terms (Loader 2000),
+ * ln BF01 = bd0(α, βλ0) − bd0(α + k, (β + E)λ0) + ½ ln((α + k)/α) + δ(α) − δ(α + k),
+ * and by pooling the prior's α over β with the data's k over E the first two terms are
+ * also H(α, β; k, E) − bd0(k, Eλ0), H the heterogeneity of the two. Each way cancels
+ * where its terms are large, so the one whose largest term is smaller is taken: no
+ * term is then much larger than ln BF01 itself, for k, α and E up to 10^12. */
 double
 tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double shape, double rate)
 {
-  double s = rate + exposure;
-  return tf_log_dpois (k, lambda0 * exposure)
-         - tf_log_dnbinom (k, shape, rate / s, exposure / s);
+  TfPoisSample prior = tf_pois_sample (shape, rate), data = tf_pois_sample (k, exposure);
+  TfPoisSample post = prior;
+  tf_pois_sample_add (&post, k, exposure, 1.0);
+  double s0 = tf_pois_sample_bd0 (&prior, lambda0), s1 = tf_pois_sample_bd0 (&post, lambda0);
+  double h = tf_pois_log_heterogeneity (&prior, &data);
+  double d = tf_pois_sample_bd0 (&data, lambda0);
+  double core = MAX (s0, s1) <= MAX (h, d) ? s0 - s1 : h - d;
+  return core + 0.5 * log1p (k / shape) + tf_stirling_remainder (shape)
+         - tf_stirling_remainder (shape + k);
 }
 
 /* ln P(Z >= z), standard normal (GSL's log_erfc, Cody 1969). */

@@ -110,6 +110,61 @@ tf_log_dnbinom (double k, double shape, double p, double q)
   return log (shape) - log (shape + k) + tf_log_dbinom (shape, shape + k, p, q);
 }
 
+/* hi + lo = a + b exactly (Knuth's TwoSum; Dekker 1971). */
+static void
+two_sum (double a, double b, double *hi, double *lo)
+{
+  double s = a + b, bb = s - a;
+  *hi = s;
+  *lo = (a - (s - bb)) + (b - bb);
+}
+
+TfPoisSample
+tf_pois_sample (double x, double m)
+{
+  return (TfPoisSample) { x, 0.0, m, 0.0 };
+}
+
+void
+tf_pois_sample_add (TfPoisSample *s, double k, double e, double c)
+{
+  double hi, lo, p = e * c;
+  two_sum (s->x, k, &hi, &lo);
+  s->x = hi;
+  s->x_lo += lo;
+  two_sum (s->m, p, &hi, &lo);
+  s->m = hi;
+  s->m_lo += lo + fma (e, c, -p);
+}
+
+/* x − λ m with the product's rounding error recovered by fma (Ogita, Rump & Oishi
+ * 2005, TwoProduct). */
+double
+tf_pois_sample_bd0 (const TfPoisSample *s, double lambda)
+{
+  double mu = s->m * lambda;
+  double d = (s->x - mu) + (s->x_lo - fma (s->m, lambda, -mu) - s->m_lo * lambda);
+  return tf_bd0_delta (s->x, mu, d);
+}
+
+/* x − m r = (x e − k m) / (m + e), and k − e r its negative; the cross products by
+ * TwoProduct, so that a near-tie keeps its digits. */
+double
+tf_pois_log_heterogeneity (const TfPoisSample *s, const TfPoisSample *t)
+{
+  double x = s->x, m = s->m, k = t->x, e = t->m;
+  if (isnan (x) || isnan (m) || isnan (k) || isnan (e))
+    return NAN;
+  if (x + k == 0.0)
+    return 0.0;
+  double p1 = x * e, p2 = k * m;
+  double e1 = fma (x, e, -p1) + x * t->m_lo + s->x_lo * e;
+  double e2 = fma (k, m, -p2) + k * s->m_lo + t->x_lo * m;
+  double d = ((p1 - p2) + (e1 - e2)) / (m + e);
+  double r = (x + k) / (m + e);
+  return tf_bd0_delta (x, m * r, d) + tf_bd0_delta (k, e * r, -d);
+}
+
 /* ln P(a, x) by the power series P = D · Σ x^n / ((a + 1) … (a + n)), D = dpois(a, x)
  * (Abramowitz & Stegun 1964, 6.5.29). */
 static double

@@ -29,6 +29,27 @@ double tf_log_dgamma (double x, double shape, double rate);
  * (rate + exposure), given with q = exposure / (rate + exposure). */
 double tf_log_dnbinom (double k, double shape, double p, double q);
 
+/* x events over exposure m, each an unevaluated sum hi + lo (Dekker 1971), so that
+ * a count or an exposure made of sums and products keeps every digit in the
+ * deviances below. */
+typedef struct {
+  double x, x_lo, m, m_lo;
+} TfPoisSample;
+
+/* x events over exposure m. */
+TfPoisSample tf_pois_sample (double x, double m);
+/* Pools k more events over c · e more exposure into s (c = 1 for plain e). */
+void tf_pois_sample_add (TfPoisSample *s, double k, double e, double c);
+
+/* bd0(x, λ m) of Loader (2000) for the sample s at the rate λ > 0. */
+double tf_pois_sample_bd0 (const TfPoisSample *s, double lambda);
+
+/* Half the likelihood-ratio statistic for one rate behind the samples s and t:
+ * bd0(x, m r) + bd0(k, e r) at their pooled rate r = (x + k) / (m + e) (Loader 2000's
+ * deviance terms; G / 2 of Woolf 1957, from memory). Unchanged when both exposures
+ * are scaled together. */
+double tf_pois_log_heterogeneity (const TfPoisSample *s, const TfPoisSample *t);
+
 /* ln P(X <= k) and ln P(X >= k) for X ~ Poisson(mu), mu >= 0. */
 double tf_pois_log_cdf (double k, double mu);
 double tf_pois_log_sf (double k, double mu);

@@ -114,22 +114,57 @@ pi_of_ratio (double rho, double ea, double eb, double *p, double *q)
   *q = eb / s;
 }
 
-/* BF01 = Bin(kA; n, π0) NB(n; α, β/R0) / (NB(kA; α, β/RA) NB(kB; α, β/RB)): the counts
- * factor into the total and the split under H0 (Poisson splitting), and each Poisson–
- * gamma marginal is negative binomial (Greenwood & Yule 1920); every term in Loader's
- * deviance form (Loader 2000). Counts may be real. */
+/* The shift of pooling group A's data into the null's prior instead of its own:
+ * X = kA ln ρ0 + (α + kA) ln((β + EA) / (β + ρ0 EA)), each log from its small side;
+ * *size is the larger of its two terms. */
+static double
+prior_shift (double ka, double ea, double rho0, double shape, double rate, double *size)
+{
+  double a = shape + ka, u = log (rho0), t1, t2;
+  if (rate <= ea)
+    {
+      t1 = -shape * u;
+      t2 = -a * log1p ((1.0 - rho0) / rho0 * (rate / (rate + ea)));
+    }
+  else
+    {
+      t1 = ka * u;
+      t2 = -a * log1p ((rho0 - 1.0) * (ea / (rate + ea)));
+    }
+  *size = MAX (fabs (t1), fabs (t2));
+  return t1 + t2;
+}
+
+/* BF01 = Γ(α + n) Γ(α) / (Γ(α + kA) Γ(α + kB)) · ρ0^kA β^−α (β + EA)^(α + kA)
+ * (β + EB)^(α + kB) / (β + ρ0 EA + EB)^(α + n), n = kA + kB: the common-rate marginal
+ * over the product of the two Poisson–gamma ones (Greenwood & Yule 1920). With
+ * Stirling's formula and Loader's deviance terms (Loader 2000) its powers pool into
+ * heterogeneities H (tf_pois_log_heterogeneity): H(α, β; kA, EA) − H(α + kB,
+ * (β + EB)/ρ0; kA, EA), "how much more group A disagrees with B's posterior than with
+ * the prior"; or H(α, β; kB, EB) − H(α + kA, β + ρ0 EA; kB, EB) + X with group B
+ * pooled instead (X = prior_shift, 0 when ρ0 = 1). The way whose largest term is
+ * smaller is taken, so that no term is much larger than ln BF01. Counts may be real. */
 double
 tf_two_rates_log_bf01 (double ka, double ea, double kb, double eb, double rho0,
                        double shape, double rate)
 {
-  double p0, q0;
-  double n = ka + kb;
-  double m0 = rho0 * ea + eb, r0 = rate + m0, ra = rate + ea, rb = rate + eb;
-
-  pi_of_ratio (rho0, ea, eb, &p0, &q0);
-  return tf_log_dbinom (ka, n, p0, q0) + tf_log_dnbinom (n, shape, rate / r0, m0 / r0)
-         - tf_log_dnbinom (ka, shape, rate / ra, ea / ra)
-         - tf_log_dnbinom (kb, shape, rate / rb, eb / rb);
+  double a = shape + ka, b = shape + kb, s = a + kb, size;
+  TfPoisSample prior = tf_pois_sample (shape, rate);
+  TfPoisSample da = tf_pois_sample (ka, ea), db = tf_pois_sample (kb, eb);
+  TfPoisSample da0 = tf_pois_sample (0.0, 0.0), post_a = prior, post_b = prior;
+  tf_pois_sample_add (&da0, ka, ea, rho0);        /* A's data on B's scale */
+  tf_pois_sample_add (&post_a, ka, ea, rho0);
+  tf_pois_sample_add (&post_b, kb, eb, 1.0);
+  double ha0 = tf_pois_log_heterogeneity (&prior, &da);
+  double ha1 = tf_pois_log_heterogeneity (&post_b, &da0);
+  double hb0 = tf_pois_log_heterogeneity (&prior, &db);
+  double hb1 = tf_pois_log_heterogeneity (&post_a, &db);
+  double x = rho0 == 1.0 ? (size = 0.0) : prior_shift (ka, ea, rho0, shape, rate, &size);
+  double core = MAX (ha0, ha1) <= MAX (MAX (hb0, hb1), size) ? ha0 - ha1 : hb0 - hb1 + x;
+  /* −½ ln(s α / (a b)) and the Stirling remainders */
+  return core + 0.5 * (log1p (ka / shape) - log1p (ka / b))
+         + tf_stirling_remainder (shape) + tf_stirling_remainder (s)
+         - tf_stirling_remainder (a) - tf_stirling_remainder (b);
 }
 
 /* W = ra λA / (ra λA + rb λB) ~ Beta(sa, sb); ρ = (rb / ra) W / (1 − W), with W and

@@ -147,6 +147,31 @@ test_extremes (void)
   g_assert_cmpuint (problems->len, ==, 0);
 }
 
+/* ln BF01 where the log marginals are ~1e12 and cancel: strong priors placed away from
+ * the data or the null. Check values from mpmath 1.2.1 at 50 digits from loggamma (the
+ * closed forms in tests/crosscheck/tf-crosscheck-rates.py), |error| <= 1e-9 absolute
+ * or relative above 1. */
+static void
+test_bf_cancellation (void)
+{
+  struct { double ka, ea, kb, eb, rho0, shape, rate, want; } two[] = {
+    /* the old four-marginal form was 1.8e-4 off here */
+    { 337591536845, 336115766.21973705, 0, 0.016734247088335128, 1, 227122669358.58163,
+      11929588903.190395, -0.45184968904345482216 },
+    { 3e11, 1e9, 2e11, 5e8, 1.5, 1e12, 1e10, 78946878192.240361235 },
+  };
+  for (guint i = 0; i < G_N_ELEMENTS (two); i++)
+    {
+      double got = tf_two_rates_log_bf01 (two[i].ka, two[i].ea, two[i].kb, two[i].eb,
+                                          two[i].rho0, two[i].shape, two[i].rate);
+      assert_rel (got, two[i].want, 1e-9 / MIN (1.0, fabs (two[i].want)));
+    }
+  /* Gamma(1e12, 1e12), far from λ0 = 2 and 4: prior and posterior densities at λ0
+   * near e^−3e11, their ratio moderate */
+  assert_rel (tf_one_rate_log_bf01 (10, 1, 2, 1e12, 1e12), 5.9314718055639530942, 1e-9);
+  assert_rel (tf_one_rate_log_bf01 (2e10, 9.2e9, 4, 1e12, 1e12), 68303920.765347498561, 1e-9);
+}
+
 static void
 test_interval_null (void)
 {
@@ -249,6 +274,7 @@ main (int argc, char **argv)
   g_test_add_func ("/rates/one-rate-example", test_one_rate_example);
   g_test_add_func ("/rates/two-rates-example", test_two_rates_example);
   g_test_add_func ("/rates/extremes", test_extremes);
+  g_test_add_func ("/rates/bf-cancellation", test_bf_cancellation);
   g_test_add_func ("/rates/interval-null", test_interval_null);
   g_test_add_func ("/rates/validation", test_validation);
   g_test_add_func ("/rates/curves", test_curves);
