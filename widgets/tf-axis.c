@@ -51,6 +51,27 @@ tf_figure_panels_at (const TfFigurePanels *panels, double x, double y)
   return best;
 }
 
+/* The nice number below step: 10 → 5 → 2 → 1 → 0.5 ... */
+static double
+smaller_nice (double step)
+{
+  double e = pow (10.0, floor (log10 (step) + 1e-9));
+  double f = step / e;
+
+  return f >= 4.5 ? 2 * e : f >= 1.5 ? e : 0.5 * e;
+}
+
+/* How many multiples of step lie in [lo, hi], with slack share of the range either side. */
+static guint
+count_ticks (double lo, double hi, double step, double slack, double *first)
+{
+  double a = ceil (lo / step - 1e-9 - slack * (hi - lo) / step) * step;
+  double b = floor (hi / step + 1e-9 + slack * (hi - lo) / step) * step;
+
+  *first = a;
+  return b + step * 1e-9 >= a ? (guint) floor ((b - a) / step + 0.5) + 1 : 0;
+}
+
 /* Heckbert (1990), "Nice numbers for graph labels", Graphics Gems I, pp. 61-63. */
 double
 tf_nice_number (double x, gboolean round)
@@ -72,7 +93,7 @@ tf_nice_number (double x, gboolean round)
 void
 tf_ticks_compute (TfTicks *ticks, double lo, double hi, guint target, gboolean loose)
 {
-  double range, step, first, last, eps;
+  double range, step, first;
 
   if (!isfinite (lo) || !isfinite (hi))
     lo = 0, hi = 1;
@@ -92,21 +113,24 @@ tf_ticks_compute (TfTicks *ticks, double lo, double hi, guint target, gboolean l
 
   range = tf_nice_number (hi - lo, FALSE);
   step = tf_nice_number (range / (target - 1), TRUE);
-  eps = step * 1e-9;
   if (loose)
     {
       lo = floor (lo / step + 1e-9) * step;
       hi = ceil (hi / step - 1e-9) * step;
     }
-  /* A tick a hair outside the range (0 when the grid starts at 0.005) still counts. */
-  first = ceil (lo / step - 1e-9 - 0.01 * (hi - lo) / step) * step;
-  last = floor (hi / step + 1e-9 + 0.01 * (hi - lo) / step) * step;
+  /* A tick a hair outside the range (0 when the grid starts at 0.005) still counts. A
+   * tight range keeps at least two labelled ticks: finer steps until it has them. */
+  ticks->n = count_ticks (lo, hi, step, 0.01, &first);
+  while (!loose && ticks->n < 2)
+    {
+      step = smaller_nice (step);
+      ticks->n = count_ticks (lo, hi, step, 0.01, &first);
+    }
 
   ticks->lo = lo;
   ticks->hi = hi;
   ticks->first = first;
   ticks->step = step;
-  ticks->n = last + eps >= first ? (guint) floor ((last - first) / step + 0.5) + 1 : 0;
   ticks->n_frac = (int) MAX (-floor (log10 (step) + 1e-9), 0);
   ticks->log = FALSE;
   ticks->minor = FALSE;
@@ -116,7 +140,7 @@ tf_ticks_compute (TfTicks *ticks, double lo, double hi, guint target, gboolean l
 void
 tf_ticks_compute_log (TfTicks *ticks, double lo10, double hi10, guint target, gboolean loose)
 {
-  double step, first, last;
+  double step, first;
 
   if (!isfinite (lo10) || !isfinite (hi10))
     lo10 = -1, hi10 = 1;
@@ -138,13 +162,17 @@ tf_ticks_compute_log (TfTicks *ticks, double lo10, double hi10, guint target, gb
       lo10 = floor (lo10 / step + 1e-9) * step;
       hi10 = ceil (hi10 / step - 1e-9) * step;
     }
-  first = ceil (lo10 / step - 1e-9) * step;
-  last = floor (hi10 / step + 1e-9) * step;
+  /* a tight range keeps two labelled decades where it spans them */
+  ticks->n = count_ticks (lo10, hi10, step, 0, &first);
+  while (!loose && ticks->n < 2 && step > 1)
+    {
+      step = MAX (1.0, smaller_nice (step));
+      ticks->n = count_ticks (lo10, hi10, step, 0, &first);
+    }
   ticks->lo = lo10;
   ticks->hi = hi10;
   ticks->first = first;
   ticks->step = step;
-  ticks->n = last + 1e-9 >= first ? (guint) floor ((last - first) / step + 0.5) + 1 : 0;
   ticks->n_frac = 0;
   ticks->log = TRUE;
   ticks->minor = step == 1 && hi10 - lo10 <= 6.5;

@@ -92,8 +92,9 @@ tf_fig_options (const TfFigureOptions *options)
 }
 
 void
-tf_fig_begin (cairo_t *cr, const TfFigureTheme *theme, double width, double height)
+tf_fig_begin (cairo_t *cr, TfFigureTheme *theme, double width, double height)
 {
+  tf_figure_theme_fit (theme, width, height);
   cairo_new_path (cr);
   tf_figure_theme_set_source (cr, &theme->background);
   cairo_rectangle (cr, 0, 0, width, height);
@@ -226,7 +227,8 @@ tf_fig_marker (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
 {
   double x = tf_plot_area_map_x (area, x_value);
   double y = tf_plot_area_map_y (area, y_value);
-  double r = tf_figure_theme_pt (theme, 2.2);
+  /* an open marker rings a filled one at the same place: both stay seen */
+  double r = tf_figure_theme_pt (theme, filled ? 2.2 : 3.4);
 
   if (!isfinite (y_value) || y_value > area->y_hi || y_value < area->y_lo)
     return;
@@ -276,7 +278,16 @@ tf_fig_number (double value, int digits)
   if (a == 0)
     return g_strdup ("0");
   if (a >= 1e-4 && a < 1e6)
-    text = g_strdup_printf ("%.*g", digits, a);
+    {
+      text = g_strdup_printf ("%.*g", digits, a);
+      if (strchr (text, 'e'))
+        {
+          /* more whole digits than asked: rounded to them, never "1.2e+04" */
+          double unit = pow (10.0, floor (log10 (a)) + 1 - MAX (digits, 1));
+          g_free (text);
+          text = g_strdup_printf ("%.0f", round (a / unit) * unit);
+        }
+    }
   else
     {
       g_autofree char *mantissa = g_strdup_printf ("%.*e", MAX (digits - 1, 0), a);

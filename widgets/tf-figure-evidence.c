@@ -60,6 +60,8 @@ draw_grades (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
   double x = area->x + area->width + gap;
   static const double dash[] = { 1.0, 2.0 };
   double d[2] = { dash[0] * theme->scale, dash[1] * theme->scale };
+  double taken[2][2];           /* the rows of ↑ H0 and ↓ H1: no grade's name over them */
+  guint n_taken = 0;
 
   cairo_save (cr);
   /* the lines, both ways */
@@ -94,6 +96,7 @@ draw_grades (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
       tf_fig_text (cr, theme, &theme->muted, size, _("↑ H₀"), x, y - h * 1.05);
       /* TRANSLATORS: right of the BF01 = 1 line: below it the data favour H1 */
       tf_fig_text (cr, theme, &theme->muted, size, _("↓ H₁"), x, y + h * 0.05);
+      taken[n_taken][0] = y - h * 1.05, taken[n_taken++][1] = y + h * 1.05;
     }
 
   for (guint i = 0; i < n; i++)
@@ -104,41 +107,55 @@ draw_grades (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
         double lo = CLAMP (MIN (a, b), area->y_lo, area->y_hi);
         double hi = CLAMP (MAX (a, b), area->y_lo, area->y_hi);
         double y0 = tf_plot_area_map_y (area, hi), y1 = tf_plot_area_map_y (area, lo);
+        double top = (y0 + y1 - h) / 2;
+        gboolean free_row = TRUE;
 
         if (y1 - y0 < h * 1.05)
           continue;
-        tf_fig_text (cr, theme, &theme->muted, size, _(g[i].name), x, (y0 + y1 - h) / 2);
+        for (guint t = 0; t < n_taken; t++)
+          if (top < taken[t][1] && top + h > taken[t][0])
+            free_row = FALSE;
+        if (!free_row)
+          continue;
+        tf_fig_text (cr, theme, &theme->muted, size, _(g[i].name), x, top);
       }
   cairo_restore (cr);
 }
 
 /* Writes text beside the point (px, py): above right, above left, below right or below
- * left, the first that no curve crosses and that stays inside the area. */
+ * left, the first that stays inside the area and that neither the curve nor the
+ * reference line at height ref_y nor the chosen setting's vertical line crosses; failing
+ * that, the first the curve alone does not cross. */
 static void
 label_beside (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
-              const TfFigPoints *curve, double px, double py, const char *markup)
+              const TfFigPoints *curve, double px, double py, double ref_y, const char *markup)
 {
   double w = tf_fig_text_width (cr, theme, theme->text_size, markup);
   double h = tf_fig_text_height (cr, theme, theme->text_size, markup);
   double off = tf_figure_theme_pt (theme, 4.0);
-  TfPolyline lines[] = { { curve->x, curve->y, curve->n } };
+  double ref_x[2] = { area->x, area->x + area->width }, ref_ys[2] = { ref_y, ref_y };
+  double up_x[2] = { px, px }, up_y[2] = { area->y, area->y + area->height };
+  TfPolyline lines[] = { { curve->x, curve->y, curve->n }, { up_x, up_y, 2 }, { ref_x, ref_ys, 2 } };
   const double dx[] = { off, -off - w, off, -off - w };
   const double dy[] = { -off - h, -off - h, off, off };
   double x = px + dx[0], y = py + dy[0];
+  gboolean found = FALSE;
 
-  for (guint i = 0; i < G_N_ELEMENTS (dx); i++)
-    {
-      double lx = px + dx[i], ly = py + dy[i];
+  for (int pass = 0; pass < 2 && !found; pass++)
+    for (guint i = 0; i < G_N_ELEMENTS (dx) && !found; i++)
+      {
+        double lx = px + dx[i], ly = py + dy[i];
+        guint n_lines = pass == 1 ? 1 : isfinite (ref_y) ? 3 : 2;
 
-      if (lx < area->x || lx + w > area->x + area->width || ly < area->y
-          || ly + h > area->y + area->height)
-        continue;
-      if (tf_legend_box_is_clear (lines, 1, lx, ly, lx + w, ly + h))
-        {
-          x = lx, y = ly;
-          break;
-        }
-    }
+        if (lx < area->x || lx + w > area->x + area->width || ly < area->y
+            || ly + h > area->y + area->height)
+          continue;
+        if (tf_legend_box_is_clear (lines, n_lines, lx, ly, lx + w, ly + h))
+          {
+            x = lx, y = ly;
+            found = TRUE;
+          }
+      }
   x = CLAMP (x, area->x, area->x + area->width - w);
   y = CLAMP (y, area->y, area->y + area->height - h);
   tf_fig_text_halo (cr, theme, &theme->foreground, theme->text_size, markup, x, y);
@@ -304,9 +321,10 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
       cairo_line_to (cr, x, low_area.y + low_area.height);
       cairo_stroke (cr);
       cairo_restore (cr);
+      /* centred on the line, right of the y axis's labels, inside the figure */
       tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, chosen_label,
-                        CLAMP (x - w / 2, pad, width - pad - w),
-                        top_area.y - label_h - tf_figure_theme_pt (&theme, 1.5));
+                   MAX (MAX (MIN (x - w / 2, width - pad - w), MIN (top_area.x, width - pad - w)), pad),
+                   top_area.y - label_h - tf_figure_theme_pt (&theme, 1.5));
     }
 
   /* The curves, clipped to their panels. */
@@ -332,7 +350,9 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
           tf_fig_marker (cr, &theme, &top_area, TF_SERIES_EVIDENCE, cx,
                          curve->chosen_log_bf01 / G_LN10, TRUE);
           label_beside (cr, &theme, &top_area, &bf_line, px,
-                        tf_plot_area_map_y (&top_area, curve->chosen_log_bf01 / G_LN10), bf_text);
+                        tf_plot_area_map_y (&top_area, curve->chosen_log_bf01 / G_LN10),
+                        top_area.y_lo < 0 && top_area.y_hi > 0 ? tf_plot_area_map_y (&top_area, 0) : NAN,
+                        bf_text);
         }
       if (isfinite (curve->chosen_posterior_null))
         {
@@ -342,7 +362,8 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
           tf_fig_marker (cr, &theme, &low_area, TF_SERIES_EVIDENCE, cx,
                          curve->chosen_posterior_null, TRUE);
           label_beside (cr, &theme, &low_area, &p_line, px,
-                        tf_plot_area_map_y (&low_area, curve->chosen_posterior_null), p_text);
+                        tf_plot_area_map_y (&low_area, curve->chosen_posterior_null),
+                        tf_plot_area_map_y (&low_area, 0.5), p_text);
         }
     }
 
@@ -351,13 +372,16 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
     {
       double w = tf_fig_text_width (cr, &theme, theme.text_size, note);
       double h = tf_fig_text_height (cr, &theme, theme.text_size, note);
-      TfPolyline lines[] = { { bf_line.x, bf_line.y, bf_line.n } };
+      double cx = chosen_ok ? tf_plot_area_map_x (&top_area, coord (curve->chosen_x, curve->x_log))
+                            : -1;
+      double up_x[2] = { cx, cx }, up_y[2] = { top_area.y, low_area.y + low_area.height };
+      TfPolyline lines[] = { { bf_line.x, bf_line.y, bf_line.n }, { up_x, up_y, 2 } };
       double nx = top_area.x + gap, ny = top_area.y + gap;
 
-      if (!tf_legend_place (&top_area, w, h, gap, lines, 1, &nx, &ny))
+      if (!tf_legend_place (&top_area, w, h, gap, lines, 2, &nx, &ny))
         {
-          TfPolyline low[] = { { p_line.x, p_line.y, p_line.n } };
-          if (!tf_legend_place (&low_area, w, h, gap, low, 1, &nx, &ny))
+          TfPolyline low[] = { { p_line.x, p_line.y, p_line.n }, { up_x, up_y, 2 } };
+          if (!tf_legend_place (&low_area, w, h, gap, low, 2, &nx, &ny))
             nx = top_area.x + gap, ny = top_area.y + gap;
         }
       tf_fig_text_halo (cr, &theme, &theme.muted, theme.text_size, note, nx, ny);

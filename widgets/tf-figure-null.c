@@ -236,9 +236,10 @@ tf_figure_draw_null_distribution (cairo_t *cr, double width, double height, doub
       cairo_line_to (cr, x, area->y);
       cairo_stroke (cr);
       cairo_restore (cr);
+      /* centred on the line, right of the y axis's labels, inside the figure */
       tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, obs_label,
-                        CLAMP (x - w / 2, pad, width - pad - w),
-                        area->y - obs_h - tf_figure_theme_pt (&theme, 1.5));
+                   MAX (MAX (MIN (x - w / 2, width - pad - w), MIN (area->x, width - pad - w)), pad),
+                   area->y - obs_h - tf_figure_theme_pt (&theme, 1.5));
     }
 
   tf_axis_draw_bottom (cr, &theme, area, &layout.x_ticks, x_label);

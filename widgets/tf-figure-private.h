@@ -33,7 +33,8 @@ void tf_fig_stroke_series (cairo_t *cr, const TfFigureTheme *theme, TfSeries ser
                            const TfFigPoints *p);
 
 const TfFigureOptions *tf_fig_options (const TfFigureOptions *options);
-void tf_fig_begin (cairo_t *cr, const TfFigureTheme *theme, double width, double height);
+/* Fills the background; fits the theme's text to the figure's size. */
+void tf_fig_begin (cairo_t *cr, TfFigureTheme *theme, double width, double height);
 void tf_fig_message (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
                      const char *title, const char *reason);
 
@@ -51,7 +52,8 @@ void tf_fig_text_halo (cairo_t *cr, const TfFigureTheme *theme, const TfColour *
 /* An arrow from (x0, y0) to (x1, y1), head at the end. */
 void tf_fig_arrow (cairo_t *cr, const TfFigureTheme *theme, const TfColour *colour,
                    double x0, double y0, double x1, double y1);
-/* A round marker at data (x, y); filled or open (background inside). */
+/* A round marker at data (x, y); filled (2.2 pt) or open (3.4 pt, background inside,
+ * so that it rings a filled one at the same height). */
 void tf_fig_marker (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
                     TfSeries series, double x_value, double y_value, gboolean filled);
 /* A vertical line from the base to the top of the area ending in an arrow head: a point

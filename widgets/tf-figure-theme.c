@@ -72,6 +72,19 @@ tf_figure_theme_init (TfFigureTheme *theme, TfFigureStyle style, double scale)
   theme->tick_length = 3.0;
 }
 
+#define SMALL_WIDTH_PT (75.0 * 72.0 / 25.4)
+#define SMALL_HEIGHT_PT (55.0 * 72.0 / 25.4)
+
+void
+tf_figure_theme_fit (TfFigureTheme *theme, double width, double height)
+{
+  if (width < SMALL_WIDTH_PT * theme->scale || height < SMALL_HEIGHT_PT * theme->scale)
+    {
+      theme->text_size = 7.0;
+      theme->label_size = 7.5;
+    }
+}
+
 void
 tf_figure_theme_set_source (cairo_t *cr, const TfColour *colour)
 {

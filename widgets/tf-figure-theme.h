@@ -52,6 +52,11 @@ typedef struct {
 
 void tf_figure_theme_init (TfFigureTheme *theme, TfFigureStyle style, double scale);
 
+/* A figure smaller than about 75 × 55 mm (width and height in user units) sets its text
+ * at 7 pt and its axis labels at 7.5 pt, the smallest sizes journals usually ask for, so
+ * that labels leave the data room. */
+void tf_figure_theme_fit (TfFigureTheme *theme, double width, double height);
+
 /* Points to user units. */
 static inline double
 tf_figure_theme_pt (const TfFigureTheme *theme, double points)

@@ -50,6 +50,18 @@ map_vertical (const TfPlotArea *area, double x, TfFigPoints *out)
   out->y[1] = area->y;
 }
 
+/* Where the null's probability goes beside its spike: right of it, else left (then
+ * perhaps left of the area too: it does not fit beside). */
+static double
+mass_label_x (const TfFigureTheme *theme, const TfPlotArea *area, double null_value,
+              double label_width)
+{
+  double x = tf_plot_area_map_x (area, null_value);
+  double gap = tf_figure_theme_pt (theme, 3.0);
+
+  return x + gap + label_width > area->x + area->width ? x - gap - label_width : x + gap;
+}
+
 /* The posterior's mode for the legend: the core's, else (0: not filled in) the grid's
  * argmax, which is also right for a true mode at 0 on a grid starting there. */
 static double
@@ -74,7 +86,7 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
   g_autofree char *prior_note = NULL;
   const char *y_label = _("density");
   const char *parameter;
-  gboolean spike_posterior, spike_likelihood, interval_null, low_prior;
+  gboolean spike_posterior, spike_likelihood, interval_null, low_prior, mass_beside = FALSE;
   double prior_max, posterior_max, likelihood_max, y_max, null_h, top_extra, mode;
   double pad;
   guint posterior_at, likelihood_at;
@@ -201,12 +213,28 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
       tf_fig_points_clear (&likelihood);
       tf_fig_points_clear (&null_line);
       if (above)
-        for (legend_columns = n_entries; legend_columns > 1; legend_columns--)
-          {
-            tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
-            if (legend_w <= width - 2 * pad)
-              break;
-          }
+        {
+          for (legend_columns = n_entries; legend_columns > 1; legend_columns--)
+            {
+              tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
+              if (legend_w <= width - 2 * pad)
+                break;
+            }
+          /* a narrow figure: shorter names, in fewer rows */
+          if (legend_columns < n_entries)
+            {
+              if (!spike_posterior)
+                entries[0].markup = _("Posterior (H₁)");
+              entries[1].markup = _("Prior (H₁)");
+              entries[2].markup = _("Likelihood");
+              for (legend_columns = n_entries; legend_columns > 1; legend_columns--)
+                {
+                  tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
+                  if (legend_w <= width - 2 * pad)
+                    break;
+                }
+            }
+        }
       tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
       tf_fig_layout_single (cr, &theme, width, height,
                             top_extra + (above ? legend_h + tf_figure_theme_pt (&theme, 2.0) : 0),
@@ -229,21 +257,22 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
       lines[n_lines++] = (TfPolyline) { posterior.x, posterior.y, posterior.n };
       lines[n_lines++] = (TfPolyline) { likelihood.x, likelihood.y, likelihood.n };
       lines[n_lines++] = (TfPolyline) { null_line.x, null_line.y, null_line.n };
-      /* the point null's probability, written beside its spike: the legend keeps off it */
+      /* the point null's probability, written beside its spike where it fits inside the
+       * area (else beside the null's name above it): the legend keeps off it */
       if (mass_label && !interval_null)
         {
           double mw = tf_fig_text_width (cr, &theme, theme.text_size, mass_label);
           double mh = tf_fig_text_height (cr, &theme, theme.text_size, mass_label);
-          double nx = tf_plot_area_map_x (area, curves->null_value);
-          double g3 = tf_figure_theme_pt (&theme, 3.0);
-          double mx = nx + g3 + mw > area->x + area->width ? nx - g3 - mw : nx + g3;
+          double mx = mass_label_x (&theme, area, curves->null_value, mw);
           double my = area->y + tf_figure_theme_pt (&theme, 1.0);
 
+          mass_beside = mx >= area->x;
           box_x[0] = box_x[3] = box_x[4] = mx;
           box_x[1] = box_x[2] = mx + mw;
           box_y[0] = box_y[1] = box_y[4] = my;
           box_y[2] = box_y[3] = my + mh;
-          lines[n_lines++] = (TfPolyline) { box_x, box_y, 5 };
+          if (mass_beside)
+            lines[n_lines++] = (TfPolyline) { box_x, box_y, 5 };
         }
 
       if (!above)
@@ -328,14 +357,19 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
           if (mass_label)
             {
               double mw = tf_fig_text_width (cr, &theme, theme.text_size, mass_label);
-              double gap = tf_figure_theme_pt (&theme, 3.0);
-              double mx = x + gap;
 
               tf_fig_spike (cr, &theme, area, TF_SERIES_NULL, curves->null_value);
-              if (mx + mw > area->x + area->width)
-                mx = x - gap - mw;
-              tf_fig_text_halo (cr, &theme, &theme.foreground, theme.text_size, mass_label,
-                                mx, area->y + tf_figure_theme_pt (&theme, 1.0));
+              if (mass_beside)
+                tf_fig_text_halo (cr, &theme, &theme.foreground, theme.text_size, mass_label,
+                                  mass_label_x (&theme, area, curves->null_value, mw),
+                                  area->y + tf_figure_theme_pt (&theme, 1.0));
+              else
+                {
+                  /* beside the null's name, on its line above the area */
+                  char *both = g_strdup_printf ("%s   %s", null_label, mass_label);
+                  g_free (null_label);
+                  null_label = both;
+                }
             }
           else
             {
@@ -359,8 +393,10 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
       else
         x = tf_plot_area_map_x (area, (curves->null_low + curves->null_high) / 2);
 
+      /* centred on the null, inside the figure and right of the y axis's labels */
       w = tf_fig_text_width (cr, &theme, theme.text_size, null_label);
-      lx = CLAMP (x - w / 2, pad, width - w - pad);
+      lx = MAX (MIN (x - w / 2, width - w - pad), MIN (area->x, width - w - pad));
+      lx = MAX (lx, pad);
       tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, null_label, lx,
                         area->y - null_h - tf_figure_theme_pt (&theme, 1.5));
     }
