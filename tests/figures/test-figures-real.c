@@ -14,8 +14,8 @@
 #include "test-figures.h"
 
 /* Data for each design, invented for the test (sizes and values of the ordinary kind). */
-static TfAnalysis *
-design_analysis (TfDesign design)
+TfAnalysis *
+test_design_analysis (TfDesign design)
 {
   TfAnalysis *a = tf_analysis_new (design);
 
@@ -140,7 +140,7 @@ test_every_design_kind_format (void)
   g_assert_nonnull (dir);
   for (guint d = 0; d < TF_N_DESIGNS; d++)
     {
-      g_autoptr (TfAnalysis) analysis = design_analysis ((TfDesign) d);
+      g_autoptr (TfAnalysis) analysis = test_design_analysis ((TfDesign) d);
       g_autoptr (GPtrArray) problems = tf_problem_list_new ();
 
       if (!tf_analysis_validate (analysis, problems))
@@ -200,7 +200,7 @@ test_every_design_kind_format (void)
 static void
 test_readout (void)
 {
-  g_autoptr (TfAnalysis) analysis = design_analysis (TF_DESIGN_ONE_PROPORTION);
+  g_autoptr (TfAnalysis) analysis = test_design_analysis (TF_DESIGN_ONE_PROPORTION);
   g_autofree char *why_not = NULL;
   g_autoptr (TfFigure) figure = tf_figure_new (analysis, TF_FIGURE_DENSITIES, &why_not);
   g_autoptr (TfDensityCurves) curves = tf_density_curves_new (analysis, 401, NULL);
@@ -234,7 +234,7 @@ test_readout (void)
 static void
 test_not_applicable_message (void)
 {
-  g_autoptr (TfAnalysis) analysis = design_analysis (TF_DESIGN_ONE_PROPORTION);
+  g_autoptr (TfAnalysis) analysis = test_design_analysis (TF_DESIGN_ONE_PROPORTION);
 
   for (guint k = 0; k < TF_N_FIGURE_KINDS; k++)
     {

@@ -440,11 +440,18 @@ test_numbers (void)
   g_autofree char *b = tf_fig_number (3.2e-12, 3);
   g_autofree char *c = tf_fig_number (-12000, 6);
   g_autofree char *d = tf_fig_number (NAN, 3);
+  g_autofree char *e = tf_fig_number (12000, 4);
+  g_autofree char *f = tf_fig_number (9999.6, 4);
+  g_autofree char *g = tf_fig_number (123456, 3);
 
   g_assert_cmpstr (a, ==, "0.8094");
   g_assert_cmpstr (b, ==, "3.2 × 10<sup>\u221212</sup>");
   g_assert_cmpstr (c, ==, "\u221212000");
   g_assert_cmpstr (d, ==, "—");
+  /* whole numbers with more digits than asked: rounded, no "e+04" */
+  g_assert_cmpstr (e, ==, "12000");
+  g_assert_cmpstr (f, ==, "10000");
+  g_assert_cmpstr (g, ==, "123000");
 }
 
 int
@@ -466,5 +473,6 @@ main (int argc, char **argv)
   g_test_add_func ("/figures/axis/log-ticks", test_log_ticks);
   g_test_add_func ("/figures/numbers", test_numbers);
   test_add_real_cases ();
+  test_add_mark_cases ();
   return g_test_run ();
 }

@@ -5,6 +5,7 @@
 
 #include <cairo.h>
 #include "tf-figure-theme.h"
+#include "tf-analysis.h"
 
 /* The pixel at x, y of an RGB24/ARGB32 image surface, as r, g, b in 0..1. */
 void test_pixel_at (cairo_surface_t *surface, int x, int y, double rgb[3]);
@@ -20,4 +21,8 @@ gboolean test_edges_blank (cairo_surface_t *surface, int edge, const TfColour *b
 /* Writes the surface to $TF_FIGURE_TEST_DIR/name.png when that is set (to look at). */
 void test_keep_png (cairo_surface_t *surface, const char *name);
 
+/* Ordinary data for each design, invented for the tests. */
+TfAnalysis *test_design_analysis (TfDesign design);
+
 void test_add_real_cases (void);
+void test_add_mark_cases (void);
