@@ -1,113 +1,219 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-incbeta-inverse.c: the inverse of the regularised incomplete beta function.
+ *
+ * The quantile is sought for the smaller tail (p <= ½), as a lower-tail quantile w of
+ * Beta(p, q) (the upper tail of Beta(a, b) at x being the lower tail of Beta(b, a) at
+ * 1 − x), in t = ln w or t = ln(1 − w), whichever side is the smaller, so that a
+ * quantile at 1e-300 or at 1 − 1e-300 is found with the same relative accuracy. From
+ * a published starting value, Halley's method on ln tail(t) uses the density that the
+ * same evaluation gives; a bracket keeps every step safe.
  */
 #include "tf-incbeta.h"
+#include "tf-incbeta-private.h"
 #include "tf-logspace.h"
 
 #include <math.h>
 #include <float.h>
 #include <gsl/gsl_cdf.h>
 
-/* ln of the requested tail at x. */
+/* ln of the smallest subnormal is −744.44: below this t the quantile is 0. */
+#define T_MIN (-744.0)
+
+/* The standard normal z with ln Φ(z) = lp <= −ln 2: GSL's quantile (Wichura 1988,
+ * AS 241) while e^lp is a normal double, else the tail ln Φ(z) ≈ −z²/2 − ½ ln(2π z²)
+ * (Abramowitz & Stegun 1964, 26.2.12) solved by fixed-point steps. */
 static double
-log_tail (double x, double a, double b, gboolean lower)
+normal_quantile_log (double lp)
 {
-  double l, u;
-  tf_incbeta_log_both (x, 1.0 - x, a, b, &l, &u);
-  return lower ? l : u;
+  if (lp > -700.0)
+    return gsl_cdf_ugaussian_Pinv (exp (lp));
+  double z2 = -2.0 * lp;
+  for (int i = 0; i < 4; i++)
+    z2 = -2.0 * lp - log (2.0 * G_PI * z2);
+  return -sqrt (z2);
 }
 
-/* Starting value: the normal approximation to Beta(a, b) with its skewness
- * correction (Cornish & Fisher 1937, first term), clipped into (0, 1). */
+/* ln(1 + e^l) without overflow. */
 static double
-initial_guess (double lp, double a, double b, gboolean lower)
+softplus (double l)
 {
-  double s = a + b;
-  double mean = a / s;
-  double sd = sqrt (a * b / (s * s * (s + 1.0)));
-  double z;
+  return l > 0.0 ? l + log1p (exp (-l)) : log1p (exp (l));
+}
 
-  if (lp < -700.0)
-    z = -sqrt (-2.0 * lp);
+/* Given ln v of one side's value (side 0: w, side 1: 1 − w), the smaller side and
+ * its ln. */
+static void
+pick_side (double lv, int v_side, int *side, double *t)
+{
+  if (lv <= -G_LN2)
+    {
+      *side = v_side;
+      *t = lv;
+    }
   else
-    z = gsl_cdf_ugaussian_Pinv (exp (lp));
-  if (!lower)
-    z = -z;
-  double skew = 2.0 * (b - a) * sqrt (s + 1.0) / ((s + 2.0) * sqrt (a * b));
-  z += skew / 6.0 * (z * z - 1.0);
-  double x = mean + z * sd;
-  if (!(x > 0.0 && x < 1.0))
-    x = mean;
-  return x;
+    {
+      *side = 1 - v_side;
+      *t = tf_log1mexp (lv);
+    }
+  *t = MAX (*t, T_MIN);
 }
 
-/* The x with ln(tail) = lp: safeguarded Newton's method on ln I_x, which is concave
- * in x for the lower tail of a log-concave density, with bisection (geometric when the
- * bracket spans decades) whenever a step would leave the bracket
- * (Press et al. 2007, "rtsafe"). */
-double
-tf_incbeta_inverse_log (double lp, double a, double b, gboolean lower)
+/* A starting value for the lower-tail quantile w of Beta(p, q) at ln P = lp <= −ln 2,
+ * as a side and t: Carter's (1947) approximation w = p / (p + q e^{2e}) when both
+ * shapes exceed 1, else the power-law tails or the χ² approximation, all in log space
+ * (Cran, Martin & Thomas 1977, AS 109; Majumder & Bhattacharjee 1973, AS 64), with
+ * the exact normal quantile in place of their rational one. */
+static void
+initial_guess (TfIncbetaShape *sh, double lp, double p, double q, int *side, double *t)
 {
+  double y = -normal_quantile_log (lp);   /* upper normal quantile, >= 0 */
+
+  if (p > 1.0 && q > 1.0)
+    {
+      double r = (y * y - 3.0) / 6.0;
+      double s = 1.0 / (p + p - 1.0), u = 1.0 / (q + q - 1.0);
+      double h = 2.0 / (s + u);
+      double e = y * sqrt (h + r) / h - (u - s) * (r + 5.0 / 6.0 - 2.0 / (3.0 * h));
+      double l = 2.0 * e + log (q / p);    /* w = 1 / (1 + e^l) */
+      if (l >= 0.0)
+        pick_side (-softplus (l), 0, side, t);
+      else
+        pick_side (-softplus (-l), 1, side, t);
+      return;
+    }
+  double lb = tf_incbeta_shape_log_beta (sh);
+  double r = q + q, c = 1.0 / (9.0 * q);
+  double chi = r * pow (1.0 - c + y * sqrt (c), 3.0);
+  if (chi <= 0.0)
+    {
+      /* 1 − w = (q B (1 − P))^{1/q} */
+      pick_side ((tf_log1mexp (lp) + log (q) + lb) / q, 1, side, t);
+      return;
+    }
+  chi = (4.0 * p + r - 2.0) / chi;
+  if (chi <= 1.0)
+    pick_side ((lp + log (p) + lb) / p, 0, side, t);   /* w = (p B P)^{1/p} */
+  else
+    pick_side (G_LN2 - log1p (chi), 1, side, t);       /* 1 − w = 2 / (1 + χ) */
+}
+
+/* The frame's quantile w (side 0: e^t, side 1: 1 − e^t) as x of the tail asked. */
+static double
+answer (int side, double t, gboolean lower)
+{
+  double v = exp (t);
+  /* lower: x = w; upper: x = 1 − w */
+  return (side == 0) == lower ? v : 1.0 - v;
+}
+
+double
+tf_incbeta_shape_inverse_log (TfIncbetaShape *sh, double lp, gboolean lower)
+{
+  const double a = sh->a, b = sh->b;
+
   if (!(a > 0.0) || !(b > 0.0) || isnan (lp) || lp > 0.0)
     return NAN;
   if (lp == 0.0)
     return lower ? 1.0 : 0.0;
   if (lp == -INFINITY)
     return lower ? 0.0 : 1.0;
-
-  double lo = 0.0, hi = 1.0;    /* the root lies in [lo, hi] */
-  double x = initial_guess (lp, a, b, lower);
-
-  for (int iter = 0; iter < 400; iter++)
+  if (lp > -G_LN2)
     {
-      double g = log_tail (x, a, b, lower) - lp;   /* increasing in x when lower */
+      lp = tf_log1mexp (lp);
+      lower = !lower;
+    }
+
+  /* the frame: the lower tail of Beta(p, q) */
+  const double p = lower ? a : b, q = lower ? b : a;
+  int side;
+  double t;
+  initial_guess (sh, lp, p, q, &side, &t);
+
+  const double s = p + q, sd = sqrt (p / s * (q / s) / (s + 1.0));
+  double lo = -INFINITY, hi = 0.0;   /* the root lies in (lo, hi) */
+
+  for (int iter = 0; iter < 300; iter++)
+    {
+      if (t > -G_LN2)
+        {
+          /* the other side is the smaller now: t = ln(1 − e^t), the bracket mapped */
+          double l0 = lo;
+          side = 1 - side;
+          t = tf_log1mexp (t);
+          lo = tf_log1mexp (hi);
+          hi = tf_log1mexp (l0);
+        }
+      double v = exp (t), vc = 1.0 - v;
+      /* the natural scale of t, sd / (the side's value), at most 1 */
+      double scale = MIN (1.0, sd / v);
+      double lv = t, lvc = log1p (-v);
+      /* w and 1 − w, and x, y = 1 − x of the tail asked */
+      double w = side ? vc : v, wc = side ? v : vc;
+      double lw = side ? lvc : lv, lwc = side ? lv : lvc;
+      double l, u, lpre;
+      if (lower)
+        tf_incbeta_shape_log_both (sh, w, wc, &l, &u, &lpre);
+      else
+        tf_incbeta_shape_log_both (sh, wc, w, &u, &l, &lpre);
+      double g = l - lp;    /* rises with w */
       if (isnan (g))
         return NAN;
       if (g == 0.0)
-        return x;
-      gboolean x_too_big = lower ? g > 0.0 : g < 0.0;
-      if (x_too_big)
-        hi = x;
+        return answer (side, t, lower);
+      if ((g > 0.0) == (side == 0))
+        hi = t;
       else
-        lo = x;
+        lo = t;
 
-      /* d/dx ln(tail) = ± density / tail */
-      double ld = tf_log_dbeta (x, 1.0 - x, a, b);
-      double lt = g + lp;
-      double slope = exp (ld - lt);
-      if (!lower)
-        slope = -slope;
-      double xn = x - g / slope;
-      if (!(xn > lo && xn < hi) || !isfinite (xn))
+      /* dg/dt and d²g/dt² from the density w^{p−1} (1 − w)^{q−1} / B = e^lpre / (w (1 − w)) */
+      double g1, g2;
+      if (side == 0)
         {
-          if (lo == 0.0 && hi <= DBL_MIN)
-            return 0.0;         /* the quantile underflows */
-          if (lo > 0.0 && hi / lo > 4.0)
-            xn = sqrt (lo * hi);
-          else if (lo == 0.0 && hi < 1e-3)
-            xn = hi * 1e-3;
-          else if (hi == 1.0 && lo > 1.0 - 1e-3)
-            xn = 1.0 - (1.0 - lo) * 1e-3;
-          else
-            xn = 0.5 * (lo + hi);
-          if (xn <= lo || xn >= hi)
-            xn = 0.5 * (lo + hi);
-          if (xn <= lo || xn >= hi)
-            {
-              /* No double lies strictly inside the bracket: the quantile rounds to
-               * one of its ends. */
-              if (hi == 1.0)
-                return 1.0;
-              return lo == 0.0 ? 0.0 : x;
-            }
+          g1 = exp (lpre - lwc - l);
+          g2 = g1 * (p - (q - 1.0) * (w / wc) - g1);
         }
-      if (fabs (xn - x) <= 0.5 * DBL_EPSILON * MIN (x, 1.0 - x) || fabs (xn - x) < DBL_MIN)
-        return xn;
-      if (hi - lo <= 0.5 * DBL_EPSILON * MIN (lo, 1.0 - hi) && lo > 0.0)
-        return xn;
-      x = xn;
+      else
+        {
+          g1 = -exp (lpre - lw - l);
+          g2 = g1 * (q - (p - 1.0) * (wc / w) - g1);
+        }
+      double newton = -g / g1;
+      double c = 0.5 * newton * g2 / g1;
+      double step = fabs (c) <= 0.5 ? newton / (1.0 + c) : newton;  /* Halley, or Newton */
+      /* Far below a quantile near 1 the tail falls like e^{−p(1 − w)} (the gamma limit,
+       * ln Q(q, u) ≈ −u + (q − 1) ln u, u = p(1 − w), slope −u + q − 1 in t): there
+       * Newton's step in 1 − w itself, not in its log */
+      if (side == 1 && g1 < -2.0 * MAX (q, 1.0) && newton < 0.0 && newton > -1.0)
+        step = log1p (newton);
+      double tn = t + step;
+      double tol = 1e-8 * MIN (scale, fabs (g1 / g2));
+      if (tn == t || (tn > lo && tn < hi && isfinite (tn)))
+        {
+          if (fabs (step) <= tol || tn == t)
+            return answer (side, tn, lower);
+        }
+      else
+        {
+          /* outside the bracket: halve it, or walk down while it is open below */
+          if (hi <= T_MIN)
+            return answer (side, -INFINITY, lower);    /* the quantile underflows */
+          tn = isinf (lo) ? MAX (2.0 * hi - 1.0, T_MIN) : 0.5 * (lo + hi);
+          if (!(tn > lo && tn < hi))
+            return answer (side, t, lower);
+        }
+      if (hi - lo <= 2.0 * DBL_EPSILON * fabs (tn))
+        return answer (side, tn, lower);
+      t = tn;
     }
-  return x;
+  return answer (side, t, lower);
+}
+
+double
+tf_incbeta_inverse_log (double log_p, double a, double b, gboolean lower)
+{
+  TfIncbetaShape sh;
+  tf_incbeta_shape_init (&sh, a, b);
+  return tf_incbeta_shape_inverse_log (&sh, log_p, lower);
 }
 
 double
@@ -115,5 +221,8 @@ tf_incbeta_inverse (double p, double a, double b, gboolean lower)
 {
   if (!(p >= 0.0 && p <= 1.0))
     return NAN;
+  /* the smaller tail, 1 − p being exact for p >= ½ */
+  if (p > 0.5)
+    return tf_incbeta_inverse_log (log1p (-p), a, b, !lower);
   return tf_incbeta_inverse_log (log (p), a, b, lower);
 }

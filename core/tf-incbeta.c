@@ -80,30 +80,76 @@ tf_incbeta_lambda (double a, double b, double x, double y)
   return sum_compensated (t, 5);
 }
 
-/* ln[x^a y^b / B(a, b)] in deviance form: −bd0(a, sx) − bd0(b, sy) + ½ ln(ab / 2πs)
- * − δ(a) − δ(b) + δ(s), s = a + b (DiDonato & Morris 1992, "brcomp"; Loader 2000). */
-double
-tf_incbeta_log_prefactor (double a, double b, double x, double y, double lambda)
+/* The shape's Stirling corrections and ½ ln(ab / 2πs), once. */
+static void
+shape_prepare (TfIncbetaShape *sh)
 {
-  double s = a + b;
+  if (!isnan (sh->stirling))
+    return;
+  double s = sh->a + sh->b;
+  sh->stirling = tf_stirling_remainder (sh->a) + tf_stirling_remainder (sh->b)
+                 - tf_stirling_remainder (s);
+  sh->half_log = 0.5 * (log (sh->a) + log (sh->b) - log (s) - TF_LN_2PI);
+}
+
+double
+tf_incbeta_shape_log_beta (TfIncbetaShape *sh)
+{
+  if (isnan (sh->log_beta))
+    sh->log_beta = tf_log_beta (sh->a, sh->b);
+  return sh->log_beta;
+}
+
+void
+tf_incbeta_shape_init (TfIncbetaShape *sh, double a, double b)
+{
+  sh->a = a;
+  sh->b = b;
+  sh->stirling = sh->half_log = sh->log_beta = NAN;
+  sh->temme_done[0] = sh->temme_done[1] = -1;
+}
+
+/* bd0(a, s x) + bd0(b, s y), the deviance of the prefactor; NAN when s x or s y is so
+ * small that the direct form is needed. */
+static double
+deviance (const TfIncbetaShape *sh, double x, double y, double lambda)
+{
+  double s = sh->a + sh->b;
   double mx = s * x, my = s * y;
 
   if (mx < 1e-200 || my < 1e-200)
+    return NAN;
+  return tf_bd0_delta (sh->a, mx, lambda) + tf_bd0_delta (sh->b, my, -lambda);
+}
+
+/* ln[x^a y^b / B(a, b)] in deviance form: −bd0(a, sx) − bd0(b, sy) + ½ ln(ab / 2πs)
+ * − δ(a) − δ(b) + δ(s), s = a + b (DiDonato & Morris 1992, "brcomp"; Loader 2000),
+ * given the deviance (NAN: directly). */
+static double
+shape_log_prefactor (TfIncbetaShape *sh, double x, double y, double dev)
+{
+  if (isnan (dev))
     {
       double lx, ly;
       log_xy (x, y, &lx, &ly);
-      return a * lx + b * ly - tf_log_beta (a, b);
+      return sh->a * lx + sh->b * ly - tf_incbeta_shape_log_beta (sh);
     }
-  return -tf_bd0_delta (a, mx, lambda) - tf_bd0_delta (b, my, -lambda)
-         + 0.5 * (log (a) + log (b) - log (s) - TF_LN_2PI)
-         - tf_stirling_remainder (a) - tf_stirling_remainder (b)
-         + tf_stirling_remainder (s);
+  shape_prepare (sh);
+  return -dev + sh->half_log - sh->stirling;
+}
+
+double
+tf_incbeta_log_prefactor (double a, double b, double x, double y, double lambda)
+{
+  TfIncbetaShape sh;
+  tf_incbeta_shape_init (&sh, a, b);
+  return shape_log_prefactor (&sh, x, y, deviance (&sh, x, y, lambda));
 }
 
 /* ln I_x(a, b) by the hypergeometric power series, for b x <= 0.7 and x <= 0.8
  * (DiDonato & Morris 1992, "bpser"; Abramowitz & Stegun 1964, 26.5.4). */
 static double
-log_bpser (double a, double b, double x, double y)
+log_bpser (double a, double b, double x, double y, double log_beta)
 {
   double lx, ly;
   double c = 1.0, sum = 0.0;
@@ -117,14 +163,14 @@ log_bpser (double a, double b, double x, double y)
       if (fabs (term) <= 1e-17 * fabs (sum) || c == 0.0)
         break;
     }
-  return a * lx - log (a) - tf_log_beta (a, b) + log1p (a * sum);
+  return a * lx - log (a) - log_beta + log1p (a * sum);
 }
 
 /* The continued fraction for I_x(a, b) in terms of λ = a − (a + b) x, for x below
  * the mean, by the modified Lentz method (DiDonato & Morris 1992, "bfrac";
  * Lentz 1976; Thompson & Barnett 1986). Returns NAN when it does not converge. */
 static double
-log_bfrac (double a, double b, double x, double y, double lambda)
+log_bfrac (double a, double b, double x, double y, double lambda, double log_prefactor)
 {
   const double tiny = 1e-300;
   double f = a * (lambda + 1.0) / (a + 1.0);
@@ -156,7 +202,7 @@ log_bfrac (double a, double b, double x, double y, double lambda)
     }
   if (!converged || !(f > 0.0))
     return NAN;
-  return tf_incbeta_log_prefactor (a, b, x, y, lambda) - log (f);
+  return log_prefactor - log (f);
 }
 
 /* exp(z²) erfc(z), z >= 0: from GSL's erfc below 5, by Laplace's continued fraction
@@ -186,18 +232,64 @@ erfcx (double z)
   return 1.0 / (TF_SQRT_PI * f);
 }
 
-#define BASYM_TERMS 20
+#define BASYM_TERMS TF_INCBETA_TEMME_TERMS
+
+/* The coefficients of Temme's expansion for the shapes in orientation o (0: (a, b),
+ * 1: (b, a)) up to term n + 1, n even, extending those already in the shape
+ * (J. C. P. Miller's power-series recurrence for the (−(i+1)/2)-th powers). */
+static void
+basym_coefficients (TfIncbetaShape *sh, int o, int n, double h, double r0, double r1)
+{
+  double *ac = sh->temme_a[o], *cc = sh->temme_c[o], *dc = sh->temme_d[o];
+  double bc[BASYM_TERMS + 2];
+  double h2 = h * h;
+
+  if (sh->temme_done[o] < 0)
+    {
+      ac[0] = 2.0 / 3.0 * r1;
+      cc[0] = -0.5 * ac[0];
+      dc[0] = -cc[0];
+      sh->temme_hs[o] = sh->temme_hn[o] = 1.0;
+      sh->temme_done[o] = 0;
+    }
+  for (int m = sh->temme_done[o] + 2; m <= n; m += 2)
+    {
+      sh->temme_hn[o] *= h2;
+      ac[m - 1] = 2.0 * r0 * (1.0 + h * sh->temme_hn[o]) / (m + 2.0);
+      sh->temme_hs[o] += sh->temme_hn[o];
+      ac[m] = 2.0 * r1 * sh->temme_hs[o] / (m + 3.0);
+      for (int i = m; i <= m + 1; i++)
+        {
+          double r = -0.5 * (i + 1.0);
+          bc[0] = r * ac[0];
+          for (int q = 2; q <= i; q++)
+            {
+              double bsum = 0.0;
+              for (int j = 1; j <= q - 1; j++)
+                bsum += (j * r - (q - j)) * ac[j - 1] * bc[q - j - 1];
+              bc[q - 1] = r * ac[q - 1] + bsum / q;
+            }
+          cc[i - 1] = bc[i - 1] / (i + 1.0);
+          double dsum = 0.0;
+          for (int j = 1; j <= i - 1; j++)
+            dsum += dc[i - j - 1] * cc[j - 1];
+          dc[i - 1] = -(dsum + cc[i - 1]);
+        }
+      sh->temme_done[o] = m;
+    }
+}
 
 /* ln I_x(a, b) for large a and b with λ = a − (a + b) x >= 0 small against a and b,
  * by Temme's uniform asymptotic expansion in terms of erfc (Temme 1987, SIAM J. Math.
- * Anal. 18:1638; in the form of DiDonato & Morris 1992, "basym"). */
+ * Anal. 18:1638; in the form of DiDonato & Morris 1992, "basym"), given the deviance
+ * f; (a, b) are the shapes in orientation o. */
 static double
-log_basym (double a, double b, double f)
+log_basym (TfIncbetaShape *sh, int o, double f)
 {
   const double e0 = 2.0 / TF_SQRT_PI;   /* 2/√π */
   const double e1 = 0.353553390593273762200422181052; /* 2^(−3/2) */
+  double a = o ? sh->b : sh->a, b = o ? sh->a : sh->b;
   double h, r0, r1, w0;
-  double ac[BASYM_TERMS + 2], bc[BASYM_TERMS + 2], cc[BASYM_TERMS + 2], dc[BASYM_TERMS + 2];
 
   if (a < b)
     {
@@ -217,40 +309,17 @@ log_basym (double a, double b, double f)
   double z = z0 * G_SQRT2;
   double z2 = f + f;
 
-  ac[0] = 2.0 / 3.0 * r1;
-  cc[0] = -0.5 * ac[0];
-  dc[0] = -cc[0];
+  basym_coefficients (sh, o, 0, h, r0, r1);
+  const double *dc = sh->temme_d[o];
   double j0 = 0.25 * TF_SQRT_PI * erfcx (z0);
   double j1 = e1;
   double sum = j0 + dc[0] * w0 * j1;
 
-  double hs = 1.0, h2 = h * h, hn = 1.0, w = w0;
+  double w = w0;
   double znm1 = z, zn = z2;
   for (int n = 2; n <= BASYM_TERMS; n += 2)
     {
-      hn *= h2;
-      ac[n - 1] = 2.0 * r0 * (1.0 + h * hn) / (n + 2.0);
-      hs += hn;
-      ac[n] = 2.0 * r1 * hs / (n + 3.0);
-      for (int i = n; i <= n + 1; i++)
-        {
-          /* Coefficients of the (−(i+1)/2)-th power of the series with coefficients
-           * ac (J. C. P. Miller's power-series recurrence). */
-          double r = -0.5 * (i + 1.0);
-          bc[0] = r * ac[0];
-          for (int m = 2; m <= i; m++)
-            {
-              double bsum = 0.0;
-              for (int j = 1; j <= m - 1; j++)
-                bsum += (j * r - (m - j)) * ac[j - 1] * bc[m - j - 1];
-              bc[m - 1] = r * ac[m - 1] + bsum / m;
-            }
-          cc[i - 1] = bc[i - 1] / (i + 1.0);
-          double dsum = 0.0;
-          for (int j = 1; j <= i - 1; j++)
-            dsum += dc[i - j - 1] * cc[j - 1];
-          dc[i - 1] = -(dsum + cc[i - 1]);
-        }
+      basym_coefficients (sh, o, n, h, r0, r1);
       j0 = e1 * znm1 + (n - 1.0) * j0;
       j1 = e1 * zn + n * j1;
       znm1 *= z2;
@@ -263,35 +332,45 @@ log_basym (double a, double b, double f)
       if (fabs (t0) + fabs (t1) <= 1e-16 * sum)
         break;
     }
-  double bcorr = tf_stirling_remainder (a) + tf_stirling_remainder (b)
-                 - tf_stirling_remainder (a + b);
-  return log (e0) - f - bcorr + log (sum);
+  shape_prepare (sh);
+  return log (e0) - f - sh->stirling + log (sum);
 }
 
-/* ln I_x(a, b) for x at or below the mean, λ = a − (a + b) x >= 0: the regime
- * choice of DiDonato & Morris (1992). */
+/* ln I_x(a, b) for x at or below the mean, λ = a − (a + b) x >= 0, (a, b) the shapes
+ * in orientation o, dev and lpre the deviance and log prefactor (NAN until computed):
+ * the regime choice of DiDonato & Morris (1992). */
 static double
-log_lower_tail (double a, double b, double x, double y, double lambda)
+log_lower_tail (TfIncbetaShape *sh, int o, double x, double y, double lambda,
+                double *dev, double *lpre)
 {
+  double a = o ? sh->b : sh->a, b = o ? sh->a : sh->b;
+
   if (b * x <= 0.7 && x <= 0.8)
-    return log_bpser (a, b, x, y);
+    return log_bpser (a, b, x, y, tf_incbeta_shape_log_beta (sh));
   double mn = MIN (a, b);
   if (mn > 100.0 && lambda <= 0.03 * mn)
     {
-      double s = a + b;
-      double f = tf_bd0_delta (a, s * x, lambda) + tf_bd0_delta (b, s * y, -lambda);
-      return log_basym (a, b, f);
+      /* the deviance is symmetric in the orientation */
+      *dev = o ? deviance (sh, y, x, -lambda) : deviance (sh, x, y, lambda);
+      return log_basym (sh, o, *dev);
     }
   if (a * y <= 0.7 && y <= 0.8)
-    return tf_log1mexp (log_bpser (b, a, y, x));
-  return log_bfrac (a, b, x, y, lambda);
+    return tf_log1mexp (log_bpser (b, a, y, x, tf_incbeta_shape_log_beta (sh)));
+  *dev = o ? deviance (sh, y, x, -lambda) : deviance (sh, x, y, lambda);
+  *lpre = o ? shape_log_prefactor (sh, y, x, *dev) : shape_log_prefactor (sh, x, y, *dev);
+  return log_bfrac (a, b, x, y, lambda, *lpre);
 }
 
-/* Both tails in log space. */
+/* Both tails in log space, and the prefactor when asked. */
 void
-tf_incbeta_log_both (double x, double y, double a, double b, double *log_lower,
-                     double *log_upper)
+tf_incbeta_shape_log_both (TfIncbetaShape *sh, double x, double y, double *log_lower,
+                           double *log_upper, double *log_prefactor)
 {
+  const double a = sh->a, b = sh->b;
+  double dev = NAN, lpre = NAN;
+
+  if (log_prefactor != NULL)
+    *log_prefactor = NAN;
   if (!(a > 0.0) || !(b > 0.0) || isnan (x) || isnan (y) || x < 0.0 || y < 0.0)
     {
       *log_lower = *log_upper = NAN;
@@ -312,16 +391,35 @@ tf_incbeta_log_both (double x, double y, double a, double b, double *log_lower,
   double lambda = tf_incbeta_lambda (a, b, x, y);
   if (lambda >= 0.0)
     {
-      *log_lower = log_lower_tail (a, b, x, y, lambda);
+      *log_lower = log_lower_tail (sh, 0, x, y, lambda, &dev, &lpre);
       *log_upper = tf_log1mexp (*log_lower);
     }
   else
     {
-      *log_upper = log_lower_tail (b, a, y, x, -lambda);
+      *log_upper = log_lower_tail (sh, 1, y, x, -lambda, &dev, &lpre);
       *log_lower = tf_log1mexp (*log_upper);
+    }
+  if (log_prefactor != NULL)
+    {
+      if (isnan (lpre))
+        {
+          if (isnan (dev))
+            dev = deviance (sh, x, y, lambda);
+          lpre = shape_log_prefactor (sh, x, y, dev);
+        }
+      *log_prefactor = lpre;
     }
 }
 
+/* Both tails in log space. */
+void
+tf_incbeta_log_both (double x, double y, double a, double b, double *log_lower,
+                     double *log_upper)
+{
+  TfIncbetaShape sh;
+  tf_incbeta_shape_init (&sh, a, b);
+  tf_incbeta_shape_log_both (&sh, x, y, log_lower, log_upper, NULL);
+}
 double
 tf_incbeta_log_lower (double x, double y, double a, double b)
 {
