@@ -159,8 +159,14 @@ tf_ticks_compute_log (TfTicks *ticks, double lo10, double hi10, guint target, gb
   step = MAX (1.0, tf_nice_number ((hi10 - lo10) / (target - 1), TRUE));
   if (loose)
     {
-      lo10 = floor (lo10 / step + 1e-9) * step;
-      hi10 = ceil (hi10 / step - 1e-9) * step;
+      /* out to whole labelled steps, or only to whole decades where a step would add
+       * more than a quarter of the span (data over 10^-0.2 .. 10^550 do not need an axis
+       * down to 10^-200) */
+      double span = hi10 - lo10;
+      double a = floor (lo10 / step + 1e-9) * step, b = ceil (hi10 / step - 1e-9) * step;
+
+      lo10 = lo10 - a > 0.25 * span ? floor (lo10 + 1e-9) : a;
+      hi10 = b - hi10 > 0.25 * span ? ceil (hi10 - 1e-9) : b;
     }
   /* a tight range keeps two labelled decades where it spans them */
   ticks->n = count_ticks (lo10, hi10, step, 0, &first);

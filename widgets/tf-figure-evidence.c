@@ -179,6 +179,7 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
   const char *p_label = _("P(H₀ | data)");
   double pad, gap, top, bottom, left, right, avail, top_h, low_h, label_h;
   double x_lo = INFINITY, x_hi = -INFINITY, y_lo = 0, y_hi = 0, right_w = 0;
+  double chosen_right = -INFINITY;  /* where the chosen setting's label ends */
   gboolean chosen_ok;
   TfTicks x_ticks, bf_ticks, p_ticks;
   TfPlotArea top_area, low_area;
@@ -322,9 +323,11 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
       cairo_stroke (cr);
       cairo_restore (cr);
       /* centred on the line, right of the y axis's labels, inside the figure */
-      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, chosen_label,
-                   MAX (MAX (MIN (x - w / 2, width - pad - w), MIN (top_area.x, width - pad - w)), pad),
+      double lx = MAX (MAX (MIN (x - w / 2, width - pad - w), MIN (top_area.x, width - pad - w)), pad);
+
+      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, chosen_label, lx,
                    top_area.y - label_h - tf_figure_theme_pt (&theme, 1.5));
+      chosen_right = lx + w;
     }
 
   /* The curves, clipped to their panels. */
@@ -382,7 +385,14 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
         {
           TfPolyline low[] = { { p_line.x, p_line.y, p_line.n }, { up_x, up_y, 2 } };
           if (!tf_legend_place (&low_area, w, h, gap, low, 2, &nx, &ny))
-            nx = top_area.x + gap, ny = top_area.y + gap;
+            {
+              /* no room in either panel: at the right of the row above them, clear of
+               * the chosen setting's label when it can be */
+              nx = width - pad - w;
+              ny = top_area.y - h - tf_figure_theme_pt (&theme, 1.5);
+              if (nx < chosen_right + 2 * gap)
+                nx = top_area.x + gap, ny = top_area.y + gap;
+            }
         }
       tf_fig_text_halo (cr, &theme, &theme.muted, theme.text_size, note, nx, ny);
     }
