@@ -8,40 +8,21 @@
  */
 #include "tf-one-rate.h"
 #include "tf-poisson.h"
+#include "tf-rates-curves.h"
 #include "tf-evidence.h"
 #include "tf-logspace.h"
 
 #include <math.h>
 #include <float.h>
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_cdf.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
-
-#define TF_MAX_COUNT 1e15
-#define TF_MAX_SHAPE 1e15
-
-static gboolean
-is_whole (double v)
-{
-  return isfinite (v) && v == floor (v);
-}
 
 void
 tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems)
 {
   const TfAnalysis *a = analysis;
 
-  if (!is_whole (a->events) || a->events < 0.0 || a->events > TF_MAX_COUNT)
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Data", "Events",
-                                     _("Events must be a whole number from 0 to 10^15 (it is %g)."),
-                                     a->events));
-  if (!(isfinite (a->exposure) && a->exposure > 0.0))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Data", "Exposure",
-                                     _("Exposure must be a finite number above 0 (it is %g)."),
-                                     a->exposure));
+  tf_rates_check_count (problems, "Events", a->events);
+  tf_rates_check_exposure (problems, "Exposure", a->exposure);
   if (a->null_kind == TF_NULL_INTERVAL)
     {
       if (!(isfinite (a->null_low) && a->null_low > 0.0))
@@ -65,16 +46,7 @@ tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems)
                      tf_problem_new ("Alternative", "Prior",
                                      _("The prior for a rate must be gamma (it is %s)."),
                                      tf_prior_family_to_string (a->prior)));
-  if (!(a->prior_shape > 0.0 && a->prior_shape <= TF_MAX_SHAPE))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorShape",
-                                     _("The gamma shape PriorShape must be above 0 and at most 10^15 (it is %g)."),
-                                     a->prior_shape));
-  if (!(isfinite (a->prior_rate) && a->prior_rate > 0.0))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorRate",
-                                     _("The gamma rate PriorRate must be a finite number above 0 (it is %g)."),
-                                     a->prior_rate));
+  tf_rates_check_prior (a, problems);
 }
 
 /* BF01 = Gamma(λ0; α + k, β + E) / Gamma(λ0; α, β), the posterior over the prior
@@ -97,16 +69,6 @@ tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double shape, d
   double core = MAX (s0, s1) <= MAX (h, d) ? s0 - s1 : h - d;
   return core + 0.5 * log1p (k / shape) + tf_stirling_remainder (shape)
          - tf_stirling_remainder (shape + k);
-}
-
-/* ln P(Z >= z), standard normal (GSL's log_erfc, Cody 1969). */
-static double
-log_normal_upper (double z)
-{
-  gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
-    return NAN;
-  return r.val - G_LN2;
 }
 
 /* ln of the Gamma(s, r) mass in (lo, hi), hi may be +inf, from the side where it is
@@ -143,19 +105,19 @@ rate_tests (double k, double m, TfDirection dir, RateTests *t)
       t->lp_exact = tf_pois_log_sf (k, m);
       /* mid-p (Lancaster 1961): P(X > k) + ½ P(X = k) */
       t->lp_mid = tf_log_add (tf_pois_log_sf (k + 1.0, m), lpmf - G_LN2);
-      t->lp_score = log_normal_upper (t->z);
+      t->lp_score = tf_rates_log_normal_upper (t->z);
       break;
     case TF_DIRECTION_LESS:
       t->lp_exact = tf_pois_log_cdf (k, m);
       t->lp_mid = tf_log_add (tf_pois_log_cdf (k - 1.0, m), lpmf - G_LN2);
-      t->lp_score = log_normal_upper (-t->z);
+      t->lp_score = tf_rates_log_normal_upper (-t->z);
       break;
     case TF_DIRECTION_TWO_SIDED:
     default:
       t->lp_exact = tf_pois_log_exact_two_sided (k, m);
       /* the exact p minus half the probability of the observed count (Lancaster 1961) */
       t->lp_mid = tf_log_sub (t->lp_exact, MIN (t->lp_exact, lpmf - G_LN2));
-      t->lp_score = G_LN2 + log_normal_upper (fabs (t->z));
+      t->lp_score = G_LN2 + tf_rates_log_normal_upper (fabs (t->z));
       break;
     }
 }
@@ -362,119 +324,63 @@ tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
   curves->parameter_markup = g_strdup ("λ");
 }
 
-/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
+/* The Bayes factor at a curve's point: the count at exposure f E is λ0 f E +
+ * z √(λ0 f E) (a real count; the Bayes factor's formula takes one), floored at 0 where
+ * the exposure is too small to reach the observed p-value. */
+static double
+log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
+{
+  double e = a->exposure * at->f, m = a->null_value * e;
+  double k = isnan (at->z) ? a->events : MAX (0.0, m + at->z * sqrt (m));
+  return analysis_log_bf01 (a, at->shape, at->rate, k, e);
+}
+
 gboolean
 tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                          char **why_not G_GNUC_UNUSED)
+                         char **why_not G_GNUC_UNUSED)
 {
-  const TfAnalysis *a = analysis;
-  double mean = a->prior_shape / a->prior_rate;
-
-  for (guint i = 0; i < curve->n; i++)
-    {
-      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
-      curve->x[i] = s;
-      curve->log_bf01[i] = analysis_log_bf01 (a, s, s / mean, a->events, a->exposure);
-      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
-    }
-  curve->x_log = TRUE;
-  curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
-  curve->chosen_x = a->prior_shape;
-  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events, a->exposure);
-  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
+  tf_rates_sensitivity (analysis, curve, log_bf01_at);
   return TRUE;
 }
 
-/* x = exposure from 1e-2 to 1e6 times the observed. The p-value is held by holding
- * the normal deviate z of the observed exact p-value: the count at exposure E' is
- * λ0 E' + z √(λ0 E') (a real count; the Bayes factor's formula takes one), floored at
- * 0 where the exposure is too small to reach that p-value. */
+/* x = exposure from 1e-2 to 1e6 times the observed, the p-value held. */
 gboolean
-tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                          char **why_not G_GNUC_UNUSED)
+tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
 {
   const TfAnalysis *a = analysis;
   RateTests t;
 
-  if (a->null_kind != TF_NULL_POINT)
-    {
-      *why_not = g_strdup (_("The sample-size curve holds the p-value against a point null; this analysis has an interval null."));
-      return FALSE;
-    }
-  double l0 = a->null_value;
-  rate_tests (a->events, l0 * a->exposure, a->direction, &t);
-  double lp = MIN (t.lp_exact, 0.0);
-  double pz = a->direction == TF_DIRECTION_TWO_SIDED ? lp - G_LN2 : lp;
-  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
-                         : gsl_cdf_ugaussian_Qinv (exp (pz));
-  if (a->direction == TF_DIRECTION_LESS
-      || (a->direction == TF_DIRECTION_TWO_SIDED && a->events < l0 * a->exposure))
-    z = -z;
-  if (!isfinite (z))
-    z = 0.0;
-  for (guint i = 0; i < curve->n; i++)
-    {
-      double e = a->exposure * pow (10.0, -2.0 + 8.0 * i / (curve->n - 1));
-      double m = l0 * e;
-      double k = MAX (0.0, m + z * sqrt (m));
-      curve->x[i] = e;
-      curve->log_bf01[i] = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, k, e);
-      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
-    }
-  curve->x_log = TRUE;
-  curve->x_markup = g_strdup (_("exposure <i>E</i>"));
-  curve->chosen_x = a->exposure;
-  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events, a->exposure);
-  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
-  curve->p_value = exp (lp);
+  if (!tf_rates_point_null (a, _("The sample-size curve holds the p-value against a point null; this analysis has an interval null."), why_not))
+    return FALSE;
+  double m = a->null_value * a->exposure;
+  rate_tests (a->events, m, a->direction, &t);
+  tf_rates_sample_size (a, curve, log_bf01_at, t.lp_exact, a->events < m, a->exposure,
+                        _("exposure <i>E</i>"));
   return TRUE;
 }
 
-#define TF_MAX_OUTCOMES 100001
+static double
+log_pmf (double j, const double *mean)
+{
+  return tf_log_dpois (j, *mean);
+}
 
-/* Poisson(λ0 E) masses over its central outcomes (mean ± 8 SD and the observed count
- * when near), in_tail for the outcomes counted in the exact p-value. */
+/* Poisson(λ0 E) masses over its central outcomes. */
 gboolean
 tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
                                char **why_not)
 {
   const TfAnalysis *a = analysis;
-  const double k = a->events;
   RateTests t;
 
-  if (a->null_kind != TF_NULL_POINT)
-    {
-      *why_not = g_strdup (_("The null distribution is drawn for a point null; this analysis has an interval null."));
-      return FALSE;
-    }
+  if (!tf_rates_point_null (a, _("The null distribution is drawn for a point null; this analysis has an interval null."), why_not))
+    return FALSE;
   double m = a->null_value * a->exposure;
-  double lo = MAX (0.0, floor (m - 8.0 * sqrt (m) - 5.0));
-  double hi = ceil (m + 8.0 * sqrt (m) + 15.0);
-  if (k >= lo - 0.25 * (hi - lo) && k < lo)
-    lo = k;
-  if (k <= hi + 0.25 * (hi - lo) && k > hi)
-    hi = k;
-  if (hi - lo + 1.0 > TF_MAX_OUTCOMES)
-    {
-      *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
-      return FALSE;
-    }
-  rate_tests (k, m, a->direction, &t);
-  double ld = tf_log_dpois (k, m) + log1p (1e-7);
-  tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
-  for (guint i = 0; i < dist->n; i++)
-    {
-      double j = lo + i;
-      double l = tf_log_dpois (j, m);
-      dist->x[i] = j;
-      dist->mass[i] = exp (l);
-      dist->in_tail[i] = a->direction == TF_DIRECTION_GREATER ? j >= k
-                         : a->direction == TF_DIRECTION_LESS ? j <= k : l <= ld;
-    }
-  dist->discrete = TRUE;
-  dist->observed = k;
+  if (!tf_rates_null_distribution (a, dist, m, sqrt (m), INFINITY, a->events, log_pmf, &m,
+                                   _("events <i>k</i>"), why_not))
+    return FALSE;
+  rate_tests (a->events, m, a->direction, &t);
   dist->p_value = exp (t.lp_exact);
-  dist->x_markup = g_strdup (_("events <i>k</i>"));
   return TRUE;
 }
 

@@ -14,6 +14,7 @@
  */
 #include "tf-two-rates.h"
 #include "tf-poisson.h"
+#include "tf-rates-curves.h"
 #include "tf-binomial.h"
 #include "tf-incbeta.h"
 #include "tf-evidence.h"
@@ -22,39 +23,6 @@
 #include <math.h>
 #include <float.h>
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_cdf.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
-
-#define TF_MAX_COUNT 1e15
-#define TF_MAX_SHAPE 1e15
-
-static gboolean
-is_whole (double v)
-{
-  return isfinite (v) && v == floor (v);
-}
-
-static void
-check_count (GPtrArray *problems, const char *key, double v)
-{
-  if (!is_whole (v) || v < 0.0 || v > TF_MAX_COUNT)
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Data", key,
-                                     _("%s must be a whole number from 0 to 10^15 (it is %g)."),
-                                     key, v));
-}
-
-static void
-check_exposure (GPtrArray *problems, const char *key, double v)
-{
-  if (!(isfinite (v) && v > 0.0))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Data", key,
-                                     _("%s must be a finite number above 0 (it is %g)."),
-                                     key, v));
-}
-
 double
 tf_two_rates_null_ratio (const TfAnalysis *analysis)
 {
@@ -66,10 +34,10 @@ tf_two_rates_validate (const TfAnalysis *analysis, GPtrArray *problems)
 {
   const TfAnalysis *a = analysis;
 
-  check_count (problems, "EventsA", a->events_a);
-  check_exposure (problems, "ExposureA", a->exposure_a);
-  check_count (problems, "EventsB", a->events_b);
-  check_exposure (problems, "ExposureB", a->exposure_b);
+  tf_rates_check_count (problems, "EventsA", a->events_a);
+  tf_rates_check_exposure (problems, "ExposureA", a->exposure_a);
+  tf_rates_check_count (problems, "EventsB", a->events_b);
+  tf_rates_check_exposure (problems, "ExposureB", a->exposure_b);
   if (a->null_kind == TF_NULL_INTERVAL)
     {
       if (!(isfinite (a->null_low) && a->null_low > 0.0))
@@ -93,16 +61,7 @@ tf_two_rates_validate (const TfAnalysis *analysis, GPtrArray *problems)
                      tf_problem_new ("Alternative", "Prior",
                                      _("The prior for rates must be gamma (it is %s)."),
                                      tf_prior_family_to_string (a->prior)));
-  if (!(a->prior_shape > 0.0 && a->prior_shape <= TF_MAX_SHAPE))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorShape",
-                                     _("The gamma shape PriorShape must be above 0 and at most 10^15 (it is %g)."),
-                                     a->prior_shape));
-  if (!(isfinite (a->prior_rate) && a->prior_rate > 0.0))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorRate",
-                                     _("The gamma rate PriorRate must be a finite number above 0 (it is %g)."),
-                                     a->prior_rate));
+  tf_rates_check_prior (a, problems);
 }
 
 /* π = ρ EA / (ρ EA + EB) and 1 − π, each from its own numerator. */
@@ -257,16 +216,6 @@ analysis_log_bf01 (const TfAnalysis *a, double s, double r, double ka, double ea
   return in - (out_post - out_prior);
 }
 
-/* ln P(Z >= z), standard normal (GSL's log_erfc, Cody 1969). */
-static double
-log_normal_upper (double z)
-{
-  gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
-    return NAN;
-  return r.val - G_LN2;
-}
-
 typedef struct {
   double lp_exact, lp_mid, lp_score, dev;
 } SplitTests;
@@ -292,18 +241,18 @@ split_tests (double ka, double n, double p0, double q0, TfDirection dir, SplitTe
       t->lp_exact = tf_binom_log_sf (ka, n, p0, q0);
       /* mid-p (Lancaster 1961) */
       t->lp_mid = tf_log_add (tf_binom_log_sf (ka + 1.0, n, p0, q0), lpmf - G_LN2);
-      t->lp_score = log_normal_upper (z);
+      t->lp_score = tf_rates_log_normal_upper (z);
       break;
     case TF_DIRECTION_LESS:
       t->lp_exact = tf_binom_log_cdf (ka, n, p0, q0);
       t->lp_mid = tf_log_add (tf_binom_log_cdf (ka - 1.0, n, p0, q0), lpmf - G_LN2);
-      t->lp_score = log_normal_upper (-z);
+      t->lp_score = tf_rates_log_normal_upper (-z);
       break;
     case TF_DIRECTION_TWO_SIDED:
     default:
       t->lp_exact = tf_binom_log_exact_two_sided (ka, n, p0);
       t->lp_mid = tf_log_sub (t->lp_exact, MIN (t->lp_exact, lpmf - G_LN2));
-      t->lp_score = G_LN2 + log_normal_upper (fabs (z));
+      t->lp_score = G_LN2 + tf_rates_log_normal_upper (fabs (z));
       break;
     }
 }
@@ -527,87 +476,61 @@ tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
   curves->parameter_markup = g_strdup ("ln(λ<sub>A</sub>/λ<sub>B</sub>)");
 }
 
-/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean α/β held. */
+/* The Bayes factor at a curve's point: with the exposures times f the total is n f,
+ * split as kA = n f π0 + z √(n f π0 (1 − π0)) (real counts, clipped to [0, n f] where
+ * the total is too small to reach the observed p-value). */
+static double
+log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
+{
+  double ka = a->events_a, kb = a->events_b, f = at->f, p0, q0;
+  if (!isnan (at->z))
+    {
+      double nf = (ka + kb) * f;
+      pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &p0, &q0);
+      ka = CLAMP (nf * p0 + at->z * sqrt (nf * p0 * q0), 0.0, nf);
+      kb = nf - ka;
+    }
+  return analysis_log_bf01 (a, at->shape, at->rate, ka, a->exposure_a * f, kb,
+                            a->exposure_b * f);
+}
+
 gboolean
 tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
                           char **why_not G_GNUC_UNUSED)
 {
-  const TfAnalysis *a = analysis;
-  double mean = a->prior_shape / a->prior_rate;
-
-  for (guint i = 0; i < curve->n; i++)
-    {
-      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
-      curve->x[i] = s;
-      curve->log_bf01[i] = analysis_log_bf01 (a, s, s / mean, a->events_a, a->exposure_a,
-                                              a->events_b, a->exposure_b);
-      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
-    }
-  curve->x_log = TRUE;
-  curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
-  curve->chosen_x = a->prior_shape;
-  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, a->events_a,
-                                              a->exposure_a, a->events_b, a->exposure_b);
-  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
+  tf_rates_sensitivity (analysis, curve, log_bf01_at);
   return TRUE;
 }
 
-/* x = the factor both exposures are scaled by, 1e-2 to 1e6. The total scales with
- * them; the split kA = n π0 + z √(n π0 (1 − π0)) holds the normal deviate z of the
- * observed exact p-value (real counts, clipped to [0, n] where the total is too small
- * to reach that p-value). */
+/* x = the factor both exposures are scaled by, 1e-2 to 1e6, the p-value held. */
 gboolean
-tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                          char **why_not G_GNUC_UNUSED)
+tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
 {
   const TfAnalysis *a = analysis;
-  const double ka = a->events_a, kb = a->events_b, n = ka + kb;
+  const double ka = a->events_a, n = ka + a->events_b;
   double p0, q0;
   SplitTests t;
 
-  if (a->null_kind != TF_NULL_POINT)
-    {
-      *why_not = g_strdup (_("The sample-size curve holds the p-value against a point null; this analysis has an interval null."));
-      return FALSE;
-    }
+  if (!tf_rates_point_null (a, _("The sample-size curve holds the p-value against a point null; this analysis has an interval null."), why_not))
+    return FALSE;
   if (n == 0.0)
     {
       *why_not = g_strdup (_("With no events in either group there is no p-value below 1 to hold as the exposures grow."));
       return FALSE;
     }
-  double rho0 = tf_two_rates_null_ratio (a);
-  pi_of_ratio (rho0, a->exposure_a, a->exposure_b, &p0, &q0);
+  pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &p0, &q0);
   split_tests (ka, n, p0, q0, a->direction, &t);
-  double lp = MIN (t.lp_exact, 0.0);
-  double pz = a->direction == TF_DIRECTION_TWO_SIDED ? lp - G_LN2 : lp;
-  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
-                         : gsl_cdf_ugaussian_Qinv (exp (pz));
-  if (a->direction == TF_DIRECTION_LESS
-      || (a->direction == TF_DIRECTION_TWO_SIDED && ka < n * p0))
-    z = -z;
-  if (!isfinite (z))
-    z = 0.0;
-  for (guint i = 0; i < curve->n; i++)
-    {
-      double f = pow (10.0, -2.0 + 8.0 * i / (curve->n - 1));
-      double nf = n * f;
-      double kaf = CLAMP (nf * p0 + z * sqrt (nf * p0 * q0), 0.0, nf);
-      curve->x[i] = f;
-      curve->log_bf01[i] = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, kaf,
-                                              a->exposure_a * f, nf - kaf, a->exposure_b * f);
-      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
-    }
-  curve->x_log = TRUE;
-  curve->x_markup = g_strdup (_("exposures × <i>f</i> (both groups)"));
-  curve->chosen_x = 1.0;
-  curve->chosen_log_bf01 = analysis_log_bf01 (a, a->prior_shape, a->prior_rate, ka,
-                                              a->exposure_a, kb, a->exposure_b);
-  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01, a->prior_null);
-  curve->p_value = exp (lp);
+  tf_rates_sample_size (a, curve, log_bf01_at, t.lp_exact, ka < n * p0, 1.0,
+                        _("exposures × <i>f</i> (both groups)"));
   return TRUE;
 }
 
-#define TF_MAX_OUTCOMES 100001
+/* param: n, π0, 1 − π0 */
+static double
+log_pmf (double j, const double *param)
+{
+  return tf_log_dbinom (j, param[0], param[1], param[2]);
+}
 
 /* Binomial(n, π0) masses of kA given the total, over its central outcomes. */
 gboolean
@@ -616,43 +539,20 @@ tf_two_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *
 {
   const TfAnalysis *a = analysis;
   const double ka = a->events_a, n = ka + a->events_b;
-  double p0, q0;
+  double param[3];
   SplitTests t;
 
-  if (a->null_kind != TF_NULL_POINT)
-    {
-      *why_not = g_strdup (_("The null distribution is drawn for a point null; this analysis has an interval null."));
-      return FALSE;
-    }
-  pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &p0, &q0);
-  double sd = sqrt (n * p0 * q0);
-  double lo = MAX (0.0, floor (n * p0 - 8.0 * sd - 5.0));
-  double hi = MIN (n, ceil (n * p0 + 8.0 * sd + 15.0));
-  if (ka >= lo - 0.25 * (hi - lo) && ka < lo)
-    lo = ka;
-  if (ka <= hi + 0.25 * (hi - lo) && ka > hi)
-    hi = ka;
-  if (hi - lo + 1.0 > TF_MAX_OUTCOMES)
-    {
-      *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
-      return FALSE;
-    }
-  split_tests (ka, n, p0, q0, a->direction, &t);
-  double ld = tf_log_dbinom (ka, n, p0, q0) + log1p (1e-7);
-  tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
-  for (guint i = 0; i < dist->n; i++)
-    {
-      double j = lo + i;
-      double l = tf_log_dbinom (j, n, p0, q0);
-      dist->x[i] = j;
-      dist->mass[i] = exp (l);
-      dist->in_tail[i] = a->direction == TF_DIRECTION_GREATER ? j >= ka
-                         : a->direction == TF_DIRECTION_LESS ? j <= ka : l <= ld;
-    }
-  dist->discrete = TRUE;
-  dist->observed = ka;
+  if (!tf_rates_point_null (a, _("The null distribution is drawn for a point null; this analysis has an interval null."), why_not))
+    return FALSE;
+  param[0] = n;
+  pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &param[1], &param[2]);
+  if (!tf_rates_null_distribution (a, dist, n * param[1], sqrt (n * param[1] * param[2]), n, ka,
+                                   log_pmf, param,
+                                   _("events in group A, <i>k</i><sub>A</sub>, given the total"),
+                                   why_not))
+    return FALSE;
+  split_tests (ka, n, param[1], param[2], a->direction, &t);
   dist->p_value = exp (t.lp_exact);
-  dist->x_markup = g_strdup (_("events in group A, <i>k</i><sub>A</sub>, given the total"));
   return TRUE;
 }
 

@@ -1,0 +1,170 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-rates-curves.c: the checks and curves the one-rate and two-rates designs share.
+ */
+#include "tf-rates-curves.h"
+#include "tf-evidence.h"
+#include "tf-results.h"
+
+#include <math.h>
+#include <glib/gi18n-lib.h>
+#include <gsl/gsl_cdf.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_sf_erf.h>
+
+#define TF_MAX_OUTCOMES 100001
+
+void
+tf_rates_check_count (GPtrArray *problems, const char *key, double v)
+{
+  if (!(isfinite (v) && v == floor (v)) || v < 0.0 || v > TF_RATES_MAX_COUNT)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", key,
+                                     _("%s must be a whole number from 0 to 10^15 (it is %g)."),
+                                     key, v));
+}
+
+void
+tf_rates_check_exposure (GPtrArray *problems, const char *key, double v)
+{
+  if (!(isfinite (v) && v > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Data", key,
+                                     _("%s must be a finite number above 0 (it is %g)."),
+                                     key, v));
+}
+
+void
+tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems)
+{
+  const TfAnalysis *a = analysis;
+
+  if (!(a->prior_shape > 0.0 && a->prior_shape <= TF_RATES_MAX_COUNT))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorShape",
+                                     _("The gamma shape PriorShape must be above 0 and at most 10^15 (it is %g)."),
+                                     a->prior_shape));
+  if (!(isfinite (a->prior_rate) && a->prior_rate > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorRate",
+                                     _("The gamma rate PriorRate must be a finite number above 0 (it is %g)."),
+                                     a->prior_rate));
+}
+
+/* GSL's log_erfc (Cody 1969). */
+double
+tf_rates_log_normal_upper (double z)
+{
+  gsl_sf_result r;
+  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
+    return NAN;
+  return r.val - G_LN2;
+}
+
+gboolean
+tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not)
+{
+  if (analysis->null_kind == TF_NULL_POINT)
+    return TRUE;
+  *why_not = g_strdup (why);
+  return FALSE;
+}
+
+/* The curve's point at the analysis's own prior and data. */
+static void
+set_chosen (const TfAnalysis *a, TfEvidenceCurve *curve, TfRatesLogBf01 log_bf01, double x)
+{
+  TfRatesPoint at = { a->prior_shape, a->prior_rate, 1.0, NAN };
+
+  curve->x_log = TRUE;
+  curve->chosen_x = x;
+  curve->chosen_log_bf01 = log_bf01 (a, &at);
+  curve->chosen_posterior_null = tf_posterior_null_from_log_bf01 (curve->chosen_log_bf01,
+                                                                  a->prior_null);
+}
+
+void
+tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                      TfRatesLogBf01 log_bf01)
+{
+  const TfAnalysis *a = analysis;
+  double mean = a->prior_shape / a->prior_rate;
+
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      TfRatesPoint at = { s, s / mean, 1.0, NAN };
+      curve->x[i] = s;
+      curve->log_bf01[i] = log_bf01 (a, &at);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
+    }
+  curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
+  set_chosen (a, curve, log_bf01, a->prior_shape);
+}
+
+/* z holds P(Z >= z) = p, ln p = pz: by GSL's inverse, or below e^−700 by inverting
+ * Q(z) ≈ φ(z)/z (common practice). */
+void
+tf_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                      TfRatesLogBf01 log_bf01, double lp_exact, gboolean below,
+                      double x_scale, const char *x_markup)
+{
+  const TfAnalysis *a = analysis;
+  double lp = MIN (lp_exact, 0.0);
+  double pz = a->direction == TF_DIRECTION_TWO_SIDED ? lp - G_LN2 : lp;
+  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
+                         : gsl_cdf_ugaussian_Qinv (exp (pz));
+
+  if (a->direction == TF_DIRECTION_LESS || (a->direction == TF_DIRECTION_TWO_SIDED && below))
+    z = -z;
+  if (!isfinite (z))
+    z = 0.0;
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double f = pow (10.0, -2.0 + 8.0 * i / (curve->n - 1));
+      TfRatesPoint at = { a->prior_shape, a->prior_rate, f, z };
+      curve->x[i] = x_scale * f;
+      curve->log_bf01[i] = log_bf01 (a, &at);
+      curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], a->prior_null);
+    }
+  curve->x_markup = g_strdup (x_markup);
+  set_chosen (a, curve, log_bf01, x_scale);
+  curve->p_value = exp (lp);
+}
+
+gboolean
+tf_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                            double mean, double sd, double top, double observed,
+                            TfRatesLogPmf log_pmf, const double *param,
+                            const char *x_markup, char **why_not)
+{
+  const TfAnalysis *a = analysis;
+  const double k = observed;
+  double lo = MAX (0.0, floor (mean - 8.0 * sd - 5.0));
+  double hi = MIN (top, ceil (mean + 8.0 * sd + 15.0));
+
+  if (k >= lo - 0.25 * (hi - lo) && k < lo)
+    lo = k;
+  if (k <= hi + 0.25 * (hi - lo) && k > hi)
+    hi = k;
+  if (hi - lo + 1.0 > TF_MAX_OUTCOMES)
+    {
+      *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
+      return FALSE;
+    }
+  /* the minimum-likelihood rule's relative tolerance 1e-7 (common practice) */
+  double ld = log_pmf (k, param) + log1p (1e-7);
+  tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
+  for (guint i = 0; i < dist->n; i++)
+    {
+      double j = lo + i;
+      double l = log_pmf (j, param);
+      dist->x[i] = j;
+      dist->mass[i] = exp (l);
+      dist->in_tail[i] = a->direction == TF_DIRECTION_GREATER ? j >= k
+                         : a->direction == TF_DIRECTION_LESS ? j <= k : l <= ld;
+    }
+  dist->discrete = TRUE;
+  dist->observed = k;
+  dist->x_markup = g_strdup (x_markup);
+  return TRUE;
+}

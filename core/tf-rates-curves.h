@@ -1,0 +1,61 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-rates-curves.h: what the one-rate and two-rates designs share: the checks of
+ * counts, exposures and the gamma prior, the normal tail, and the sensitivity,
+ * sample-size and null-distribution curves around a design's own Bayes factor and
+ * null probabilities.
+ */
+#pragma once
+
+#include "tf-analysis.h"
+#include "tf-curves.h"
+
+G_BEGIN_DECLS
+
+#define TF_RATES_MAX_COUNT 1e15
+
+/* Adds a problem unless v is a whole number in [0, 10^15] (counts) or finite and
+ * above 0 (exposures); key names the [Data] key. */
+void tf_rates_check_count (GPtrArray *problems, const char *key, double v);
+void tf_rates_check_exposure (GPtrArray *problems, const char *key, double v);
+/* The gamma prior's PriorShape and PriorRate. */
+void tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems);
+
+/* ln P(Z >= z), Z standard normal. */
+double tf_rates_log_normal_upper (double z);
+
+/* TRUE when the analysis has a point null; otherwise *why_not = why (copied). */
+gboolean tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not);
+
+/* Where a curve evaluates the Bayes factor: a gamma prior, the exposures times f, and
+ * counts that hold the normal deviate z of the observed p-value (z NAN: the observed
+ * counts, f = 1). */
+typedef struct {
+  double shape, rate, f, z;
+} TfRatesPoint;
+
+typedef double (*TfRatesLogBf01) (const TfAnalysis *analysis, const TfRatesPoint *at);
+
+/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean held. */
+void tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                           TfRatesLogBf01 log_bf01);
+
+/* x = x_scale f for f from 1e-2 to 1e6, log-spaced; the counts hold the deviate of
+ * the observed exact p-value (ln p = lp_exact; below: the observed count lies below
+ * its null mean). A point null. */
+void tf_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                           TfRatesLogBf01 log_bf01, double lp_exact, gboolean below,
+                           double x_scale, const char *x_markup);
+
+typedef double (*TfRatesLogPmf) (double j, const double *param);
+
+/* The null masses of a count with the given mean and SD over its central outcomes
+ * (mean ± 8 SD, and the observed count when near), in [0, top], in_tail marking the
+ * outcomes of the exact p-value in the analysis's direction (the minimum-likelihood
+ * rule when two-sided). FALSE, with *why_not, when there are too many to draw; the
+ * caller sets dist->p_value. */
+gboolean tf_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                                     double mean, double sd, double top, double observed,
+                                     TfRatesLogPmf log_pmf, const double *param,
+                                     const char *x_markup, char **why_not);
+
+G_END_DECLS
