@@ -8,6 +8,7 @@
 #include "tf-explain.h"
 #include "tf-results.h"
 #include "tf-figure-export.h"
+#include "tf-report-render.h"
 
 #include <glib/gi18n.h>
 #include <gsl/gsl_errno.h>
@@ -40,6 +41,7 @@ usage_error (const char *message)
                 "       twofold-cli figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
                 "                   [--width-mm W] [--height-mm H] [--dpi D] [--style light|dark|print]\n"
                 "                   [--grades kass-raftery|jeffreys|none]\n"
+                "       twofold-cli report FILE --output OUT.pdf|OUT.html|OUT.md\n"
                 "       twofold-cli --help\n"));
   return EXIT_USAGE;
 }
@@ -181,6 +183,57 @@ command_figure (int argc, char **argv)
   return EXIT_DONE;
 }
 
+static int
+command_report (int argc, char **argv)
+{
+  g_autofree char *output = NULL;
+  GOptionEntry entries[] = {
+    { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output,
+      N_("The file to write: .pdf, .html or .md (Markdown also writes OUT-KIND.svg beside it)"),
+      N_("OUT") },
+    { NULL }
+  };
+  g_autoptr (GOptionContext) context = g_option_context_new (_("report FILE"));
+  g_autoptr (GError) error = NULL;
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfAnalysis) analysis = NULL;
+
+  g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
+  g_option_context_set_summary (context,
+                                _("Writes a report of an analysis: the design, the inputs, every number, "
+                                  "the explanations, the figures and the analysis file itself.\n\n"
+                                  "OUT.pdf: A4 pages with the figures drawn in.\n"
+                                  "OUT.html: one self-contained file, the figures as inline SVG.\n"
+                                  "OUT.md: Markdown text, and each figure that applies as OUT-KIND.svg\n"
+                                  "beside it (KIND: densities, sensitivity, sample-size,\n"
+                                  "null-distribution, model-probabilities), linked by relative names."));
+  if (!g_option_context_parse (context, &argc, &argv, &error))
+    return usage_error (error->message);
+  if (argc != 3)
+    return usage_error (argc < 3 ? _("report needs the analysis file to read")
+                                 : _("report reads one file"));
+  if (output == NULL)
+    return usage_error (_("report needs --output"));
+
+  analysis = tf_analysis_load (argv[2], problems);
+  if (analysis == NULL)
+    {
+      print_problems (argv[2], problems);
+      return EXIT_USAGE;
+    }
+  if (!tf_report_export (analysis, output, NULL, &error))
+    {
+      gboolean usage = error->domain == TF_REPORT_ERROR
+                       && (error->code == TF_REPORT_ERROR_BAD_FORMAT
+                           || error->code == TF_REPORT_ERROR_NO_FOLDER
+                           || error->code == TF_REPORT_ERROR_INVALID_ANALYSIS);
+
+      g_printerr ("%s: %s\n", argv[2], error->message);
+      return usage ? EXIT_USAGE : EXIT_NOT_COMPUTED;
+    }
+  return EXIT_DONE;
+}
+
 int
 main (int argc, char **argv)
 {
@@ -200,7 +253,11 @@ main (int argc, char **argv)
                  "  figure FILE --kind KIND --output OUT.png|OUT.svg|OUT.pdf\n"
                  "         [--width-mm W] [--height-mm H] [--dpi D] [--style light|dark|print]\n"
                  "         [--grades kass-raftery|jeffreys|none]\n"
-                 "                          a figure at the size a journal asks\n\n"
+                 "                          a figure at the size a journal asks\n"
+                 "  report FILE --output OUT.pdf|OUT.html|OUT.md\n"
+                 "                          a report: design, inputs, every number, explanations,\n"
+                 "                          figures and the analysis file (Markdown writes the\n"
+                 "                          figures beside it as OUT-KIND.svg)\n\n"
                  "Exit codes: 0 done; 1 the analysis could not be computed;\n"
                  "2 bad usage or a bad file (the message names file, group and key).\n"));
       return EXIT_DONE;
@@ -214,6 +271,8 @@ main (int argc, char **argv)
     return command_analyse (argc, argv);
   if (g_str_equal (argv[1], "figure"))
     return command_figure (argc, argv);
+  if (g_str_equal (argv[1], "report"))
+    return command_report (argc, argv);
   {
     g_autofree char *message = g_strdup_printf (_("unknown command “%s”"), argv[1]);
     return usage_error (message);
