@@ -24,18 +24,7 @@ tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems)
   tf_rates_check_count (problems, "Events", a->events);
   tf_rates_check_exposure (problems, "Exposure", a->exposure);
   if (a->null_kind == TF_NULL_INTERVAL)
-    {
-      if (!(isfinite (a->null_low) && a->null_low > 0.0))
-        g_ptr_array_add (problems,
-                         tf_problem_new ("Null", "Low",
-                                         _("The lower end of the null interval (Low) must be a rate above 0 (it is %g)."),
-                                         a->null_low));
-      else if (!(isfinite (a->null_high) && a->null_high > a->null_low))
-        g_ptr_array_add (problems,
-                         tf_problem_new ("Null", "High",
-                                         _("The upper end of the null interval (High) must be finite and above Low (it is %g)."),
-                                         a->null_high));
-    }
+    tf_rates_check_interval_null (a, problems, FALSE);
   else if (!(isfinite (a->null_value) && a->null_value > 0.0))
     g_ptr_array_add (problems,
                      tf_problem_new ("Null", "Value",
@@ -327,20 +316,12 @@ tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
 /* The Bayes factor at a curve's point: the count at exposure f E is λ0 f E +
  * z √(λ0 f E) (a real count; the Bayes factor's formula takes one), floored at 0 where
  * the exposure is too small to reach the observed p-value. */
-static double
-log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
+double
+tf_one_rate_log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
 {
   double e = a->exposure * at->f, m = a->null_value * e;
   double k = isnan (at->z) ? a->events : MAX (0.0, m + at->z * sqrt (m));
   return analysis_log_bf01 (a, at->shape, at->rate, k, e);
-}
-
-gboolean
-tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                         char **why_not G_GNUC_UNUSED)
-{
-  tf_rates_sensitivity (analysis, curve, log_bf01_at);
-  return TRUE;
 }
 
 /* x = exposure from 1e-2 to 1e6 times the observed, the p-value held. */
@@ -354,7 +335,7 @@ tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, cha
     return FALSE;
   double m = a->null_value * a->exposure;
   rate_tests (a->events, m, a->direction, &t);
-  tf_rates_sample_size (a, curve, log_bf01_at, t.lp_exact, a->events < m, a->exposure,
+  tf_rates_sample_size (a, curve, tf_one_rate_log_bf01_at, t.lp_exact, a->events < m, a->exposure,
                         _("exposure <i>E</i>"));
   return TRUE;
 }
@@ -389,7 +370,7 @@ const TfDesignClass tf_one_rate_class = {
   .validate = tf_one_rate_validate,
   .compute = tf_one_rate_compute,
   .densities = tf_one_rate_densities,
-  .sensitivity = tf_one_rate_sensitivity,
+  .sensitivity = tf_rates_sensitivity,
   .sample_size = tf_one_rate_sample_size,
   .null_distribution = tf_one_rate_null_distribution,
 };

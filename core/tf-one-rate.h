@@ -15,8 +15,6 @@ void tf_one_rate_validate (const TfAnalysis *analysis, GPtrArray *problems);
 /* The analysis is valid. */
 void tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results);
 void tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves);
-gboolean tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                                  char **why_not);
 gboolean tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
                                   char **why_not);
 gboolean tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,

@@ -34,6 +34,25 @@ tf_rates_check_exposure (GPtrArray *problems, const char *key, double v)
 }
 
 void
+tf_rates_check_interval_null (const TfAnalysis *analysis, GPtrArray *problems,
+                              gboolean ratio)
+{
+  const TfAnalysis *a = analysis;
+
+  if (!(isfinite (a->null_low) && a->null_low > 0.0))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Null", "Low", ratio
+                                     ? _("The lower end of the null interval (Low) must be a rate ratio above 0 (it is %g).")
+                                     : _("The lower end of the null interval (Low) must be a rate above 0 (it is %g)."),
+                                     a->null_low));
+  else if (!(isfinite (a->null_high) && a->null_high > a->null_low))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Null", "High",
+                                     _("The upper end of the null interval (High) must be finite and above Low (it is %g)."),
+                                     a->null_high));
+}
+
+void
 tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems)
 {
   const TfAnalysis *a = analysis;
@@ -82,11 +101,13 @@ set_chosen (const TfAnalysis *a, TfEvidenceCurve *curve, TfRatesLogBf01 log_bf01
                                                                   a->prior_null);
 }
 
-void
+gboolean
 tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                      TfRatesLogBf01 log_bf01)
+                      char **why_not G_GNUC_UNUSED)
 {
   const TfAnalysis *a = analysis;
+  TfRatesLogBf01 log_bf01 = a->design == TF_DESIGN_ONE_RATE ? tf_one_rate_log_bf01_at
+                                                            : tf_two_rates_log_bf01_at;
   double mean = a->prior_shape / a->prior_rate;
 
   for (guint i = 0; i < curve->n; i++)
@@ -99,6 +120,7 @@ tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
     }
   curve->x_markup = g_strdup (_("prior shape <i>α</i> (prior mean held)"));
   set_chosen (a, curve, log_bf01, a->prior_shape);
+  return TRUE;
 }
 
 /* z holds P(Z >= z) = p, ln p = pz: by GSL's inverse, or below e^−700 by inverting

@@ -17,6 +17,9 @@ G_BEGIN_DECLS
  * above 0 (exposures); key names the [Data] key. */
 void tf_rates_check_count (GPtrArray *problems, const char *key, double v);
 void tf_rates_check_exposure (GPtrArray *problems, const char *key, double v);
+/* An interval null's Low and High: rates (ratio FALSE) or rate ratios. */
+void tf_rates_check_interval_null (const TfAnalysis *analysis, GPtrArray *problems,
+                                   gboolean ratio);
 /* The gamma prior's PriorShape and PriorRate. */
 void tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems);
 
@@ -35,9 +38,14 @@ typedef struct {
 
 typedef double (*TfRatesLogBf01) (const TfAnalysis *analysis, const TfRatesPoint *at);
 
-/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean held. */
-void tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                           TfRatesLogBf01 log_bf01);
+/* Each design's, in tf-one-rate.c and tf-two-rates.c. */
+double tf_one_rate_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint *at);
+double tf_two_rates_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint *at);
+
+/* x = prior shape from 1e-2 to 1e4, log-spaced, with the prior mean held: the
+ * sensitivity curve of either design. */
+gboolean tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                               char **why_not);
 
 /* x = x_scale f for f from 1e-2 to 1e6, log-spaced; the counts hold the deviate of
  * the observed exact p-value (ln p = lp_exact; below: the observed count lies below

@@ -39,18 +39,7 @@ tf_two_rates_validate (const TfAnalysis *analysis, GPtrArray *problems)
   tf_rates_check_count (problems, "EventsB", a->events_b);
   tf_rates_check_exposure (problems, "ExposureB", a->exposure_b);
   if (a->null_kind == TF_NULL_INTERVAL)
-    {
-      if (!(isfinite (a->null_low) && a->null_low > 0.0))
-        g_ptr_array_add (problems,
-                         tf_problem_new ("Null", "Low",
-                                         _("The lower end of the null interval (Low) must be a rate ratio above 0 (it is %g)."),
-                                         a->null_low));
-      else if (!(isfinite (a->null_high) && a->null_high > a->null_low))
-        g_ptr_array_add (problems,
-                         tf_problem_new ("Null", "High",
-                                         _("The upper end of the null interval (High) must be finite and above Low (it is %g)."),
-                                         a->null_high));
-    }
+    tf_rates_check_interval_null (a, problems, TRUE);
   else if (!(isfinite (a->null_value) && a->null_value >= 0.0))
     g_ptr_array_add (problems,
                      tf_problem_new ("Null", "Value",
@@ -479,8 +468,8 @@ tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
 /* The Bayes factor at a curve's point: with the exposures times f the total is n f,
  * split as kA = n f π0 + z √(n f π0 (1 − π0)) (real counts, clipped to [0, n f] where
  * the total is too small to reach the observed p-value). */
-static double
-log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
+double
+tf_two_rates_log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
 {
   double ka = a->events_a, kb = a->events_b, f = at->f, p0, q0;
   if (!isnan (at->z))
@@ -492,14 +481,6 @@ log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
     }
   return analysis_log_bf01 (a, at->shape, at->rate, ka, a->exposure_a * f, kb,
                             a->exposure_b * f);
-}
-
-gboolean
-tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                          char **why_not G_GNUC_UNUSED)
-{
-  tf_rates_sensitivity (analysis, curve, log_bf01_at);
-  return TRUE;
 }
 
 /* x = the factor both exposures are scaled by, 1e-2 to 1e6, the p-value held. */
@@ -520,7 +501,7 @@ tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, ch
     }
   pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &p0, &q0);
   split_tests (ka, n, p0, q0, a->direction, &t);
-  tf_rates_sample_size (a, curve, log_bf01_at, t.lp_exact, ka < n * p0, 1.0,
+  tf_rates_sample_size (a, curve, tf_two_rates_log_bf01_at, t.lp_exact, ka < n * p0, 1.0,
                         _("exposures × <i>f</i> (both groups)"));
   return TRUE;
 }
@@ -561,7 +542,7 @@ const TfDesignClass tf_two_rates_class = {
   .validate = tf_two_rates_validate,
   .compute = tf_two_rates_compute,
   .densities = tf_two_rates_densities,
-  .sensitivity = tf_two_rates_sensitivity,
+  .sensitivity = tf_rates_sensitivity,
   .sample_size = tf_two_rates_sample_size,
   .null_distribution = tf_two_rates_null_distribution,
 };

@@ -15,8 +15,6 @@ void tf_two_rates_validate (const TfAnalysis *analysis, GPtrArray *problems);
 /* The analysis is valid. */
 void tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results);
 void tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves);
-gboolean tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                                   char **why_not);
 gboolean tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
                                    char **why_not);
 gboolean tf_two_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
