@@ -6,6 +6,7 @@
 #include <string.h>
 #include <glib/gi18n.h>
 #include "tf-window-actions.h"
+#include "tf-window-report.h"
 #include "tf-analysis-file.h"
 #include "tf-figure-export.h"
 
@@ -549,6 +550,7 @@ tf_window_actions_update (TfWindow *self)
   self->export_enabled = self->results != NULL
                          && tf_plot_view_get_figure (self->plot_view) != NULL;
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.export-figure", self->export_enabled);
+  tf_window_report_update (self);
 }
 
 gboolean
@@ -575,6 +577,7 @@ tf_window_actions_class_init (GtkWidgetClass *widget_class)
   gtk_widget_class_install_action (widget_class, "win.export-figure", NULL, export_figure_action);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_e, GDK_CONTROL_MASK,
                                        "win.export-figure", NULL);
+  tf_window_report_class_init (widget_class);
 }
 
 void
