@@ -14,24 +14,26 @@ typedef struct {
   double pa, qa, pb, qb;
   gboolean over_a;              /* integrate over θA (the narrower) rather than θB */
   double mean, sd;              /* of Δ */
-  /* quantiles of the integration variable at fixed tail levels, and ln of the mass
-   * of the integration variable's distribution between successive ones */
+  double epsrel;                /* relative tolerance of the integrals, 1e-10 unless set */
+  /* For the slower, robust integration only, filled on its first use: quantiles of the
+   * integration variable at fixed tail levels, and ln of the mass of the integration
+   * variable's distribution between successive ones. */
+  gboolean have_cuts;
   guint n_cuts;
   double cut[TF_BETA_DIFF_N_CUTS];
   double cut_y[TF_BETA_DIFF_N_CUTS];   /* 1 − cut, accurate near 1 */
   double log_tail[TF_BETA_DIFF_N_CUTS]; /* ln P(V <= cut) or ln P(V >= cut) */
   gboolean cut_lower[TF_BETA_DIFF_N_CUTS];
-  double epsrel;
 } TfBetaDiff;
 
 void tf_beta_diff_init (TfBetaDiff *bd, double pa, double qa, double pb, double qb);
 
 /* ln P(Δ <= d) and ln P(Δ >= d); FALSE when the integration failed. */
-gboolean tf_beta_diff_log_cdf (const TfBetaDiff *bd, double d, double *log_lower,
+gboolean tf_beta_diff_log_cdf (TfBetaDiff *bd, double d, double *log_lower,
                                double *log_upper);
 /* ln of the density of Δ at d, d in (−1, 1); NAN on failure. */
-double tf_beta_diff_log_density (const TfBetaDiff *bd, double d);
+double tf_beta_diff_log_density (TfBetaDiff *bd, double d);
 /* The d with ln P(Δ <= d) = log_p (lower) or ln P(Δ >= d) = log_p; NAN on failure. */
-double tf_beta_diff_quantile_log (const TfBetaDiff *bd, double log_p, gboolean lower);
+double tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower);
 
 G_END_DECLS
