@@ -179,14 +179,21 @@ tf_incbeta_shape_inverse_log (TfIncbetaShape *sh, double lp, gboolean lower)
         }
       double newton = -g / g1;
       double c = 0.5 * newton * g2 / g1;
-      double step = fabs (c) <= 0.5 ? newton / (1.0 + c) : newton;  /* Halley, or Newton */
+      gboolean halley = fabs (c) <= 0.5;
+      double step = halley ? newton / (1.0 + c) : newton;
       /* Far below a quantile near 1 the tail falls like e^{−p(1 − w)} (the gamma limit,
        * ln Q(q, u) ≈ −u + (q − 1) ln u, u = p(1 − w), slope −u + q − 1 in t): there
        * Newton's step in 1 − w itself, not in its log */
       if (side == 1 && g1 < -2.0 * MAX (q, 1.0) && newton < 0.0 && newton > -1.0)
-        step = log1p (newton);
+        {
+          step = log1p (newton);
+          halley = FALSE;
+        }
       double tn = t + step;
-      double tol = 1e-8 * MIN (scale, fabs (g1 / g2));
+      /* After a step δ (in units of the scale σ) what is left is about σ(δ/σ)³ for
+       * Halley's method and σ(δ/σ)² for Newton's: stop when that is below 1e-15 σ
+       * (the σ of the curvature, |g'/g''|, when it is the smaller). */
+      double tol = (halley ? 1e-5 : 1e-8) * MIN (scale, fabs (g1 / g2));
       if (tn == t || (tn > lo && tn < hi && isfinite (tn)))
         {
           if (fabs (step) <= tol || tn == t)

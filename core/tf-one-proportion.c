@@ -196,25 +196,25 @@ tf_one_proportion_log_bf01 (double k, double n, double theta0, double a, double 
          - tf_stirling_remainder (Q) + tf_stirling_remainder (S);
 }
 
-/* A quantile u of Beta(P, Q) truncated to θ > θ0 (greater), θ < θ0 (less), or not
- * truncated (two-sided), through the log-space inverse. */
+/* A quantile u of the posterior Beta(P, Q) truncated to θ > θ0 (greater), θ < θ0
+ * (less), or not truncated (two-sided), through the log-space inverse. */
 static double
-posterior_quantile (double u, double P, double Q, double theta0, TfDirection direction)
+posterior_quantile (TfIncbetaShape *post, double u, double theta0, TfDirection direction)
 {
   double l0, u0;
 
   switch (direction)
     {
     case TF_DIRECTION_GREATER:
-      tf_incbeta_log_both (theta0, 1.0 - theta0, P, Q, &l0, &u0);
-      return tf_incbeta_inverse_log (log1p (-u) + u0, P, Q, FALSE);
+      tf_incbeta_shape_log_both (post, theta0, 1.0 - theta0, &l0, &u0, NULL);
+      return tf_incbeta_shape_inverse_log (post, log1p (-u) + u0, FALSE);
     case TF_DIRECTION_LESS:
-      tf_incbeta_log_both (theta0, 1.0 - theta0, P, Q, &l0, &u0);
-      return tf_incbeta_inverse_log (log (u) + l0, P, Q, TRUE);
+      tf_incbeta_shape_log_both (post, theta0, 1.0 - theta0, &l0, &u0, NULL);
+      return tf_incbeta_shape_inverse_log (post, log (u) + l0, TRUE);
     case TF_DIRECTION_TWO_SIDED:
     default:
-      return u <= 0.5 ? tf_incbeta_inverse (u, P, Q, TRUE)
-                      : tf_incbeta_inverse (1.0 - u, P, Q, FALSE);
+      return u <= 0.5 ? tf_incbeta_shape_inverse_log (post, log (u), TRUE)
+                      : tf_incbeta_shape_inverse_log (post, log1p (-u), FALSE);
     }
 }
 
@@ -378,13 +378,18 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
 
   /* The posterior under the alternative, truncated to its side when one-sided (above
    * H, below L); for an interval null against both sides, the whole Beta posterior. */
+  TfIncbetaShape post;
+  tf_incbeta_shape_init (&post, P, Q);
   double cut = dir == TF_DIRECTION_LESS ? L : H;
   double alpha2 = 0.5 * (1.0 - level);
+  double cri_lo = posterior_quantile (&post, alpha2, cut, dir);
+  double cri_hi = posterior_quantile (&post, 1.0 - alpha2, cut, dir);
   tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_quantile (alpha2, P, Q, cut, dir));
+                  cri_lo);
   tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_quantile (1.0 - alpha2, P, Q, cut, dir));
-  if (dir == TF_DIRECTION_TWO_SIDED && tf_beta_hdi (P, Q, level, &lo, &hi))
+                  cri_hi);
+  /* two-sided, the credible interval is the equal-tailed one, the HDI's starting point */
+  if (dir == TF_DIRECTION_TWO_SIDED && tf_beta_hdi_from (&post, level, cri_lo, cri_hi, &lo, &hi))
     {
       tf_results_add (results, "hdi_low", _("Highest-density interval, lower"),
                       TF_MEASURE_CREDIBLE_LIMIT, lo);
@@ -404,7 +409,7 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
   tf_results_add (results, "posterior_mean", _("Posterior mean"), TF_MEASURE_ESTIMATE,
                   posterior_mean (P, Q, cut, dir));
   tf_results_add (results, "posterior_median", _("Posterior median"), TF_MEASURE_ESTIMATE,
-                  posterior_quantile (0.5, P, Q, cut, dir));
+                  posterior_quantile (&post, 0.5, cut, dir));
   double mode;
   if (posterior_mode (P, Q, cut, dir, &mode))
     tf_results_add (results, "posterior_mode", _("Posterior mode"), TF_MEASURE_ESTIMATE, mode);
@@ -412,10 +417,12 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
     tf_results_add_undefined (results, "posterior_mode", _("Posterior mode"), TF_MEASURE_ESTIMATE,
                               _("the posterior density is flat or U-shaped, so it has no single mode"));
   /* Under the untruncated Beta(k + a, n − k + b) posterior, whatever the direction. */
+  double lower_at_h, upper_at_h;
+  tf_incbeta_shape_log_both (&post, H, 1.0 - H, &lower_at_h, &upper_at_h, NULL);
   tf_results_add (results, "prob_greater",
                   point ? _("Posterior probability that θ > θ0")
                         : _("Posterior probability that θ lies above the null interval"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_incbeta_log_upper (H, 1.0 - H, P, Q)));
+                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (upper_at_h));
 
   /* Bounds: −e p ln p (Sellke, Bayarri & Berger 2001) from ln p, and
    * L(θ0) / L(k/n) = exp(−G/2) (Edwards, Lindman & Savage 1963) at the null's end

@@ -132,8 +132,9 @@ mirror (double P, double Q, double mode, double t)
  * lo f(lo) (1 − D'(lo)/D'(hi)); the tails from the log-space incomplete beta. The
  * equal-density condition is Box & Tiao's (1973, §2.8). */
 static void
-hdi_inside (double P, double Q, double level, double *lo, double *hi)
+hdi_inside (TfIncbetaShape *sh, double level, double *lo, double *hi)
 {
+  const double P = sh->a, Q = sh->b;
   double mode = (P - 1.0) / (P + Q - 2.0);
   double la = log (1.0 - level);
   double a = log (1e-300), b = log (mode);
@@ -146,12 +147,12 @@ hdi_inside (double P, double Q, double level, double *lo, double *hi)
    * falling from there */
   {
     double fl, fu, gl, gu, y = mirror (P, Q, mode, 1e-300);
-    tf_incbeta_log_both (1e-300, 1.0, P, Q, &fl, &fu);
-    tf_incbeta_log_both (y, 1.0 - y, P, Q, &gl, &gu);
+    tf_incbeta_shape_log_both (sh, 1e-300, 1.0, &fl, &fu, NULL);
+    tf_incbeta_shape_log_both (sh, y, 1.0 - y, &gl, &gu, NULL);
     if (tf_log_add (fl, gu) >= la)
       {
         *lo = 0.0;
-        *hi = tf_incbeta_inverse (1.0 - level, P, Q, FALSE);
+        *hi = tf_incbeta_shape_inverse_log (sh, log1p (-level), FALSE);
         return;
       }
   }
@@ -160,8 +161,8 @@ hdi_inside (double P, double Q, double level, double *lo, double *hi)
       double fl, fu, gl, gu;
       x = exp (v);
       double y = mirror (P, Q, mode, x);
-      tf_incbeta_log_both (x, 1.0 - x, P, Q, &fl, &fu);
-      tf_incbeta_log_both (y, 1.0 - y, P, Q, &gl, &gu);
+      tf_incbeta_shape_log_both (sh, x, 1.0 - x, &fl, &fu, NULL);
+      tf_incbeta_shape_log_both (sh, y, 1.0 - y, &gl, &gu, NULL);
       double lout = tf_log_add (fl, gu);
       /* ln out − ln α rises with lo */
       if (lout > la)
@@ -182,9 +183,69 @@ hdi_inside (double P, double Q, double level, double *lo, double *hi)
   *hi = mirror (P, Q, mode, *lo);
 }
 
-gboolean
-tf_beta_hdi (double P, double Q, double level, double *lo, double *hi)
+/* Newton's method on both conditions at once, F(lo) + S(hi) = 1 − level and
+ * f(lo) = f(hi) (Box & Tiao 1973, §2.8), in v = ln lo and w = ln(1 − hi), from the
+ * equal-tailed interval [lo0, hi0]: there the first condition holds already, so the
+ * first step needs the densities only. Stops once a step is below 1e-7 of the
+ * posterior sd on the scale of v and w (what is left is then about its square).
+ * FALSE when a step leaves (0, mode) × (mode, 1) or it does not settle in 8 steps. */
+static gboolean
+hdi_newton (TfIncbetaShape *sh, double level, double lo0, double hi0, double *lo, double *hi)
 {
+  const double P = sh->a, Q = sh->b, S = P + Q;
+  const double mode = (P - 1.0) / (S - 2.0), sd = sqrt (P / S * (Q / S) / (S + 1.0));
+  const double la = log1p (-level);
+
+  if (!(lo0 > 0.0 && lo0 < mode && hi0 > mode && hi0 < 1.0))
+    return FALSE;
+  double v = log (lo0), w = log1p (-hi0);
+  for (int i = 0; i < 8; i++)
+    {
+      double l = exp (v), yh = exp (w);
+      double h = 1.0 - yh;
+      double lout, lfl, lfh;       /* ln(F(lo) + S(hi)), ln f(lo), ln f(hi) */
+      if (i == 0)
+        {
+          lout = la;
+          lfl = tf_log_dbeta (l, 1.0 - l, P, Q);
+          lfh = tf_log_dbeta (h, yh, P, Q);
+        }
+      else
+        {
+          double fl, sl, fh, shi, pl, ph;
+          tf_incbeta_shape_log_both (sh, l, 1.0 - l, &fl, &sl, &pl);
+          tf_incbeta_shape_log_both (sh, h, yh, &fh, &shi, &ph);
+          lout = tf_log_add (fl, shi);
+          lfl = pl - v - log1p (-l);
+          lfh = ph - log (h) - w;
+        }
+      double r1 = lout - la;
+      double r2 = drop (P, Q, h) - drop (P, Q, l);     /* ln f(lo) − ln f(hi) */
+      /* the Jacobian in (v, w); its determinant is negative */
+      double j11 = exp (lfl + v - lout), j12 = exp (lfh + w - lout);
+      double j21 = (P - 1.0) - (Q - 1.0) * (l / (1.0 - l));
+      double j22 = (P - 1.0) * (yh / h) - (Q - 1.0);
+      double det = j11 * j22 - j12 * j21;
+      double dv = (j12 * r2 - j22 * r1) / det, dw = (j21 * r1 - j11 * r2) / det;
+      v += dv;
+      w += dw;
+      if (!(isfinite (v) && isfinite (w) && exp (v) < mode && -expm1 (w) > mode))
+        return FALSE;
+      if (fabs (dv) <= 1e-7 * MIN (1.0, sd / l) && fabs (dw) <= 1e-7 * MIN (1.0, sd / yh))
+        {
+          *lo = exp (v);
+          *hi = -expm1 (w);
+          return TRUE;
+        }
+    }
+  return FALSE;
+}
+
+gboolean
+tf_beta_hdi_from (TfIncbetaShape *shape, double level, double lo0, double hi0, double *lo,
+                  double *hi)
+{
+  const double P = shape->a, Q = shape->b;
   double alpha = 1.0 - level;
 
   if (P <= 1.0 && Q <= 1.0)
@@ -192,23 +253,41 @@ tf_beta_hdi (double P, double Q, double level, double *lo, double *hi)
   if (P <= 1.0)
     {
       *lo = 0.0;
-      *hi = tf_incbeta_inverse (alpha, P, Q, FALSE);
+      *hi = tf_incbeta_shape_inverse_log (shape, log (alpha), FALSE);
       return TRUE;
     }
   if (Q <= 1.0)
     {
-      *lo = tf_incbeta_inverse (alpha, P, Q, TRUE);
+      *lo = tf_incbeta_shape_inverse_log (shape, log (alpha), TRUE);
       *hi = 1.0;
       return TRUE;
     }
+  if (hdi_newton (shape, level, lo0, hi0, lo, hi))
+    return TRUE;
   if (P <= Q)
-    hdi_inside (P, Q, level, lo, hi);
+    hdi_inside (shape, level, lo, hi);
   else
     {
+      /* the robust search wants the end that may lie extremely near its boundary below */
+      TfIncbetaShape swapped;
       double l, h;
-      hdi_inside (Q, P, level, &l, &h);
+      tf_incbeta_shape_init (&swapped, Q, P);
+      hdi_inside (&swapped, level, &l, &h);
       *lo = 1.0 - h;
       *hi = 1.0 - l;
     }
   return TRUE;
+}
+
+gboolean
+tf_beta_hdi (double P, double Q, double level, double *lo, double *hi)
+{
+  TfIncbetaShape sh;
+  double alpha2 = 0.5 * (1.0 - level);
+
+  tf_incbeta_shape_init (&sh, P, Q);
+  if (P <= 1.0 || Q <= 1.0)
+    return tf_beta_hdi_from (&sh, level, NAN, NAN, lo, hi);
+  return tf_beta_hdi_from (&sh, level, tf_incbeta_shape_inverse_log (&sh, log (alpha2), TRUE),
+                           tf_incbeta_shape_inverse_log (&sh, log (alpha2), FALSE), lo, hi);
 }

@@ -4,6 +4,8 @@
  */
 #pragma once
 
+#include "tf-incbeta.h"
+
 #include <glib.h>
 
 G_BEGIN_DECLS
@@ -24,5 +26,10 @@ void tf_proportion_agresti_coull (double k, double n, double level, double *lo, 
  * ends when the mode is inside, one end at 0 or 1 when the density is monotone.
  * FALSE when the density is flat or U-shaped (no single interval). */
 gboolean tf_beta_hdi (double P, double Q, double level, double *lo, double *hi);
+
+/* The same for the shapes of posterior, given its equal-tailed interval [lo0, hi0] at
+ * level (the quantiles (1 − level)/2 of each tail) as the starting point. */
+gboolean tf_beta_hdi_from (TfIncbetaShape *posterior, double level, double lo0, double hi0,
+                           double *lo, double *hi);
 
 G_END_DECLS
