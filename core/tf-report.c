@@ -201,6 +201,7 @@ hypotheses_words (const TfAnalysis *a)
       null = g_strdup_printf (_("The null hypothesis is the point %s."), p1);
     }
   g_clear_pointer (&p1, g_free);
+  g_clear_pointer (&p2, g_free);
   switch (a->prior)
     {
     case TF_PRIOR_BETA:
