@@ -1,9 +1,11 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-two-proportions-curves.c: figures for two proportions: densities of θA − θB, the
- * Bayes factor against the prior's concentration, the hypergeometric null
- * distribution of kA, and the two models' probabilities.
+ * Bayes factor against the prior's concentration and against the total trials with the
+ * pooled z held, the hypergeometric null distribution of kA, and the two models'
+ * probabilities.
  */
 #include "tf-two-proportions.h"
+#include "tf-two-proportions-private.h"
 #include "tf-beta-difference.h"
 #include "tf-fisher.h"
 #include "tf-logspace.h"
@@ -11,6 +13,8 @@
 #include <math.h>
 #include <float.h>
 #include <glib/gi18n-lib.h>
+#include <gsl/gsl_errno.h>
+#include <gsl/gsl_sf_erf.h>
 
 static double
 finite_exp (double l)
@@ -115,6 +119,94 @@ tf_two_proportions_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *cur
                                                    an->prior_a, an->prior_b, an->direction);
   curve->chosen_log_bf01 = isfinite (l) ? l : 0.0;
   curve->chosen_posterior_null = posterior_null_of (curve->chosen_log_bf01, an->prior_null);
+  return TRUE;
+}
+
+/* The table at total T = f N, f = T / N, for the sample-size curve: every cell is
+ * scaled by f after the shift t = (f^{−1/2} − 1) D / N, D = kA nB − kB nA, is added to
+ * kA and nB − kB and taken from nA − kA and kB. The shift keeps the margins, so the
+ * group shares and the pooled proportion stay the observed ones, and turns D into
+ * f^{3/2} D, which holds the pooled z statistic D / √(m (N − m) nA nB / N). Where T is
+ * too small to reach that z the shift is clipped at the cell it empties. */
+static void
+held_table (const TfAnalysis *an, double total, double c[4])
+{
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double o[4] = { ka, na - ka, kb, nb - kb };
+  const double f = total / (na + nb);
+  const double g = tf_two_proportions_cross (ka, na, kb, nb) / (na + nb);
+  double t = (1.0 / sqrt (f) - 1.0) * g;
+
+  t = CLAMP (t, -MIN (o[0], o[3]), MIN (o[1], o[2]));
+  c[0] = f * (o[0] + t);
+  c[1] = f * (o[1] - t);
+  c[2] = f * (o[2] - t);
+  c[3] = f * (o[3] + t);
+}
+
+double
+tf_two_proportions_held_log_bf01 (const TfAnalysis *an, double total)
+{
+  double c[4];
+
+  held_table (an, total, c);
+  return tf_two_proportions_log_bf01_directed (c[0], c[0] + c[1], c[2], c[2] + c[3],
+                                               an->prior_a, an->prior_b, an->direction);
+}
+
+/* ln of the pooled z test's p-value in the analysis's direction; 0 when there are no
+ * successes or no failures at all. */
+static double
+log_p_pooled_z (const TfAnalysis *an)
+{
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double N = na + nb, m = ka + kb;
+  gsl_sf_result r;
+
+  if (m == 0.0 || m == N)
+    return 0.0;
+  double z = tf_two_proportions_cross (ka, na, kb, nb) / sqrt (m * ((N - m) / N) * na * nb);
+  double side = an->direction == TF_DIRECTION_GREATER ? z
+                : an->direction == TF_DIRECTION_LESS ? -z : fabs (z);
+  if (gsl_sf_log_erfc_e (side / G_SQRT2, &r) != GSL_SUCCESS)
+    return 0.0;
+  return MIN (0.0, r.val - (an->direction == TF_DIRECTION_TWO_SIDED ? 0.0 : G_LN2));
+}
+
+/* x = the total trials T from 2 (or where the observed z can first be reached) to
+ * 10^12, log-spaced, with the table of held_table(): the closed-form Bayes factor of
+ * the common-Beta model at each T. At fixed z, BF01 grows like √T (Jeffreys 1939,
+ * Lindley 1957). */
+gboolean
+tf_two_proportions_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                char **why_not G_GNUC_UNUSED)
+{
+  const TfAnalysis *an = analysis;
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double N = na + nb;
+  const double g = tf_two_proportions_cross (ka, na, kb, nb) / N;
+  /* the smallest f with the shift unclipped: (f^{−1/2} − 1)|g| = the cell it empties */
+  double room = g > 0.0 ? MIN (na - ka, kb) : MIN (ka, nb - kb);
+  double f_min = g == 0.0 ? 0.0 : 1.0 / ((1.0 + room / fabs (g)) * (1.0 + room / fabs (g)));
+  double bottom = MAX (2.0, MIN (2.0 * f_min * N, N));
+  double top = MAX (1e12, N);
+
+  for (guint i = 0; i < curve->n; i++)
+    {
+      double T = i + 1 == curve->n ? top : bottom * pow (top / bottom, (double) i / (curve->n - 1));
+      double l = tf_two_proportions_held_log_bf01 (an, T);
+      curve->x[i] = T;
+      curve->log_bf01[i] = l;
+      curve->posterior_null[i] = isfinite (l) ? posterior_null_of (l, an->prior_null) : NAN;
+    }
+  curve->x_log = TRUE;
+  curve->x_markup = g_strdup (_("total trials <i>N</i> (shares, pooled proportion and <i>z</i> held)"));
+  curve->chosen_x = N;
+  curve->chosen_log_bf01 = tf_two_proportions_log_bf01_directed (ka, na, kb, nb, an->prior_a,
+                                                                 an->prior_b, an->direction);
+  curve->chosen_posterior_null = isfinite (curve->chosen_log_bf01)
+                                 ? posterior_null_of (curve->chosen_log_bf01, an->prior_null) : NAN;
+  curve->p_value = exp (log_p_pooled_z (an));
   return TRUE;
 }
 

@@ -242,20 +242,23 @@ integrand (double s, void *data)
 }
 
 /* ∫ over s of e^{G(mode + s·scale) − G(mode)} on one side (dir = ±1): pieces
- * [0, 1], [1, 2], [2, 4], ... until the integrand at a piece's end is below e^{−60}. */
+ * [0, b], [b, 2b], [2b, 4b], ... until the integrand at a piece's end is below e^{−60}. */
 static gboolean
 integrate_side (LogOr *lo, gsl_integration_workspace *ws, double dir, double *sum)
 {
   gsl_function f = { integrand, lo };
-  double a = 0.0, b = 1.0;
+  /* the first piece at most 1 wide in ψ: where the prior is far wider than the
+   * likelihood's fall (a zero cell), the fall stays inside a piece of its own size */
+  double a = 0.0, b = MIN (1.0, 1.0 / lo->scale);
 
   *sum = 0.0;
-  for (int piece = 0; piece < 80; piece++)
+  for (int piece = 0; piece < 160; piece++)
     {
       double r, e;
       int status = gsl_integration_qag (&f, MIN (dir * a, dir * b), MAX (dir * a, dir * b),
                                         0.0, 1e-11, 200, GSL_INTEG_GAUSS21, ws, &r, &e);
-      if (status != GSL_SUCCESS && !(e <= 1e-9 * (*sum + r)))
+      /* where G is huge its rounding, 1e-16 of it, is the floor of the error */
+      if (status != GSL_SUCCESS && !(e <= MAX (1e-9, 1e-13 * fabs (lo->g_mode)) * (*sum + r)))
         return FALSE;
       *sum += r;
       double end = log_integrand (lo, lo->mode + dir * b * lo->scale, NULL, NULL) - lo->g_mode;

@@ -16,4 +16,9 @@ double tf_two_proportions_log_or_bf01 (double ka, double na, double kb, double n
 /* Adds bf01_log_or_normal. */
 void tf_two_proportions_add_log_or_bf (const TfAnalysis *analysis, TfResults *results);
 
+/* ln BF01 (closed form, the analysis's direction and prior) for the table of the
+ * sample-size curve at total trials T: group shares, pooled proportion and pooled z
+ * as observed (tf-two-proportions-curves.c). */
+double tf_two_proportions_held_log_bf01 (const TfAnalysis *analysis, double total);
+
 G_END_DECLS

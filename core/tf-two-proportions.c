@@ -444,6 +444,7 @@ const TfDesignClass tf_two_proportions_class = {
   .compute = tf_two_proportions_compute,
   .densities = tf_two_proportions_densities,
   .sensitivity = tf_two_proportions_sensitivity,
+  .sample_size = tf_two_proportions_sample_size,
   .null_distribution = tf_two_proportions_null_distribution,
   .model_probabilities = tf_two_proportions_model_probabilities,
 };

@@ -35,6 +35,8 @@ double tf_two_proportions_cross (double ka, double na, double kb, double nb);
 void tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curves);
 gboolean tf_two_proportions_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
                                          char **why_not);
+gboolean tf_two_proportions_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                         char **why_not);
 gboolean tf_two_proportions_null_distribution (const TfAnalysis *analysis,
                                                TfNullDistribution *dist, char **why_not);
 gboolean tf_two_proportions_model_probabilities (const TfAnalysis *analysis,

@@ -10,6 +10,7 @@
 #include "tf-fisher.h"
 #include "tf-beta-difference.h"
 #include "tf-two-proportions.h"
+#include "tf-two-proportions-private.h"
 #include "tf-check.h"
 
 #include <math.h>
@@ -228,9 +229,115 @@ test_curves (void)
   g_assert_nonnull (m);
   g_assert_cmpuint (m->n, ==, 2);
   assert_rel (m->posterior[0] + m->posterior[1], 1.0, 1e-14);
-  g_autofree char *why = NULL;
-  g_assert_null (tf_sample_size_curve_new (a, 11, NULL, &why));
+}
+
+/* The Bayes factor from a normal prior on the log odds ratio, to 10^15 trials a group.
+ * Absolute tolerances on ln BF01. */
+static void
+test_log_or_bf (void)
+{
+  const char *why = NULL;
+
+  /* one success in all: kA is 0 or 1 with probability ½ each, the likelihood ratio is
+   * 2/(1 + e^ψ), and its mean under any prior symmetric about 0 is 1 (derivation) */
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (0, 1e12, 1, 1e12, 1.0, &why)), <, 1e-12);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (1, 1, 0, 1, 3.0, &why)), <, 1e-12);
+  /* 0 of 10^15 against 7 of 10^15, σ = 10^8: kA is Binomial(7, ½) to O(1/N), so
+   * BF10 = E[128/(1 + e^ψ)^7] = 64 − 128 H_6 / (σ √2π) + O(σ^−3), H_6 = 49/20
+   * (derivation; the integral of σ(−x)^7 − 1[x < 0] is −H_6, checked by mpmath.quad) */
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (0, 1e15, 7, 1e15, 1e8, &why)
+                           - -4.1588830638114999), <, 1e-9);
+  /* mpmath 1.2.1 at mp.dps = 30, the reference of tests/crosscheck/tf-crosscheck-logor.py
+   * (the sum over the support as the integral of the Γ-continued terms) */
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (5e11, 1e12, 4e11, 1e12, 1e-12, &why)
+                           - -0.0012499999999371347), <, 1e-12);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (4e14, 1e15, 400000100000000, 1e15, 1.0, &why)
+                           - 5.792590217549667), <, 1e-9);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (4, 1e12, 3, 10, 1.0, &why)
+                           - -4.499999997751918), <, 1e-9);
+  /* the relative size of the answer where double precision holds no more: ln BF01 of
+   * −1.01e10 (mpmath, as above: −10118779826.78396) */
+  assert_rel (tf_two_proportions_log_or_bf01 (5e11, 1e12, 4e11, 1e12, 1e8, &why),
+              -10118779826.78396, 1e-12);
+  /* a PriorScale of 0 is not defined, and says why */
+  why = NULL;
+  g_assert_true (isnan (tf_two_proportions_log_or_bf01 (3, 10, 5, 10, 0.0, &why)));
   g_assert_nonnull (why);
+}
+
+/* The pooled z of a table (common practice: the score test of θA = θB). */
+static double
+pooled_z (double ka, double na, double kb, double nb)
+{
+  double N = na + nb, m = ka + kb;
+  return (ka * nb - kb * na) / sqrt (m * (N - m) / N * na * nb);
+}
+
+/* The sample-size curve: at the observed total it is the analysis's own BF01 and
+ * P(null | data); at every total the table has the observed group shares, pooled
+ * proportion and pooled z; at fixed z, BF01 grows like √n (Jeffreys 1939, Lindley
+ * 1957: ln BF01 = ½ ln n + O(1)), so the log-log slope tends to ½; finite everywhere. */
+static void
+test_sample_size (void)
+{
+  static const double tables[][4] = {
+    { 15, 50, 26, 50 }, { 56, 70, 48, 80 }, { 0, 10, 5, 10 }, { 10, 10, 3, 12 },
+    { 0, 5, 0, 7 }, { 1, 1, 0, 1 }, { 500000000, 1000000000, 500040000, 1000000000 },
+    { 3, 40000, 17, 60000 },
+  };
+  static const TfDirection dirs[] = { TF_DIRECTION_TWO_SIDED, TF_DIRECTION_GREATER,
+                                      TF_DIRECTION_LESS };
+
+  for (guint t = 0; t < G_N_ELEMENTS (tables); t++)
+    for (guint d = 0; d < G_N_ELEMENTS (dirs); d++)
+      {
+        const double *x = tables[t];
+        g_autoptr (TfAnalysis) a = two_props (x[0], x[1], x[2], x[3]);
+        a->direction = dirs[d];
+        a->prior_null = 0.3;
+        g_autoptr (TfResults) r = compute (a);
+        g_autoptr (TfEvidenceCurve) c = tf_sample_size_curve_new (a, 121, NULL, NULL);
+        double N = x[1] + x[3];
+
+        g_assert_nonnull (c);
+        g_assert_true (c->x_log);
+        assert_rel (c->chosen_x, N, 1e-15);
+        assert_rel (c->chosen_log_bf01, log (get (r, "bf01")), 1e-12);
+        assert_rel (c->chosen_posterior_null, get (r, "posterior_null"), 1e-12);
+        /* the curve itself passes through the observed table */
+        assert_rel (tf_two_proportions_held_log_bf01 (a, N), log (get (r, "bf01")), 1e-10);
+        for (guint i = 0; i < c->n; i++)
+          {
+            g_assert_true (isfinite (c->x[i]) && isfinite (c->log_bf01[i]));
+            g_assert_true (c->posterior_null[i] >= 0.0 && c->posterior_null[i] <= 1.0);
+            if (i > 0)
+              g_assert_cmpfloat (c->x[i], >, c->x[i - 1]);
+          }
+        /* no NaN from a total of 2 to 10^9, wherever the curve starts */
+        for (int i = 0; i <= 90; i++)
+          g_assert_true (isfinite (tf_two_proportions_held_log_bf01 (a, 2.0 * pow (5e8, i / 90.0))));
+        if (dirs[d] == TF_DIRECTION_TWO_SIDED && x[0] + x[2] > 0 && x[0] + x[2] < N)
+          assert_rel (c->p_value, get (r, "p_value_z"), 1e-12);
+      }
+
+  /* √n growth and the held z, for 15/50 against 26/50: the table at T = f N is the
+   * observed one shifted by t = (f^{−1/2} − 1)(kA nB − kB nA)/N and scaled by f */
+  g_autoptr (TfAnalysis) a = two_props (15, 50, 26, 50);
+  double z0 = pooled_z (15, 50, 26, 50);
+  for (double T = 1e4; T <= 1e12; T *= 100.0)
+    {
+      double f = T / 100.0, sh = (1.0 / sqrt (f) - 1.0) * (15.0 * 50 - 26.0 * 50) / 100.0;
+      double ka = f * (15 + sh), na = 50 * f, kb = f * (26 - sh), nb = 50 * f;
+      assert_rel (pooled_z (ka, na, kb, nb), z0, 1e-9);
+      assert_rel (tf_two_proportions_held_log_bf01 (a, T),
+                  tf_two_proportions_log_bf01 (ka, na, kb, nb, 1, 1), 1e-9);
+    }
+  double l8 = tf_two_proportions_held_log_bf01 (a, 1e8), l9 = tf_two_proportions_held_log_bf01 (a, 1e9);
+  double slope = (l9 - l8) / G_LN10;
+  g_test_message ("slope 1e8..1e9 %.6f, l8 %.6f l9 %.6f", slope, l8, l9);
+  g_assert_cmpfloat (fabs (slope - 0.5), <, 1e-3);
+  double l11 = tf_two_proportions_held_log_bf01 (a, 1e11), l12 = tf_two_proportions_held_log_bf01 (a, 1e12);
+  g_assert_cmpfloat (fabs ((l12 - l11) / G_LN10 - 0.5), <, 1e-4);
 }
 
 int
@@ -246,5 +353,7 @@ main (int argc, char **argv)
   g_test_add_func ("/two-proportions/hypergeometric", test_hypergeometric);
   g_test_add_func ("/two-proportions/beta-difference", test_beta_difference);
   g_test_add_func ("/two-proportions/curves", test_curves);
+  g_test_add_func ("/two-proportions/sample-size", test_sample_size);
+  g_test_add_func ("/two-proportions/log-odds-ratio", test_log_or_bf);
   return g_test_run ();
 }
