@@ -141,6 +141,50 @@ test_incbeta_inverse (void)
         }
 }
 
+/* The inverse at extreme shapes and tails against the root of mpmath 1.2.1's tail:
+ * mp.betainc(a, b, 0, x, regularized=True) (or 1 minus it) at the digits given, or
+ * for both shapes >= 1e3 tanh-sinh mp.quad of the density at mp.dps = 50, solved for
+ * x to 30 digits. With a shape of 0.01 the quantile moves 100 times the tail's
+ * relative error, hence 1e-12 there. */
+static void
+test_incbeta_inverse_extremes (void)
+{
+  static const struct {
+    double a, b, p;
+    gboolean lower;
+    double want, tol;
+  } c[] = {
+    { 0.01, 0.01, 0.3, TRUE, 6.4281199357186124242e-23, 1e-12 },          /* dps 60 */
+    { 0.01, 5, 0.5, TRUE, 9.8922404241125398696e-32, 1e-12 },             /* dps 60 */
+    { 0.01, 1e13, 0.5, TRUE, 4.4655350189105761654e-44, 1e-12 },          /* dps 60 */
+    { 0.01, 1e13, 1e-300, FALSE, 6.7971813328061762991e-11, 1e-13 },      /* dps 450 */
+    { 2, 1e12, 1e-300, FALSE, 6.9732421113587339469e-10, 1e-13 },         /* dps 450 */
+    { 20, 0.02, 1e-300, TRUE, 1.4075573172772482386e-15, 1e-13 },         /* dps 60 */
+    { 0.5, 3, 0.999999, TRUE, 0.98529110861986068739, 1e-14 },            /* dps 60 */
+    { 3, 1e13, 0.025, TRUE, 6.1867212289552029506e-14, 1e-13 },           /* dps 80 */
+    { 0.01, 1e4, 1e-200, FALSE, 0.043991970366486457133, 1e-13 },         /* dps 350 */
+    { 1e13, 1e13, 1e-300, TRUE, 0.49999585800871535338, 1e-15 },          /* mp.quad */
+    { 1e13, 2e13, 0.5, TRUE, 0.33333333333332962963, 1e-15 },             /* mp.quad */
+    { 5e11, 5e11, 1e-20, FALSE, 0.50000463117004480103, 1e-15 },          /* mp.quad */
+    { 1e3, 1e6, 0.999999999999, TRUE, 0.0012374798825305140677, 1e-13 }, /* mp.quad */
+  };
+  for (guint i = 0; i < G_N_ELEMENTS (c); i++)
+    assert_rel (tf_incbeta_inverse (c[i].p, c[i].a, c[i].b, c[i].lower), c[i].want, c[i].tol);
+  /* ln p = −1000, below the smallest double: mpmath's root at dps 60 (I_x(2, 3) =
+   * 6x² − 8x³ + 3x⁴, so x = e^−500 / √6 to double precision) */
+  assert_rel (tf_incbeta_inverse_log (-1000.0, 2, 3, TRUE), 2.908596138331301793e-218, 1e-14);
+  /* quantiles that no double can hold round to the end: (1e-300 · ½ · π)² (Beta(½, ½),
+   * I_x ≈ 2√x / π), 1 − 6.4e-23 (from the first case, by symmetry), 1 − ~1e-21 */
+  g_assert_cmpfloat (tf_incbeta_inverse (1e-300, 0.5, 0.5, TRUE), ==, 0.0);
+  g_assert_cmpfloat (tf_incbeta_inverse (0.3, 0.01, 0.01, FALSE), ==, 1.0);
+  g_assert_cmpfloat (tf_incbeta_inverse (1e-300, 8, 14, FALSE), ==, 1.0);
+  /* one prepared shape serves many inversions with the same results */
+  TfIncbetaShape sh;
+  tf_incbeta_shape_init (&sh, 1e13, 1e13);
+  for (int i = 0; i < 3; i++)
+    assert_rel (tf_incbeta_shape_inverse_log (&sh, log (1e-300), TRUE), c[9].want, 1e-15);
+}
+
 static void
 test_binomial (void)
 {
@@ -184,6 +228,7 @@ main (int argc, char **argv)
   g_test_add_func ("/numerics/log-helpers", test_log_helpers);
   g_test_add_func ("/numerics/incbeta", test_incbeta);
   g_test_add_func ("/numerics/incbeta-inverse", test_incbeta_inverse);
+  g_test_add_func ("/numerics/incbeta-inverse-extremes", test_incbeta_inverse_extremes);
   g_test_add_func ("/numerics/binomial", test_binomial);
   return g_test_run ();
 }

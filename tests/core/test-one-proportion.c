@@ -294,6 +294,22 @@ test_intervals (void)
   g_assert_true (tf_beta_hdi (2, 1.000001, 0.95, &hl, &hh));
   assert_rel (hl, 1.0 - 0.7763933516965706, 1e-9);
   g_assert_false (tf_beta_hdi (0.5, 0.5, 0.95, &hl, &hh));               /* U-shaped */
+  /* HDI of Beta(413, 589) and Beta(400001000001, 599999000001) (the benchmark's data,
+   * uniform prior): mpmath 1.2.1 at mp.dps = 40, findroot on the lower end of the
+   * mp.quad mass between it and its equal-density mirror; 1e-15 (a thousandth of the
+   * interval's width at n = 1e12 would be 5e-9 relative) */
+  static const double hdi_want[2][4] = {
+    { 412, 1000, 0.38177009233053723269, 0.44267945322531773485 },
+    { 400001000000, 1e12, 0.40000003981752075135, 0.40000196018299143803 },
+  };
+  for (guint i = 0; i < 2; i++)
+    {
+      g_autoptr (TfAnalysis) h = make (hdi_want[i][0], hdi_want[i][1], 0.4, 1, 1,
+                                       TF_DIRECTION_TWO_SIDED);
+      g_autoptr (TfResults) hr = compute (h);
+      assert_rel (get (hr, "hdi_low"), hdi_want[i][2], 1e-15);
+      assert_rel (get (hr, "hdi_high"), hdi_want[i][3], 1e-15);
+    }
 
   g_autoptr (TfAnalysis) big = make (3, 1e12, 0.5, 1, 1, TF_DIRECTION_TWO_SIDED);
   g_autoptr (TfResults) b = compute (big);
