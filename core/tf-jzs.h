@@ -19,6 +19,13 @@ double tf_jzs_log_bf10 (double t, double n_eff, double df, double r);
  * normal–normal closed form). */
 double tf_normal_prior_log_bf10 (double t, double n_eff, double df, double r);
 
+/* ln BF±0 of δ > 0 (side = +1) or δ < 0 (side = −1) against δ = 0, the prior truncated
+ * to the side (Morey & Wagenmakers 2014), without the posterior of δ: one integral
+ * over g (Cauchy) or a closed form (normal). */
+double tf_jzs_log_bf_one_sided (double t, double n_eff, double df, double r, int side);
+double tf_normal_prior_log_bf_one_sided (double t, double n_eff, double df, double r,
+                                         int side);
+
 /* Counts of the fast path and of its adaptive fallback, for tests and benchmarks. */
 void tf_jzs_get_counts (guint64 *fast, guint64 *fallback);
 

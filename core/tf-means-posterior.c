@@ -324,28 +324,23 @@ log_prior_mass (const TfDeltaPrior *prior, double a, double b)
 double
 tf_means_log_bf01 (const TfDeltaPrior *prior, double t, double n_eff, double df)
 {
-  double l10 = prior->prior == TF_PRIOR_NORMAL
-               ? tf_normal_prior_log_bf10 (t, n_eff, df, prior->r)
-               : tf_jzs_log_bf10 (t, n_eff, df, prior->r);
-
   if (!prior->interval && prior->direction == TF_DIRECTION_TWO_SIDED)
-    return -l10;
-  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (prior, t, n_eff, df);
-  if (prior->interval)
+    return prior->prior == TF_PRIOR_NORMAL ? -tf_normal_prior_log_bf10 (t, n_eff, df, prior->r)
+                                           : -tf_jzs_log_bf10 (t, n_eff, df, prior->r);
+  if (!prior->interval)
     {
-      /* Morey & Rouder (2011): both hypotheses truncate the same prior,
-       * BF01 = [P(I | y) / P(I)] / [P(out | y) / P(out)]. */
-      double in = tf_delta_posterior_log_mass (post, prior->low, prior->high);
-      double out = tf_log_add (tf_delta_posterior_log_mass (post, -INFINITY, prior->low),
-                               tf_delta_posterior_log_mass (post, prior->high, INFINITY));
-      double pin = log_prior_mass (prior, prior->low, prior->high);
-      double pout = tf_log1mexp (pin);
-      return in - pin - out + pout;
+      int side = prior->direction == TF_DIRECTION_GREATER ? 1 : -1;
+      return prior->prior == TF_PRIOR_NORMAL
+             ? -tf_normal_prior_log_bf_one_sided (t, n_eff, df, prior->r, side)
+             : -tf_jzs_log_bf_one_sided (t, n_eff, df, prior->r, side);
     }
-  /* One-sided by truncation (Morey & Wagenmakers 2014): BF±0 = BF10 P(side | y) / ½. */
-  double side = prior->direction == TF_DIRECTION_GREATER
-                ? tf_delta_posterior_log_mass (post, 0.0, INFINITY)
-                : tf_delta_posterior_log_mass (post, -INFINITY, 0.0);
-  return -(l10 + side + G_LN2);
+  /* Interval null (Morey & Rouder 2011): both hypotheses truncate the same prior,
+   * BF01 = [P(I | y) / P(I)] / [P(out | y) / P(out)]. */
+  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (prior, t, n_eff, df);
+  double in = tf_delta_posterior_log_mass (post, prior->low, prior->high);
+  double out = tf_log_add (tf_delta_posterior_log_mass (post, -INFINITY, prior->low),
+                           tf_delta_posterior_log_mass (post, prior->high, INFINITY));
+  double pin = log_prior_mass (prior, prior->low, prior->high);
+  double pout = tf_log1mexp (pin);
+  return in - pin - out + pout;
 }
-

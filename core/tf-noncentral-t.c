@@ -107,23 +107,38 @@ tf_nct_cdf (double t, double df, double ncp)
 }
 
 typedef struct {
-  double df, a, y0, shift;
+  double c, y0;                 /* ν + 1 and the mode */
 } HermiteParams;
 
-/* (ν + 1) s − (y0 e^s − a)²/2: the log of y^ν e^(−(y − a)²/2) dy in y = y0 e^s. */
+/* s − (e^s − 1), by its series −Σ_{k≥2} s^k/k! where the difference would cancel. */
+static double
+s_minus_expm1 (double s)
+{
+  if (fabs (s) >= 0.5)
+    return s - expm1 (s);
+  double term = 0.5 * s * s, sum = 0.0;
+  for (int k = 3; k < 40 && fabs (term) > 1e-17 * fabs (sum); k++)
+    {
+      sum += term;
+      term *= s / k;
+    }
+  return -sum;
+}
+
+/* ln of y^(ν+1) e^(−(y − a)²/2) at y = y0 e^s minus its value at the mode y0: with
+ * y0 (y0 − a) = ν + 1 and e = e^s − 1 it is (ν + 1)(s − e) − (y0 e)²/2, free of the
+ * cancellation of the two terms of order ν. */
 static double
 hermite_log (const HermiteParams *p, double s)
 {
-  double y = p->y0 * exp (s);
-  double d = y - p->a;
-  return (p->df + 1.0) * s - 0.5 * d * d;
+  double ye = p->y0 * expm1 (s);
+  return p->c * s_minus_expm1 (s) - 0.5 * ye * ye;
 }
 
 static double
 hermite_integrand (double s, void *data)
 {
-  const HermiteParams *p = data;
-  return exp (hermite_log (p, s) - p->shift);
+  return exp (hermite_log (data, s));
 }
 
 /* ln ∫₀^∞ y^ν e^(−(y − a)²/2) dy (the Hermite function times Γ(ν + 1), Johnson, Kotz &
@@ -132,12 +147,12 @@ hermite_integrand (double s, void *data)
 static double
 log_hermite_integral (double df, double a)
 {
-  HermiteParams p = { .df = df, .a = a };
-  double c = df + 1.0;
+  HermiteParams p = { .c = df + 1.0 };
+  double c = p.c;
   /* mode of y^(ν+1) e^(−(y − a)²/2) in y: y (y − a) = ν + 1, solved without cancellation */
   p.y0 = a >= 0.0 ? 0.5 * (a + sqrt (a * a + 4.0 * c)) : 2.0 * c / (sqrt (a * a + 4.0 * c) - a);
   double sigma = 1.0 / sqrt (p.y0 * (2.0 * p.y0 - a));
-  p.shift = hermite_log (&p, 0.0);
+  double d = p.y0 - a;
   double lo = -(14.0 * sigma + 45.0 / c), hi = 14.0 * sigma;
   gsl_integration_workspace *w = gsl_integration_workspace_alloc (200);
   gsl_function f = { hermite_integrand, &p };
@@ -147,7 +162,7 @@ log_hermite_integral (double df, double a)
   gsl_integration_workspace_free (w);
   if (status != GSL_SUCCESS && !(err < 1e-9 * res))
     return NAN;
-  return p.shift + (df + 1.0) * log (p.y0) + log (res);
+  return c * log (p.y0) - 0.5 * d * d + log (res);
 }
 
 double

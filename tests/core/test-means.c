@@ -125,6 +125,38 @@ test_one_sided_identity (void)
 }
 
 static void
+test_one_sided_sleep (void)
+{
+  /* The sleep data's t = 4.062127683382037, n = 10, r = √2/2. scipy 1.10.1: quad of
+   * nct.pdf(t, 9, √10 δ) · 2 cauchy.pdf(δ, 0, r) over δ > 0 (δ < 0), over t.pdf(t, 9):
+   * BF+0 = 34.41693597129677, BF−0 = 0.10082456425110407 */
+  TfDeltaPrior p = { .prior = TF_PRIOR_CAUCHY, .r = M_SQRT1_2, .direction = TF_DIRECTION_GREATER };
+  REL (exp (-tf_means_log_bf01 (&p, 4.062127683382037, 10.0, 9.0)), 34.41693597129677, 1e-9);
+  p.direction = TF_DIRECTION_LESS;
+  REL (exp (-tf_means_log_bf01 (&p, 4.062127683382037, 10.0, 9.0)), 0.10082456425110407, 1e-9);
+}
+
+/* n = 10^8, t = ±10^3: finite, the two truncations add up (Morey & Wagenmakers 2014),
+ * and the side the data point to carries all of the two-sided evidence. */
+static void
+test_extreme (void)
+{
+  const double ts[] = { 1e3, -1e3, 1e-3 }, dfs[] = { 1e8 - 1.0, INFINITY };
+  for (guint i = 0; i < G_N_ELEMENTS (ts); i++)
+    for (guint j = 0; j < G_N_ELEMENTS (dfs); j++)
+      {
+        double t = ts[i], l10 = tf_jzs_log_bf10 (t, 1e8, dfs[j], M_SQRT1_2);
+        double lp = tf_jzs_log_bf_one_sided (t, 1e8, dfs[j], M_SQRT1_2, 1);
+        double lm = tf_jzs_log_bf_one_sided (t, 1e8, dfs[j], M_SQRT1_2, -1);
+        g_assert_true (isfinite (l10) && isfinite (lp) && isfinite (lm));
+        double hi = MAX (lp, lm), sum = hi + log1p (exp (MIN (lp, lm) - hi));
+        g_assert_cmpfloat (fabs (sum - (l10 + G_LN2)), <=, 1e-10 * MAX (1.0, fabs (l10)));
+        if (fabs (t) > 1.0)
+          g_assert_cmpfloat (fabs ((t > 0 ? lp : lm) - (l10 + G_LN2)), <=, 1e-12 * fabs (l10));
+      }
+}
+
+static void
 test_noncentral_t (void)
 {
   /* scipy 1.10.1: scipy.stats.nct.cdf(1.5, 10, 1) = 0.6695168482153548,
@@ -250,6 +282,8 @@ main (int argc, char **argv)
   g_test_add_func ("/means/two-means", test_two_means);
   g_test_add_func ("/means/known-sd", test_known_sd);
   g_test_add_func ("/means/one-sided-identity", test_one_sided_identity);
+  g_test_add_func ("/means/one-sided-sleep", test_one_sided_sleep);
+  g_test_add_func ("/means/extreme", test_extreme);
   g_test_add_func ("/means/noncentral-t", test_noncentral_t);
   g_test_add_func ("/means/validation", test_validation);
   g_test_add_func ("/means/no-nan", test_no_nan);

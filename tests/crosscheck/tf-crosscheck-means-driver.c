@@ -10,6 +10,8 @@
  *   pval t df dir             p-value, dir 0 two-sided, 1 greater, 2 less
  *   welch na sa nb sb         Welch–Satterthwaite df
  *   side t n_eff df r         ln P(δ > 0 | data) under the Cauchy prior
+ *   jzsside t n_eff df r s    ln BF±0, Cauchy prior truncated to the side s = 1 or −1
+ *   normalside t n_eff df r s ln BF±0, normal prior truncated to the side
  */
 #include <stdio.h>
 #include <string.h>
@@ -25,12 +27,13 @@ int
 main (void)
 {
   char line[512], what[32];
-  double v[5];
+  double v[5] = { 0 };
 
   gsl_set_error_handler_off ();
   while (fgets (line, sizeof line, stdin) != NULL)
     {
-      int got = sscanf (line, "%31s %lf %lf %lf %lf", what, &v[0], &v[1], &v[2], &v[3]);
+      int got = sscanf (line, "%31s %lf %lf %lf %lf %lf", what, &v[0], &v[1], &v[2], &v[3],
+                        &v[4]);
       if (got < 4)
         {
           printf ("nan\n");
@@ -50,6 +53,10 @@ main (void)
         printf ("%.17g\n", tf_means_p_value (v[0], v[1], (TfDirection) (int) v[2]));
       else if (strcmp (what, "welch") == 0)
         printf ("%.17g\n", tf_welch_df (v[0], v[1], v[2], v[3]));
+      else if (strcmp (what, "jzsside") == 0)
+        printf ("%.17g\n", tf_jzs_log_bf_one_sided (v[0], v[1], v[2], v[3], (int) v[4]));
+      else if (strcmp (what, "normalside") == 0)
+        printf ("%.17g\n", tf_normal_prior_log_bf_one_sided (v[0], v[1], v[2], v[3], (int) v[4]));
       else if (strcmp (what, "side") == 0)
         {
           TfDeltaPrior prior = { .prior = TF_PRIOR_CAUCHY, .r = v[3] };

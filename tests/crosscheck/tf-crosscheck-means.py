@@ -109,6 +109,16 @@ def jzs_scipy(t, n, df, r):
     return m + math.log(tot)
 
 
+def mp_log_quad(lf):
+    """ln ∫ e^lf(u) du over ln g, by mpmath.quad split around the maximum on a grid."""
+    us = [mp.mpf(x) / 2 for x in range(-100, 100)]
+    vals = [lf(u) for u in us]
+    i = max(range(len(us)), key=lambda k: vals[k])
+    um, m = us[i], vals[i]
+    val = mp.quad(lambda u: mp.e ** (lf(u) - m), [um - 30, um - 5, um, um + 5, um + 40, um + 80])
+    return float(m + mp.log(val))
+
+
 def jzs_mpmath(t, n, df, r):
     """mpmath.quad at 30 digits on the same published integrand."""
     mp.mp.dps = 30
@@ -124,12 +134,7 @@ def jzs_mpmath(t, n, df, r):
             ll = -mp.log1p(n * g) / 2 - (dfm + 1) / 2 * (
                 mp.log1p(t * t / ((1 + n * g) * dfm)) - mp.log1p(t * t / dfm))
         return ll + mp.log(r) - mp.log(2 * mp.pi) / 2 - u / 2 - r * r / (2 * g)
-    us = [mp.mpf(x) / 2 for x in range(-100, 100)]
-    vals = [lf(u) for u in us]
-    i = max(range(len(us)), key=lambda k: vals[k])
-    um, m = us[i], vals[i]
-    val = mp.quad(lambda u: mp.e ** (lf(u) - m), [um - 30, um - 5, um, um + 5, um + 40, um + 80])
-    return float(m + mp.log(val))
+    return mp_log_quad(lf)
 
 
 def normal_mpmath(t, n, df, r):
@@ -149,13 +154,29 @@ def fmt(x):
 
 # --- Bayes factors ------------------------------------------------------------------
 
+def extreme_designs():
+    """The corners of the domain: t = ±10^3, 10^-3, 3; n = 2, 10^4, 10^8 as one sample,
+    two equal samples and a known SD."""
+    out = []
+    for t in (1e3, -1e3, 1e-3, 3.0):
+        for n in (2.0, 1e4, 1e8):
+            out += [(t, n, n - 1), (t, n / 2, 2 * n - 2), (t, n, math.inf)]
+    return out
+
+
+EXTREME = [(t, n, df, r) for t, n, df in extreme_designs() for r in (1e-2, math.sqrt(0.5), 1e2)]
 cases = []
 for _ in range(N_CASES):
     t, n, df = draw_design()
     cases.append((t, n, df, log_uniform(1e-2, 1e2)))
-got = run(['jzs %r %r %s %r\n' % (t, n, fmt(df), r) for t, n, df, r in cases])
+got = run(['jzs %r %r %s %r\n' % (t, n, fmt(df), r) for t, n, df, r in cases + EXTREME])
 report('jzs', cases, got, [jzs_scipy(*c) for c in cases], lbf_err, 1e-7,
        'scipy.integrate.quad(published integrand in ln g, epsrel=1e-13)')
+report('jzs-x', EXTREME, got[len(cases):], [jzs_scipy(*c) for c in EXTREME], lbf_err, 1e-7,
+       'the same scipy reference at the corners of the domain')
+big = [c for c in EXTREME if c[1] >= 5e7]
+report('jzs-x-mp', big, [g for c, g in zip(EXTREME, got[len(cases):]) if c[1] >= 5e7],
+       [jzs_mpmath(*c) for c in big], lbf_err, 1e-9, 'mpmath.quad, mp.dps = 30, n = 10^8')
 sub = list(range(0, len(cases), max(1, len(cases) // 100)))
 report('jzs-mp', [cases[i] for i in sub], [got[i] for i in sub],
        [jzs_mpmath(*cases[i]) for i in sub], lbf_err, 1e-9, 'mpmath.quad, mp.dps = 30')
@@ -301,9 +322,97 @@ def side_ref(t, n, df, r):
     return math.log(pos / tot)
 
 
-report('P(d>0)', scases, got, [side_ref(*c) for c in scases],
+sref = [side_ref(*c) for c in scases]
+report('P(d>0)', scases, got, sref,
        lambda g, r: abs(math.exp(g) - math.exp(r)), 1e-7,
        'scipy.integrate.quad of the JKB 31.15 density (itself by quad) x scipy.stats.cauchy.pdf, absolute')
+
+# --- one-sided Bayes factors ----------------------------------------------------------
+# BF+0 = BF10 P(δ > 0 | data) / ½ (Morey & Wagenmakers 2014), both factors from the
+# references above; Twofold computes it as one integral over g instead.
+got = run(['jzsside %r %r %r %r 1\n' % c for c in scases])
+report('jzs-side', scases, got, [jzs_scipy(*c) + s + math.log(2) for c, s in zip(scases, sref)],
+       lbf_err, 1e-7, 'scipy jzs reference + ln P(d>0) reference + ln 2')
+
+
+def log_incbeta_cf(a, b, x):
+    """ln I_x(a, b) in mpmath by the continued fraction (Abramowitz & Stegun 1964,
+    26.5.8; modified Lentz), by I_x(a, b) = 1 − I_(1−x)(b, a) past its range of fast
+    convergence (mpmath's own betainc does not converge for a near 10^8)."""
+    if x > (a + 1) / (a + b + 2):
+        return mp.log1p(-mp.e ** log_incbeta_cf(b, a, 1 - x))
+    tiny = mp.mpf(10) ** (-2 * mp.mp.dps)
+    c, d = mp.mpf(1), 1 - (a + b) * x / (a + 1)
+    d = 1 / (d if abs(d) > tiny else tiny)
+    f = d
+    for m in range(1, 100000):
+        for num in (m * (b - m) * x / ((a + 2 * m - 1) * (a + 2 * m)),
+                    -(a + m) * (a + b + m) * x / ((a + 2 * m) * (a + 2 * m + 1))):
+            d = 1 + num * d
+            d = 1 / (d if abs(d) > tiny else tiny)
+            c = 1 + num / c
+            c = c if abs(c) > tiny else tiny
+            f *= c * d
+        if abs(c * d - 1) < mp.mpf(10) ** (3 - mp.mp.dps):
+            break
+    return (a * mp.log(x) + b * mp.log1p(-x) - mp.log(a) - mp.loggamma(a) - mp.loggamma(b)
+            + mp.loggamma(a + b) + mp.log(f))
+
+
+def log_t_cdf_mp(x, nu):
+    """ln P(T <= x), T ~ t(nu) (nu = inf: the normal), in mpmath."""
+    if nu == math.inf:
+        return mp.log(mp.ncdf(x))
+    tail = log_incbeta_cf(nu / 2, mp.mpf(1) / 2, nu / (nu + x * x)) - mp.log(2)
+    return tail if x <= 0 else mp.log1p(-mp.e ** tail)
+
+
+def side_mixture_mpmath(t, n, df, r, side):
+    """ln BF±0 as the JZS mixture over g of BF10(g) · 2 P(±δ > 0 | data, g), with
+    P(δ > 0 | g) = T_(ν+1)(t √(N g (ν + 1) / ((1 + N g) ν + t²))) (the conjugate update
+    with σ integrated out; Φ(t √(N g / (1 + N g))) for a known SD), at mp.dps = 30."""
+    mp.mp.dps = 30
+    inf = df == math.inf
+    t, n, r = mp.mpf(t), mp.mpf(n), mp.mpf(r)
+    dfm = None if inf else mp.mpf(df)
+
+    def lf(u):
+        g = mp.e ** u
+        if inf:
+            ll = -mp.log1p(n * g) / 2 + t * t / 2 * (n * g / (1 + n * g))
+            lp = log_t_cdf_mp(side * t * mp.sqrt(n * g / (1 + n * g)), math.inf)
+        else:
+            ll = -mp.log1p(n * g) / 2 - (dfm + 1) / 2 * (
+                mp.log1p(t * t / ((1 + n * g) * dfm)) - mp.log1p(t * t / dfm))
+            lp = log_t_cdf_mp(side * t * mp.sqrt(n * g * (dfm + 1) / ((1 + n * g) * dfm + t * t)),
+                              dfm + 1)
+        return ll + lp + mp.log(2 * r) - mp.log(2 * mp.pi) / 2 - u / 2 - r * r / (2 * g)
+    return mp_log_quad(lf)
+
+
+xside = [(t, n, df, math.sqrt(0.5), s) for t, n, df in extreme_designs()
+         if abs(t) > 1 and n >= 5e7 for s in (1, -1)]
+got = run(['jzsside %r %r %s %r %d\n' % (t, n, fmt(df), r, s) for t, n, df, r, s in xside])
+report('jzs-side-x', xside, got, [side_mixture_mpmath(*c) for c in xside], lbf_err, 1e-9,
+       'mpmath.quad of the mixture, T by continued fraction, mp.dps = 30, n = 10^8')
+
+
+def normal_side_mpmath(t, n, df, r, side):
+    """ln BF±0 with δ ~ N(0, r²): BF10 at g = r² times 2 P(±δ > 0 | data, g = r²)."""
+    mp.mp.dps = 40
+    g = mp.mpf(r) ** 2
+    tm, nm = mp.mpf(t), mp.mpf(n)
+    if df == math.inf:
+        x = tm * mp.sqrt(nm * g / (1 + nm * g))
+    else:
+        x = tm * mp.sqrt(nm * g * (df + 1) / ((1 + nm * g) * df + tm * tm))
+    return normal_mpmath(t, n, df, r) + float(mp.log(2) + log_t_cdf_mp(side * x, df + 1))
+
+
+nside = [c + ((1 if rng.uniform() < 0.5 else -1),) for c in cases[: N_CASES // 10]]
+got = run(['normalside %r %r %s %r %d\n' % (t, n, fmt(df), r, s) for t, n, df, r, s in nside])
+report('normal-side', nside, got, [normal_side_mpmath(*c) for c in nside], lbf_err, 1e-9,
+       'closed form with the T tail by continued fraction in mpmath, mp.dps = 40')
 
 print('failures: %d' % failures)
 sys.exit(1 if failures else 0)
