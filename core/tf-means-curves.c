@@ -124,9 +124,10 @@ t_from_p (double p, double df, TfDirection dir, double sign)
 }
 
 gboolean
-tf_means_sample_size (const TfAnalysis *analysis, const TfMeansStats *s, double n_eff_per_n,
-                      double df_offset, TfEvidenceCurve *curve, char **why_not)
+tf_means_sample_size (const TfAnalysis *analysis, const TfMeansStats *s,
+                      TfEvidenceCurve *curve, char **why_not)
 {
+  const double n_eff_per_n = s->n_eff_per_n, df_offset = s->df_offset;
   TfDeltaPrior prior;
   const guint np = curve->n;
   double p = tf_means_p_value (s->t_delta, s->df_delta, analysis->direction);

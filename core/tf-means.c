@@ -3,6 +3,8 @@
  * two-means designs.
  */
 #include "tf-means.h"
+#include "tf-one-mean.h"
+#include "tf-two-means.h"
 #include "tf-evidence.h"
 #include "tf-jzs.h"
 #include "tf-noncentral-t.h"
@@ -248,4 +250,54 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
   if ((dir == TF_DIRECTION_GREATER && s->t <= 0.0) || (dir == TF_DIRECTION_LESS && s->t >= 0.0))
     llr = 0.0;
   tf_results_add_bounds (results, log (p_value), llr);
+}
+
+void
+tf_means_stats (const TfAnalysis *analysis, TfMeansStats *stats)
+{
+  if (analysis->design == TF_DESIGN_TWO_MEANS)
+    tf_two_means_stats (analysis, stats);
+  else
+    tf_one_mean_stats (analysis, stats);
+}
+
+void
+tf_means_class_compute (const TfAnalysis *analysis, TfResults *results)
+{
+  TfMeansStats s;
+  tf_means_stats (analysis, &s);
+  tf_means_compute (analysis, &s, results);
+}
+
+void
+tf_means_class_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
+{
+  TfMeansStats s;
+  tf_means_stats (analysis, &s);
+  tf_means_densities (analysis, &s, curves);
+}
+
+gboolean
+tf_means_class_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  TfMeansStats s;
+  tf_means_stats (analysis, &s);
+  return tf_means_sensitivity (analysis, &s, curve, why_not);
+}
+
+gboolean
+tf_means_class_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  TfMeansStats s;
+  tf_means_stats (analysis, &s);
+  return tf_means_sample_size (analysis, &s, curve, why_not);
+}
+
+gboolean
+tf_means_class_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
+                                  char **why_not)
+{
+  TfMeansStats s;
+  tf_means_stats (analysis, &s);
+  return tf_means_null_distribution (analysis, &s, dist, why_not);
 }

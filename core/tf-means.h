@@ -25,6 +25,8 @@ typedef struct {
   double n_eff;
   double n_total;               /* observations: the likelihood-ratio bound's exponent */
   double p_student, p_welch;    /* two means */
+  /* the sample-size curve: n_eff = n · n_eff_per_n and df = n − df_offset at total n */
+  double n_eff_per_n, df_offset;
 } TfMeansStats;
 
 /* Prior on δ and the evidence against the null, for one (t, n_eff, df). */
@@ -53,14 +55,32 @@ void tf_means_validate_sample (GPtrArray *problems, const char *n_key, const cha
                                double n, double mean, double sd, double min_n,
                                gboolean sd_may_be_zero);
 
+/* The statistics of a valid one-mean, paired-means or two-means analysis. */
+void tf_means_stats (const TfAnalysis *analysis, TfMeansStats *stats);
+
+/* The design-class callbacks the three designs share: the statistics, then the
+ * numbers or the curve. */
+void tf_means_class_compute (const TfAnalysis *analysis, TfResults *results);
+void tf_means_class_densities (const TfAnalysis *analysis, TfDensityCurves *curves);
+gboolean tf_means_class_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                     char **why_not);
+gboolean tf_means_class_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                     char **why_not);
+gboolean tf_means_class_null_distribution (const TfAnalysis *analysis,
+                                           TfNullDistribution *dist, char **why_not);
+#define TF_MEANS_CLASS_CALLBACKS \
+  .compute = tf_means_class_compute, \
+  .densities = tf_means_class_densities, \
+  .sensitivity = tf_means_class_sensitivity, \
+  .sample_size = tf_means_class_sample_size, \
+  .null_distribution = tf_means_class_null_distribution,
+
 void tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *stats, TfResults *results);
 void tf_means_densities (const TfAnalysis *analysis, const TfMeansStats *stats,
                          TfDensityCurves *curves);
 gboolean tf_means_sensitivity (const TfAnalysis *analysis, const TfMeansStats *stats,
                                TfEvidenceCurve *curve, char **why_not);
-/* n_eff_per_n and df_offset: n_eff = n · n_eff_per_n and df = n − df_offset at total n. */
 gboolean tf_means_sample_size (const TfAnalysis *analysis, const TfMeansStats *stats,
-                               double n_eff_per_n, double df_offset,
                                TfEvidenceCurve *curve, char **why_not);
 gboolean tf_means_null_distribution (const TfAnalysis *analysis, const TfMeansStats *stats,
                                      TfNullDistribution *dist, char **why_not);

@@ -52,66 +52,20 @@ tf_one_mean_stats (const TfAnalysis *a, TfMeansStats *s)
   s->df_delta = s->df;
   s->n_eff = a->n;
   s->n_total = a->n;
-}
-
-static void
-one_mean_compute (const TfAnalysis *a, TfResults *results)
-{
-  TfMeansStats s;
-  tf_one_mean_stats (a, &s);
-  tf_means_compute (a, &s, results);
-}
-
-static void
-one_mean_densities (const TfAnalysis *a, TfDensityCurves *curves)
-{
-  TfMeansStats s;
-  tf_one_mean_stats (a, &s);
-  tf_means_densities (a, &s, curves);
-}
-
-static gboolean
-one_mean_sensitivity (const TfAnalysis *a, TfEvidenceCurve *curve, char **why_not)
-{
-  TfMeansStats s;
-  tf_one_mean_stats (a, &s);
-  return tf_means_sensitivity (a, &s, curve, why_not);
-}
-
-static gboolean
-one_mean_sample_size (const TfAnalysis *a, TfEvidenceCurve *curve, char **why_not)
-{
-  TfMeansStats s;
-  tf_one_mean_stats (a, &s);
-  return tf_means_sample_size (a, &s, 1.0, 1.0, curve, why_not);
-}
-
-static gboolean
-one_mean_null_distribution (const TfAnalysis *a, TfNullDistribution *dist, char **why_not)
-{
-  TfMeansStats s;
-  tf_one_mean_stats (a, &s);
-  return tf_means_null_distribution (a, &s, dist, why_not);
+  s->n_eff_per_n = 1.0;
+  s->df_offset = 1.0;
 }
 
 static const TfDesignClass one_mean = {
   .design = TF_DESIGN_ONE_MEAN,
   .validate = one_mean_validate,
-  .compute = one_mean_compute,
-  .densities = one_mean_densities,
-  .sensitivity = one_mean_sensitivity,
-  .sample_size = one_mean_sample_size,
-  .null_distribution = one_mean_null_distribution,
+  TF_MEANS_CLASS_CALLBACKS
 };
 
 static const TfDesignClass paired_means = {
   .design = TF_DESIGN_PAIRED_MEANS,
   .validate = one_mean_validate,
-  .compute = one_mean_compute,
-  .densities = one_mean_densities,
-  .sensitivity = one_mean_sensitivity,
-  .sample_size = one_mean_sample_size,
-  .null_distribution = one_mean_null_distribution,
+  TF_MEANS_CLASS_CALLBACKS
 };
 
 const TfDesignClass *

@@ -64,60 +64,17 @@ tf_two_means_stats (const TfAnalysis *a, TfMeansStats *s)
   s->df_delta = df_s;
   s->n_eff = na * nb / (na + nb);
   s->n_total = na + nb;
+  /* both groups grow in the observed proportion: n_eff = n share (1 − share) */
+  s->n_eff_per_n = (na / (na + nb)) * (nb / (na + nb));
+  s->df_offset = 2.0;
   s->p_student = tf_means_p_value (t_s, df_s, a->direction);
   s->p_welch = a->sd_a > 0.0 && a->sd_b > 0.0 ? tf_means_p_value (t_w, df_w, a->direction) : NAN;
-}
-
-static void
-two_means_compute (const TfAnalysis *a, TfResults *results)
-{
-  TfMeansStats s;
-  tf_two_means_stats (a, &s);
-  tf_means_compute (a, &s, results);
-}
-
-static void
-two_means_densities (const TfAnalysis *a, TfDensityCurves *curves)
-{
-  TfMeansStats s;
-  tf_two_means_stats (a, &s);
-  tf_means_densities (a, &s, curves);
-}
-
-static gboolean
-two_means_sensitivity (const TfAnalysis *a, TfEvidenceCurve *curve, char **why_not)
-{
-  TfMeansStats s;
-  tf_two_means_stats (a, &s);
-  return tf_means_sensitivity (a, &s, curve, why_not);
-}
-
-static gboolean
-two_means_sample_size (const TfAnalysis *a, TfEvidenceCurve *curve, char **why_not)
-{
-  TfMeansStats s;
-  double share = a->n_a / (a->n_a + a->n_b);
-  tf_two_means_stats (a, &s);
-  /* both groups grow in the observed proportion: n_eff = n share (1 − share) */
-  return tf_means_sample_size (a, &s, share * (1.0 - share), 2.0, curve, why_not);
-}
-
-static gboolean
-two_means_null_distribution (const TfAnalysis *a, TfNullDistribution *dist, char **why_not)
-{
-  TfMeansStats s;
-  tf_two_means_stats (a, &s);
-  return tf_means_null_distribution (a, &s, dist, why_not);
 }
 
 static const TfDesignClass two_means = {
   .design = TF_DESIGN_TWO_MEANS,
   .validate = two_means_validate,
-  .compute = two_means_compute,
-  .densities = two_means_densities,
-  .sensitivity = two_means_sensitivity,
-  .sample_size = two_means_sample_size,
-  .null_distribution = two_means_null_distribution,
+  TF_MEANS_CLASS_CALLBACKS
 };
 
 const TfDesignClass *
