@@ -266,6 +266,15 @@ tf_fig_spike (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
   cairo_restore (cr);
 }
 
+/* Pango markup for 10 to the nearest whole power of decades: "10<sup>563</sup>". */
+char *
+tf_fig_power_of_ten (double decades)
+{
+  long k = lround (decades);
+
+  return k < 0 ? g_strdup_printf ("10<sup>\u2212%ld</sup>", -k) : g_strdup_printf ("10<sup>%ld</sup>", k);
+}
+
 char *
 tf_fig_number (double value, int digits)
 {

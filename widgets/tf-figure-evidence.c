@@ -9,6 +9,40 @@
 
 #define PANEL_GAP_PT 10.0
 #define TOP_SHARE 0.58
+#define TF_BF_CAP_DECADES 6.0
+
+/* A curve that leaves its panel ends at the panel's edge, where the segment crosses it,
+ * and is not drawn outside (a curve clamped along the edge would look flat there). */
+static void
+cut_at_panel (TfFigPoints *p, const TfPlotArea *area)
+{
+  double top = area->y, bottom = area->y + area->height;
+  g_autofree double *y = g_memdup2 (p->y, p->n * sizeof (double));
+  g_autofree double *x = g_memdup2 (p->x, p->n * sizeof (double));
+
+  for (guint i = 0; i < p->n; i++)
+    {
+      gboolean inside = y[i] >= top && y[i] <= bottom;
+
+      if (inside || !isfinite (y[i]))
+        continue;
+      p->y[i] = NAN;
+      /* a neighbour inside: this point moves to where the segment meets the edge */
+      for (int side = -1; side <= 1; side += 2)
+        {
+          int j = (int) i + side;
+
+          if (j < 0 || j >= (int) p->n || !(y[j] >= top && y[j] <= bottom))
+            continue;
+          double edge = y[i] < top ? top : bottom;
+          double f = (edge - y[j]) / (y[i] - y[j]);
+
+          p->x[i] = x[j] + f * (x[i] - x[j]);
+          p->y[i] = edge;
+          break;
+        }
+    }
+}
 
 typedef struct {
   double log10_bf;              /* grade boundary, log10 of the Bayes factor either way */
@@ -179,6 +213,7 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
   const char *p_label = _("P(H₀ | data)");
   double pad, gap, top, bottom, left, right, avail, top_h, low_h, label_h;
   double x_lo = INFINITY, x_hi = -INFINITY, y_lo = 0, y_hi = 0, right_w = 0;
+  double beyond_hi = NAN, beyond_lo = NAN;   /* log10 BF01 the curve reaches off the axis */
   double chosen_right = -INFINITY;  /* where the chosen setting's label ends */
   gboolean chosen_ok;
   TfTicks x_ticks, bf_ticks, p_ticks;
@@ -229,6 +264,20 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
       cairo_restore (cr);
       return FALSE;
     }
+  /* Past 10^±6, or 3 decades past the chosen value, a Bayes factor tells the reader
+   * nothing the grades do not, and the range would flatten the curve where it matters:
+   * the axis stops there, the curve leaves the panel and a note says how far it goes. */
+  {
+    double chosen_dec = chosen_ok && isfinite (curve->chosen_log_bf01)
+                        ? curve->chosen_log_bf01 / G_LN10 : 0.0;
+    double cap_hi = MAX (TF_BF_CAP_DECADES, chosen_dec + 3.0);
+    double cap_lo = MIN (-TF_BF_CAP_DECADES, chosen_dec - 3.0);
+
+    if (y_hi > cap_hi)
+      beyond_hi = y_hi, y_hi = cap_hi;
+    if (y_lo < cap_lo)
+      beyond_lo = y_lo, y_lo = cap_lo;
+  }
   y_lo -= 0.15, y_hi += 0.15;
 
   x_label = curve->x_markup ? curve->x_markup
@@ -331,7 +380,8 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
     }
 
   /* The curves, clipped to their panels. */
-  tf_fig_points_map (&top_area, xs, bf, curve->n, TRUE, &bf_line);
+  tf_fig_points_map (&top_area, xs, bf, curve->n, FALSE, &bf_line);
+  cut_at_panel (&bf_line, &top_area);
   tf_fig_points_map (&low_area, xs, curve->posterior_null, curve->n, TRUE, &p_line);
   for (guint i = 0; i < curve->n; i++)
     if (!isfinite (xs[i]))
@@ -368,6 +418,41 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
                         tf_plot_area_map_y (&low_area, curve->chosen_posterior_null),
                         tf_plot_area_map_y (&low_area, 0.5), p_text);
         }
+    }
+
+  /* How far the curve goes off the axis. */
+  if (isfinite (beyond_hi) || isfinite (beyond_lo))
+    {
+      g_autofree char *hi_text = isfinite (beyond_hi) ? tf_fig_power_of_ten (beyond_hi) : NULL;
+      g_autofree char *lo_text = isfinite (beyond_lo) ? tf_fig_power_of_ten (beyond_lo) : NULL;
+      g_autofree char *off = hi_text && lo_text
+        /* TRANSLATORS: the BF curve leaves the axis at both ends; %s are powers of ten */
+        ? g_strdup_printf (_("off the axis: BF₀₁ from %s to %s"), lo_text, hi_text)
+        : hi_text
+        /* TRANSLATORS: the BF curve leaves the top of its axis; %s is a power of ten */
+        ? g_strdup_printf (_("off the axis: BF₀₁ up to %s"), hi_text)
+        /* TRANSLATORS: the BF curve leaves the bottom of its axis; %s is a power of ten */
+        : g_strdup_printf (_("off the axis: BF₀₁ down to %s"), lo_text);
+      double w = tf_fig_text_width (cr, &theme, theme.text_size * 0.9, off);
+      double h = tf_fig_text_height (cr, &theme, theme.text_size * 0.9, off);
+      double cx = chosen_ok ? tf_plot_area_map_x (&top_area, coord (curve->chosen_x, curve->x_log))
+                            : -1;
+      double up_x[2] = { cx, cx }, up_y[2] = { top_area.y, top_area.y + top_area.height };
+      TfPolyline lines[] = { { bf_line.x, bf_line.y, bf_line.n }, { up_x, up_y, 2 } };
+      double ox = top_area.x + gap, oy = top_area.y + gap;
+
+      gboolean placed = tf_legend_place (&top_area, w, h, gap, lines, 2, &ox, &oy);
+
+      if (!placed && width - pad - w > chosen_right + 2 * gap)
+        {
+          /* no room in the panel: at the right of the row above it */
+          ox = width - pad - w;
+          oy = top_area.y - h - tf_figure_theme_pt (&theme, 1.5);
+          placed = TRUE;
+        }
+      /* a figure too small for the note shows the curve leaving the axis only */
+      if (placed)
+        tf_fig_text_halo (cr, &theme, &theme.muted, theme.text_size * 0.9, off, ox, oy);
     }
 
   /* The held p-value: a note where it hides no curve. */

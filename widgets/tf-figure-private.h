@@ -64,6 +64,8 @@ void tf_fig_spike (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *ar
 /* A number for a figure: digits significant figures, a true minus sign, and
  * a × 10<sup>k</sup> exponent outside 10^-4 .. 10^6. Free with g_free. */
 char *tf_fig_number (double value, int digits);
+/* Pango markup for 10 to the nearest whole power: "10<sup>563</sup>", "10<sup>−8</sup>". */
+char *tf_fig_power_of_ten (double decades);
 
 /* One plot area with a bottom and a left axis: margins first, then ticks that fit. The
  * x axis is tight to [x_lo, x_hi] (log10 when x_log), the y axis loose from y_lo. */
