@@ -238,6 +238,83 @@ test_window_export_figure (void)
   g_rmdir (dir);
 }
 
+/* Export Report…: the demo's report in each format, as the save dialog's Export writes
+ * it; a name without an ending gets ".pdf"; an invalid analysis cannot be exported; a
+ * folder that does not exist gets a dialog and nothing is written. */
+static void
+test_window_export_report (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  g_autofree char *dir = g_dir_make_tmp ("twofold-gui-XXXXXX", NULL);
+  static const char *const names[] = { "lot.html", "lot.md", "plain" };
+
+  tf_window_open_demo (window);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+  g_assert_true (tf_window_get_export_report_enabled (window));
+
+  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
+    {
+      g_autofree char *path = g_build_filename (dir, names[i], NULL);
+      g_autofree char *written = g_str_has_suffix (names[i], ".html") || g_str_has_suffix (names[i], ".md")
+                                 ? g_strdup (path) : g_strconcat (path, ".pdf", NULL);
+      g_autoptr (GFile) file = g_file_new_for_path (path);
+      g_autofree char *text = NULL;
+      gsize length = 0;
+
+      g_assert_true (tf_window_export_report (window, file));
+      g_assert_true (g_file_get_contents (written, &text, &length, NULL));
+      if (g_str_has_suffix (written, ".pdf"))
+        g_assert_true (g_str_has_prefix (text, "%PDF-"));
+      else
+        {
+          /* the caution, and the demo's own numbers: P(null | data) as the window shows it */
+          const char *shown = tf_result_list_get_value_text (tf_window_get_result_list (window),
+                                                             "posterior_null");
+
+          g_assert_nonnull (strstr (text, tf_caution_text ()));
+          g_assert_nonnull (shown);
+          g_assert_nonnull (strstr (text, shown));
+          g_assert_nonnull (strstr (text, "Successes=9700"));
+        }
+    }
+
+  /* an analysis that cannot be computed: the action is off */
+  type_into (window, "Data", "Successes", "13000");
+  g_assert_false (tf_window_get_export_report_enabled (window));
+  type_into (window, "Data", "Successes", "9700");
+  g_assert_true (tf_window_get_export_report_enabled (window));
+
+  {
+    g_autofree char *bad = g_build_filename (dir, "no-such-folder", "report.pdf", NULL);
+    g_autoptr (GFile) bad_file = g_file_new_for_path (bad);
+    g_autofree char *name = g_filename_display_name (bad);
+    g_autofree char *heading = g_strdup_printf ("Could Not Export “%s”", name);
+    AdwMessageDialog *dialog;
+
+    g_assert_false (tf_window_export_report (window, bad_file));
+    iterate ();
+    dialog = find_dialog (heading);
+    g_assert_nonnull (dialog);
+    gtk_window_destroy (GTK_WINDOW (dialog));
+    g_assert_false (g_file_test (bad, G_FILE_TEST_EXISTS));
+  }
+
+  gtk_window_destroy (GTK_WINDOW (window));
+  iterate ();
+  {
+    g_autoptr (GDir) d = g_dir_open (dir, 0, NULL);
+    const char *entry;
+
+    while ((entry = g_dir_read_name (d)))
+      {
+        g_autofree char *path = g_build_filename (dir, entry, NULL);
+        g_unlink (path);
+      }
+  }
+  g_rmdir (dir);
+}
+
 /* Figure */
 
 static void
@@ -421,6 +498,7 @@ add_figure_tests (void)
 {
   g_test_add_func ("/gui/window/figure-kinds", test_window_figure_kinds);
   g_test_add_func ("/gui/window/export-figure", test_window_export_figure);
+  g_test_add_func ("/gui/window/export-report", test_window_export_report);
   g_test_add_func ("/gui/figure/pixels-light", test_figure_pixels_light);
   g_test_add_func ("/gui/figure/pixels-dark", test_figure_pixels_dark);
   g_test_add_func ("/gui/figure/pdf", test_figure_pdf);
