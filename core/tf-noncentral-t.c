@@ -153,7 +153,13 @@ log_hermite_integral (double df, double a)
   p.y0 = a >= 0.0 ? 0.5 * (a + sqrt (a * a + 4.0 * c)) : 2.0 * c / (sqrt (a * a + 4.0 * c) - a);
   double sigma = 1.0 / sqrt (p.y0 * (2.0 * p.y0 - a));
   double d = p.y0 - a;
-  double lo = -(14.0 * sigma + 45.0 / c), hi = 14.0 * sigma;
+  /* Left of the mode the log integrand rises with slope at least (1 − e^s)(ν + 1), so the
+   * tail beyond s = −14σ is below e^(ℓ(−14σ)) / ((1 − e^(−14σ))(ν + 1)); where that is
+   * negligible next to the bulk (≈ 2.5 σ), the range stops there, else 45/(ν + 1) on. */
+  double hi = 14.0 * sigma, lo = -hi;
+  double tail = hermite_log (&p, lo) - log (-expm1 (lo) * c) - log (2.5 * sigma);
+  if (!(tail < -40.0))
+    lo -= 45.0 / c;
   gsl_integration_workspace *w = gsl_integration_workspace_alloc (200);
   gsl_function f = { hermite_integrand, &p };
   double res = 0.0, err = 0.0;
