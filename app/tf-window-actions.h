@@ -72,6 +72,23 @@ void tf_window_actions_init (TfWindow *self);
 void tf_window_actions_dispose (TfWindow *self);
 /* Asks whether to save the modified analysis, then does then unless cancelled. */
 void tf_window_ask_save_changes (TfWindow *self, TfPendingAction then);
+/* Shows the window's file chooser (FALSE when one is already shown): in the analysis's
+ * folder or the last one used, with filter and, when name is set, that suggested name. */
+gboolean tf_window_chooser_show (TfWindow *self, GtkFileChooserAction action,
+                                 const char *title, const char *accept,
+                                 GtkFileFilter *filter, const char *name, GCallback response);
+/* Writes the analysis shown to path; FALSE with error set when it cannot. */
+typedef gboolean (*TfWindowWriter) (TfWindow *self, const char *path, gconstpointer data,
+                                    GError **error);
+/* Checks that file is on this computer and the analysis computes, then writes it with
+ * write (data passed on), then says so in a toast; on failure, a dialog names the file
+ * and says why, and the result is FALSE. */
+gboolean tf_window_export_to (TfWindow *self, GFile *file, TfWindowWriter write,
+                              gconstpointer data);
+/* The analysis's file name without its ending (or the demo's, or "analysis"), then tail. */
+char *tf_window_suggested_name (TfWindow *self, const char *tail);
+/* file, or when its name has no ending at all, that name with suffix (".png") added. */
+GFile *tf_window_file_with_suffix (GFile *file, const char *suffix);
 /* Enables Export figure… when the plot has a figure to export. */
 void tf_window_actions_update (TfWindow *self);
 

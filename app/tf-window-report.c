@@ -21,72 +21,21 @@ report_filter_new (void)
   return filter;
 }
 
-/* "seed-germination-report.pdf": the analysis's file name, then "-report". */
-static char *
-suggested_report_name (TfWindow *self)
+static gboolean
+write_report (TfWindow *self, const char *path, gconstpointer data, GError **error)
 {
-  g_autofree char *base = self->file ? g_file_get_basename (self->file)
-                          : g_strdup (self->is_demo ? "seed-germination" : _("analysis"));
-  char *dot = strrchr (base, '.');
-
-  if (dot && dot != base)
-    *dot = '\0';
-  /* TRANSLATORS: the suggested file name of a report; %s is the analysis's file name */
-  return g_strdup_printf (_("%s-report.pdf"), base);
+  return tf_report_export (self->analysis, path, NULL, error);
 }
 
 gboolean
 tf_window_export_report (TfWindow *self, GFile *file)
 {
-  g_autoptr (GError) error = NULL;
   g_autoptr (GFile) target = NULL;
-  g_autofree char *path = NULL;
-  g_autofree char *name = NULL;
-  g_autofree char *heading = NULL;
-  g_autofree char *basename = NULL;
 
   g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
   g_return_val_if_fail (G_IS_FILE (file), FALSE);
-
-  basename = g_file_get_basename (file);
-  if (basename && strchr (basename, '.') == NULL)
-    {
-      g_autofree char *with_suffix = g_strconcat (basename, ".pdf", NULL);
-      g_autoptr (GFile) parent = g_file_get_parent (file);
-
-      target = g_file_get_child (parent, with_suffix);
-    }
-  else
-    target = g_object_ref (file);
-
-  path = g_file_get_path (target);
-  name = tf_window_file_display_name (target);
-  /* TRANSLATORS: heading of the dialog when a report could not be written; %s a file */
-  heading = g_strdup_printf (_("Could Not Export “%s”"), name);
-  if (path == NULL)
-    {
-      tf_window_show_error (self, heading, _("Only files on this computer can be written."));
-      return FALSE;
-    }
-  if (self->results == NULL)
-    {
-      tf_window_show_error (self, heading,
-                            _("The analysis has a field that needs fixing, marked in the form. Fix it, then export again."));
-      return FALSE;
-    }
-  if (!tf_report_export (self->analysis, path, NULL, &error))
-    {
-      tf_window_show_error (self, heading, error->message);
-      return FALSE;
-    }
-  tf_window_remember_folder (self, target);
-  {
-    g_autofree char *shown = g_file_get_basename (target);
-    g_autofree char *message = g_strdup_printf (_("Exported “%s”"), shown);
-
-    adw_toast_overlay_add_toast (self->toast_overlay, adw_toast_new (message));
-  }
-  return TRUE;
+  target = tf_window_file_with_suffix (file, ".pdf");
+  return tf_window_export_to (self, target, write_report, NULL);
 }
 
 static void
@@ -106,25 +55,11 @@ export_report_action (GtkWidget *widget, const char *action_name, GVariant *para
 {
   TfWindow *self = TF_WINDOW (widget);
   g_autoptr (GtkFileFilter) filter = report_filter_new ();
-  g_autofree char *name = suggested_report_name (self);
+  /* TRANSLATORS: the end of a report's suggested file name, after the analysis's name */
+  g_autofree char *name = tf_window_suggested_name (self, _("-report.pdf"));
 
-  if (self->chooser)
-    return;
-  self->chooser = gtk_file_chooser_native_new (_("Export Report"), GTK_WINDOW (self),
-                                               GTK_FILE_CHOOSER_ACTION_SAVE,
-                                               _("_Export"), _("_Cancel"));
-  gtk_native_dialog_set_modal (GTK_NATIVE_DIALOG (self->chooser), TRUE);
-  gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (self->chooser), filter);
-  if (self->file)
-    {
-      g_autoptr (GFile) parent = g_file_get_parent (self->file);
-
-      if (parent)
-        gtk_file_chooser_set_current_folder (GTK_FILE_CHOOSER (self->chooser), parent, NULL);
-    }
-  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (self->chooser), name);
-  g_signal_connect (self->chooser, "response", G_CALLBACK (on_report_chooser_response), self);
-  gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
+  tf_window_chooser_show (self, GTK_FILE_CHOOSER_ACTION_SAVE, _("Export Report"), _("_Export"),
+                          filter, name, G_CALLBACK (on_report_chooser_response));
 }
 
 void
