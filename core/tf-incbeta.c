@@ -264,10 +264,17 @@ basym_coefficients (TfIncbetaShape *sh, int o, int n, double h, double r0, doubl
           bc[0] = r * ac[0];
           for (int q = 2; q <= i; q++)
             {
-              double bsum = 0.0;
-              for (int j = 1; j <= q - 1; j++)
-                bsum += (j * r - (q - j)) * ac[j - 1] * bc[q - j - 1];
-              bc[q - 1] = r * ac[q - 1] + bsum / q;
+              /* two partial sums, so that the additions need not wait on each other */
+              double s0 = 0.0, s1 = 0.0;
+              int j = 1;
+              for (; j + 1 <= q - 1; j += 2)
+                {
+                  s0 += (j * (r + 1.0) - q) * ac[j - 1] * bc[q - j - 1];
+                  s1 += ((j + 1) * (r + 1.0) - q) * ac[j] * bc[q - j - 2];
+                }
+              if (j <= q - 1)
+                s0 += (j * (r + 1.0) - q) * ac[j - 1] * bc[q - j - 1];
+              bc[q - 1] = r * ac[q - 1] + (s0 + s1) / q;
             }
           cc[i - 1] = bc[i - 1] / (i + 1.0);
           double dsum = 0.0;
@@ -347,8 +354,10 @@ log_lower_tail (TfIncbetaShape *sh, int o, double x, double y, double lambda,
 
   if (b * x <= 0.7 && x <= 0.8)
     return log_bpser (a, b, x, y, tf_incbeta_shape_log_beta (sh));
+  /* Temme's expansion from both shapes above 1000, not 100 as DiDonato & Morris: below
+   * that the continued fraction is the cheaper (it is as accurate) */
   double mn = MIN (a, b);
-  if (mn > 100.0 && lambda <= 0.03 * mn)
+  if (mn > 1000.0 && lambda <= 0.03 * mn)
     {
       /* the deviance is symmetric in the orientation */
       *dev = o ? deviance (sh, y, x, -lambda) : deviance (sh, x, y, lambda);

@@ -56,10 +56,12 @@ tf_proportion_wilson (double k, double n, double level, gboolean cc, double *lo,
 void
 tf_proportion_jeffreys (double k, double n, double level, double *lo, double *hi)
 {
-  double alpha2 = 0.5 * (1.0 - level);
+  double lp = log (0.5 * (1.0 - level));
+  TfIncbetaShape sh;
 
-  *lo = k > 0.0 ? tf_incbeta_inverse (alpha2, k + 0.5, n - k + 0.5, TRUE) : 0.0;
-  *hi = k < n ? tf_incbeta_inverse (alpha2, k + 0.5, n - k + 0.5, FALSE) : 1.0;
+  tf_incbeta_shape_init (&sh, k + 0.5, n - k + 0.5);
+  *lo = k > 0.0 ? tf_incbeta_shape_inverse_log (&sh, lp, TRUE) : 0.0;
+  *hi = k < n ? tf_incbeta_shape_inverse_log (&sh, lp, FALSE) : 1.0;
 }
 
 /* Agresti & Coull 1998: ñ = n + z², p̃ = (k + z²/2)/ñ, p̃ ± z √(p̃(1 − p̃)/ñ). The lower
