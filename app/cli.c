@@ -75,6 +75,49 @@ print_text (const char *filename, const TfAnalysis *analysis, const TfResults *r
   fputs (out->str, stdout);
 }
 
+/* What every command does first: its options parsed and exactly one file named.
+ * FALSE with *status the exit code when not. */
+static gboolean
+parse_command (GOptionContext *context, int *argc, char ***argv, const char *command,
+               int *status)
+{
+  g_autoptr (GError) error = NULL;
+
+  if (!g_option_context_parse (context, argc, argv, &error))
+    {
+      *status = usage_error (error->message);
+      return FALSE;
+    }
+  if (*argc != 3)
+    {
+      g_autofree char *message = *argc < 3
+        /* TRANSLATORS: %s is a command: analyse, figure, report */
+        ? g_strdup_printf (_("%s needs the analysis file to read"), command)
+        /* TRANSLATORS: %s is a command: analyse, figure, report */
+        : g_strdup_printf (_("%s reads one file"), command);
+
+      *status = usage_error (message);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+/* The analysis file, or NULL with its problems printed (each naming the file, group and
+ * key) and *status the exit code. */
+static TfAnalysis *
+load_file (const char *filename, int *status)
+{
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  TfAnalysis *analysis = tf_analysis_load (filename, problems);
+
+  if (analysis == NULL)
+    {
+      print_problems (filename, problems);
+      *status = EXIT_USAGE;
+    }
+  return analysis;
+}
+
 static int
 command_analyse (int argc, char **argv)
 {
@@ -84,25 +127,16 @@ command_analyse (int argc, char **argv)
     { NULL }
   };
   g_autoptr (GOptionContext) context = g_option_context_new (_("analyse FILE"));
-  g_autoptr (GError) error = NULL;
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  int status = EXIT_DONE;
   g_autoptr (TfAnalysis) analysis = NULL;
   g_autoptr (TfResults) results = NULL;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
   g_option_context_set_summary (context, _("Computes every number of an analysis file."));
-  if (!g_option_context_parse (context, &argc, &argv, &error))
-    return usage_error (error->message);
-  if (argc != 3)
-    return usage_error (argc < 3 ? _("analyse needs the analysis file to read")
-                                 : _("analyse reads one file"));
-
-  analysis = tf_analysis_load (argv[2], problems);
-  if (analysis == NULL)
-    {
-      print_problems (argv[2], problems);
-      return EXIT_USAGE;
-    }
+  if (!parse_command (context, &argc, &argv, "analyse", &status)
+      || !(analysis = load_file (argv[2], &status)))
+    return status;
   results = tf_analysis_compute (analysis, problems);
   if (results == NULL)
     {
@@ -144,16 +178,13 @@ command_figure (int argc, char **argv)
   };
   g_autoptr (GOptionContext) context = g_option_context_new (_("figure FILE"));
   g_autoptr (GError) error = NULL;
-  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  int status = EXIT_DONE;
   g_autoptr (TfAnalysis) analysis = NULL;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
   g_option_context_set_summary (context, _("Draws a figure of an analysis to PNG, SVG or PDF."));
-  if (!g_option_context_parse (context, &argc, &argv, &error))
-    return usage_error (error->message);
-  if (argc != 3)
-    return usage_error (argc < 3 ? _("figure needs the analysis file to read")
-                                 : _("figure reads one file"));
+  if (!parse_command (context, &argc, &argv, "figure", &status))
+    return status;
   if (kind == NULL)
     return usage_error (_("figure needs --kind"));
   if (output == NULL)
@@ -162,13 +193,8 @@ command_figure (int argc, char **argv)
     return usage_error (_("--style must be light, dark or print"));
   if (grades && !tf_evidence_scale_from_string (grades, &options.evidence_scale))
     return usage_error (_("--grades must be kass-raftery, jeffreys or none"));
-
-  analysis = tf_analysis_load (argv[2], problems);
-  if (analysis == NULL)
-    {
-      print_problems (argv[2], problems);
-      return EXIT_USAGE;
-    }
+  if (!(analysis = load_file (argv[2], &status)))
+    return status;
   if (!tf_figure_export_full (analysis, kind, output, width_mm, height_mm, dpi, &options, &error))
     {
       gboolean usage = error->domain == TF_FIGURE_ERROR
@@ -195,7 +221,7 @@ command_report (int argc, char **argv)
   };
   g_autoptr (GOptionContext) context = g_option_context_new (_("report FILE"));
   g_autoptr (GError) error = NULL;
-  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  int status = EXIT_DONE;
   g_autoptr (TfAnalysis) analysis = NULL;
 
   g_option_context_add_main_entries (context, entries, GETTEXT_PACKAGE);
@@ -207,20 +233,12 @@ command_report (int argc, char **argv)
                                   "OUT.md: Markdown text, and each figure that applies as OUT-KIND.svg\n"
                                   "beside it (KIND: densities, sensitivity, sample-size,\n"
                                   "null-distribution, model-probabilities), linked by relative names."));
-  if (!g_option_context_parse (context, &argc, &argv, &error))
-    return usage_error (error->message);
-  if (argc != 3)
-    return usage_error (argc < 3 ? _("report needs the analysis file to read")
-                                 : _("report reads one file"));
+  if (!parse_command (context, &argc, &argv, "report", &status))
+    return status;
   if (output == NULL)
     return usage_error (_("report needs --output"));
-
-  analysis = tf_analysis_load (argv[2], problems);
-  if (analysis == NULL)
-    {
-      print_problems (argv[2], problems);
-      return EXIT_USAGE;
-    }
+  if (!(analysis = load_file (argv[2], &status)))
+    return status;
   if (!tf_report_export (analysis, output, NULL, &error))
     {
       gboolean usage = error->domain == TF_REPORT_ERROR
