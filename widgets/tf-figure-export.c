@@ -37,8 +37,8 @@ tf_figure_format_from_filename (const char *filename, TfFigureFormat *format)
   return TRUE;
 }
 
-static cairo_status_t
-append_bytes (void *closure, const unsigned char *data, unsigned int length)
+cairo_status_t
+tf_figure_append_bytes (void *closure, const unsigned char *data, unsigned int length)
 {
   g_byte_array_append (closure, data, length);
   return CAIRO_STATUS_SUCCESS;
@@ -189,7 +189,7 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
       /* The page is given in points (width="240.944882pt" for 85 mm): exact, and the
        * figure is drawn in the same units as PDF. (A page in mm under a cairo_scale()
        * shrinks Pango's subscripts.) */
-      surface = cairo_svg_surface_create_for_stream (append_bytes, bytes, w, h);
+      surface = cairo_svg_surface_create_for_stream (tf_figure_append_bytes, bytes, w, h);
       cairo_svg_surface_set_document_unit (surface, CAIRO_SVG_UNIT_PT);
       break;
     case TF_FIGURE_FORMAT_PDF:
@@ -197,7 +197,7 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
       w = width_mm * POINTS_PER_MM;
       h = height_mm * POINTS_PER_MM;
       scale = 1.0;
-      surface = cairo_pdf_surface_create_for_stream (append_bytes, bytes, w, h);
+      surface = cairo_pdf_surface_create_for_stream (tf_figure_append_bytes, bytes, w, h);
       cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR, "Twofold " TF_VERSION);
       break;
     }
@@ -213,7 +213,7 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
   cairo_destroy (cr);
   if (format == TF_FIGURE_FORMAT_PNG && drawn)
     {
-      status = cairo_surface_write_to_png_stream (surface, append_bytes, bytes);
+      status = cairo_surface_write_to_png_stream (surface, tf_figure_append_bytes, bytes);
       if (status == CAIRO_STATUS_SUCCESS)
         png_set_resolution (bytes, dpi);
     }

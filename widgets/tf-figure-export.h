@@ -34,6 +34,10 @@ typedef enum {
 
 /* From the file name's ending: .png, .svg, .pdf (any case). */
 gboolean tf_figure_format_from_filename (const char *filename, TfFigureFormat *format);
+/* A cairo_write_func_t that appends to the GByteArray given as closure: surfaces drawn in
+ * memory, then saved atomically. */
+cairo_status_t tf_figure_append_bytes (void *closure, const unsigned char *data,
+                                       unsigned int length);
 
 /* The figure kinds of DESIGN.md, and whether this version draws one. */
 gboolean tf_figure_kind_is_known (const char *kind);

@@ -3,6 +3,7 @@
  */
 #include "tf-report-render.h"
 #include "tf-results.h"
+#include "tf-figure-export.h"
 
 #include <cairo-pdf.h>
 #include <cairo-svg.h>
@@ -31,13 +32,6 @@ tf_report_format_from_filename (const char *filename, TfReportFormat *format)
   else
     return FALSE;
   return TRUE;
-}
-
-static cairo_status_t
-append_bytes (void *closure, const unsigned char *data, unsigned int length)
-{
-  g_byte_array_append (closure, data, length);
-  return CAIRO_STATUS_SUCCESS;
 }
 
 /* Every figure kind for this analysis: drawn (figures[k]), or left out with its reason. */
@@ -76,7 +70,7 @@ figure_svg (const TfFigure *figure, const TfFigureOptions *options)
 {
   GByteArray *bytes = g_byte_array_new ();
   double w = FIGURE_WIDTH_MM * POINTS_PER_MM, h = FIGURE_HEIGHT_MM * POINTS_PER_MM;
-  cairo_surface_t *surface = cairo_svg_surface_create_for_stream (append_bytes, bytes, w, h);
+  cairo_surface_t *surface = cairo_svg_surface_create_for_stream (tf_figure_append_bytes, bytes, w, h);
   cairo_status_t status;
   cairo_t *cr;
 
@@ -216,7 +210,7 @@ export_pdf (const TfReport *report, TfReportFigures *f, const char *filename,
   cairo_surface_t *surface;
   cairo_status_t status;
 
-  surface = cairo_pdf_surface_create_for_stream (append_bytes, bytes, TF_REPORT_PAGE_WIDTH,
+  surface = cairo_pdf_surface_create_for_stream (tf_figure_append_bytes, bytes, TF_REPORT_PAGE_WIDTH,
                                                  TF_REPORT_PAGE_HEIGHT);
   cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR, "Twofold " TF_VERSION);
   cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_TITLE, report->title);
