@@ -33,6 +33,8 @@
 #define TF_LN_SQRT_2PI 0.918938533204672741780329736406
 #define TF_GH_NODES 40
 #define TF_GH_MIN_SD 30.0
+/* Beyond this 1/σ² underflows beside the curvature of a flat likelihood. */
+#define TF_LOGOR_MAX_SD 1e150
 
 typedef struct {
   TfHyper h;
@@ -242,7 +244,7 @@ integrand (double s, void *data)
 }
 
 /* ∫ over s of e^{G(mode + s·scale) − G(mode)} on one side (dir = ±1): pieces
- * [0, b], [b, 2b], [2b, 4b], ... until the integrand at a piece's end S is below e^{−36}.
+ * [0, b], [b, 2b], ... doubling (16-fold while the integrand stays flat), until the integrand at a piece's end S is below e^{−36}.
  * G is concave, so beyond S the integrand falls at least as fast as along the chord
  * from the mode, and the tail left out is at most e^{−36} of the integral up to S. */
 static gboolean
@@ -251,10 +253,10 @@ integrate_side (LogOr *lo, gsl_integration_workspace *ws, double dir, double *su
   gsl_function f = { integrand, lo };
   /* the first piece at most 1 wide in ψ: where the prior is far wider than the
    * likelihood's fall (a zero cell), the fall stays inside a piece of its own size */
-  double a = 0.0, b = MIN (1.0, 1.0 / lo->scale);
+  double a = 0.0, b = MIN (1.0, 1.0 / lo->scale), last = 0.0;
 
   *sum = 0.0;
-  for (int piece = 0; piece < 160; piece++)
+  for (int piece = 0; piece < 400; piece++)
     {
       double r, e;
       /* each piece to 1e-11 of itself or 1e-12 of the pieces before it */
@@ -267,8 +269,11 @@ integrate_side (LogOr *lo, gsl_integration_workspace *ws, double dir, double *su
       double end = log_integrand (lo, lo->mode + dir * b * lo->scale, NULL, NULL) - lo->g_mode;
       if (!(end > -36.0))
         return isfinite (*sum);
+      /* over a flat stretch (a likelihood that tends to a constant) grow faster */
+      double grow = end > last - 0.1 ? 16.0 : 2.0;
       a = b;
-      b *= 2.0;
+      b *= grow;
+      last = end;
     }
   return FALSE;
 }
@@ -285,9 +290,22 @@ tf_two_proportions_log_or_bf01 (double ka, double na, double kb, double nb, doub
       *why = _("the normal prior on the log odds ratio needs a PriorScale above 0");
       return NAN;
     }
+  if (sd > TF_LOGOR_MAX_SD)
+    {
+      *why = _("the normal prior on the log odds ratio needs a PriorScale of at most 10^150");
+      return NAN;
+    }
   tf_hyper_init (&lo.h, na, nb, ka + kb);
   if (lo.h.lo == lo.h.hi)
     return 0.0;               /* a margin is 0: the data say nothing about ψ */
+  if (sd * (lo.h.hi - lo.h.lo) < 1e-60)
+    {
+      /* ψ·X stays below 1e-59 where the prior has its mass: the expansion
+       * ln BF10 = σ²[(kA − E0 X)² − Var0 X]/2 + O(σ⁴ (hi − lo)⁴) (Taylor, in ψ) */
+      double N = na + nb, m = ka + kb;
+      double d = ka - na * (m / N), v = lo.h.sd * lo.h.sd;
+      return -0.5 * (sd * d) * (sd * d) + 0.5 * (sd * sd) * v;
+    }
   lo.ka = ka;
   lo.sd = sd;
   lo.ur = ka;
@@ -297,7 +315,7 @@ tf_two_proportions_log_or_bf01 (double ka, double na, double kb, double nb, doub
   double c0 = ka + 0.5, c1 = na - ka + 0.5, c2 = kb + 0.5, c3 = nb - kb + 0.5;
   double est = log ((c0 * c3) / (c1 * c2));
   double v = 1.0 / c0 + 1.0 / c1 + 1.0 / c2 + 1.0 / c3;
-  double start = est * (sd * sd) / (sd * sd + v);
+  double start = est / (1.0 + v / (sd * sd));
 
   if (!find_mode (&lo, start, &lo.mode, &curv))
     {

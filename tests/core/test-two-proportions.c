@@ -259,6 +259,20 @@ test_log_or_bf (void)
    * −1.01e10 (mpmath, as above: −10118779826.78396) */
   assert_rel (tf_two_proportions_log_or_bf01 (5e11, 1e12, 4e11, 1e12, 1e8, &why),
               -10118779826.78396, 1e-12);
+  /* the prior's scale at its extremes: a flat likelihood on one side (0 of 10) gives
+   * BF10 → ½ · its plateau as σ grows; elsewhere BF01 grows like σ (Lindley 1957:
+   * BF01 ≈ σ √(2π) / ∫ L dψ), so ln BF01 moves by ln of the ratio of the σ's; as
+   * σ → 0 the Bayes factor tends to 1 */
+  double flat = tf_two_proportions_log_or_bf01 (0, 10, 7, 10, 1e30, &why);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (0, 10, 7, 10, 1e140, &why) - flat), <, 1e-9);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (3, 10, 7, 10, 1e149, &why)
+                           - tf_two_proportions_log_or_bf01 (3, 10, 7, 10, 1e6, &why)
+                           - 143 * G_LN10), <, 1e-9);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (3, 10, 7, 10, 1e-300, &why)), <, 1e-300);
+  g_assert_cmpfloat (fabs (tf_two_proportions_log_or_bf01 (3e11, 1e12, 7e11, 1e12, 1e-150, &why)), <, 1e-270);
+  why = NULL;
+  g_assert_true (isnan (tf_two_proportions_log_or_bf01 (3, 10, 7, 10, 1e300, &why)));
+  g_assert_nonnull (why);
   /* a PriorScale of 0 is not defined, and says why */
   why = NULL;
   g_assert_true (isnan (tf_two_proportions_log_or_bf01 (3, 10, 5, 10, 0.0, &why)));

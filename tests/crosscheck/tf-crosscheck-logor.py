@@ -9,7 +9,8 @@ hypergeometric count given the margins (the conditional likelihood, Fisher 1935)
 Random cases (fixed seed) in three strata, references from Debian 12's numpy, scipy
 1.10.1 and mpmath 1.2.1:
   bulk    N cases (default 10^4): trials 1 to 10^4 a group, log-uniform, with n = 1,
-          k = 0 and k = n drawn on purpose; σ log-uniform 1e-6 to 1e6 or a usual value.
+          k = 0 and k = n drawn on purpose; σ log-uniform 1e-6 to 1e6, a usual value, or
+          one of 1e-100, 1e-30, 1e30, 1e100.
           Reference: E_ψ[e^{ψ(X − kA)}] summed over the whole support from cumulative
           log ratios (numpy longdouble), the outer integral on ψ = mode + τ s (mode by
           scipy.optimize.brentq, τ from the curvature there) by scipy.integrate.quad
@@ -342,7 +343,10 @@ def draw_k(n, theta):
 
 
 def draw_sd():
-    if rng.uniform() < 0.3:
+    r = rng.uniform()
+    if r < 0.03:
+        return float(rng.choice([1e-100, 1e-30, 1e30, 1e100]))
+    if r < 0.3:
         return float(rng.choice([0.25, 0.5, 0.7071, 1.0, 2.0]))
     return log_uniform(1e-6, 1e6)
 
