@@ -18,7 +18,9 @@
  * integral is centred on the mode of the log integrand, found by safeguarded Newton
  * steps (it is concave), scaled by its curvature there (a Laplace-style substitution),
  * and taken by GSL's QAG (Piessens et al. 1983) over pieces of doubling width outward
- * until the integrand is below e^{−36} of its peak.
+ * (16-fold over a flat stretch) until the integrand is below e^{−36} of its peak.
+ * A prior so narrow that σ times the support is below 1e-60 takes the second-order
+ * expansion in σ; σ above 10^150 is not computed.
  */
 #include "tf-two-proportions-private.h"
 #include "tf-fisher.h"
