@@ -5,10 +5,13 @@
  */
 #include "tf-analysis.h"
 #include "tf-results.h"
+#include "tf-one-rate.h"
+#include "tf-two-rates.h"
 
 #include <gsl/gsl_errno.h>
 #include <stdio.h>
 #include <stdlib.h>
+#include <math.h>
 
 static int
 compare_doubles (const void *a, const void *b)
@@ -37,6 +40,29 @@ median_us (const TfAnalysis *analysis, guint repeats)
   return t[repeats / 2];
 }
 
+/* Median over 21 batches of 10^5 calls of each closed-form ln BF01, in ns per call. */
+static void
+bench_log_bf01 (const char *what, double ka, double ea, double kb, double eb)
+{
+  double t1[21], t2[21], sink = 0.0;
+
+  for (int i = 0; i < 21; i++)
+    {
+      gint64 start = g_get_monotonic_time ();
+      for (int j = 0; j < 100000; j++)
+        sink += tf_one_rate_log_bf01 (ka + j % 7, ea, ka / ea, 2.0, 0.5);
+      gint64 mid = g_get_monotonic_time ();
+      for (int j = 0; j < 100000; j++)
+        sink += tf_two_rates_log_bf01 (ka + j % 7, ea, kb, eb, 1.0, 2.0, 0.5);
+      t1[i] = (double) (mid - start) / 100.0;         /* µs per 10^5 calls to ns per call */
+      t2[i] = (double) (g_get_monotonic_time () - mid) / 100.0;
+    }
+  qsort (t1, 21, sizeof *t1, compare_doubles);
+  qsort (t2, 21, sizeof *t2, compare_doubles);
+  printf ("ln BF01, %-22s one rate %6.0f ns, two rates %6.0f ns per call (median)%s\n",
+          what, t1[10], t2[10], isfinite (sink) ? "" : " (not finite)");
+}
+
 int
 main (void)
 {
@@ -63,5 +89,7 @@ main (void)
   two->exposure_b = 7e11;
   printf ("one rate, k = 1e12:          %8.1f µs per full analysis (median)\n", median_us (one, 21));
   printf ("two rates, 1e12 events:      %8.1f µs per full analysis (median)\n", median_us (two, 21));
+  bench_log_bf01 ("counts ~ 20:", 15, 4, 23, 3011);
+  bench_log_bf01 ("counts ~ 1e12:", 1e12, 1e12, 7e11, 7e11);
   return 0;
 }
