@@ -72,6 +72,7 @@ tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curve
   double step = (hi - lo) / (np - 1);
   curves->posterior_narrow = post.sd < 2.0 * step;
 
+  guint top = 0;
   for (guint i = 0; i < np; i++)
     {
       double x = i + 1 == np ? hi : lo + i * step;
@@ -80,10 +81,25 @@ tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curve
       curves->posterior[i] = curves->posterior_narrow ? 0.0
                              : finite_exp (tf_beta_diff_log_density (&post, x));
       curves->likelihood[i] = finite_exp (tf_beta_diff_log_density (&lik, x));
+      if (curves->posterior[i] > curves->posterior[top])
+        top = i;
     }
   curves->null_value = curves->null_low = curves->null_high = 0.0;
   curves->prior_at_null = curves->posterior_at_null = 0.0;
+  /* the mode: the grid's highest point, refined by the parabola through it and its
+   * neighbours; a spike too narrow for the grid stands at the posterior mean */
   curves->posterior_mode = post.mean;
+  if (!curves->posterior_narrow && top > 0 && top + 1 < np)
+    {
+      double l = log (curves->posterior[top - 1]), c = log (curves->posterior[top]);
+      double r = log (curves->posterior[top + 1]), curvature = l - 2.0 * c + r;
+
+      curves->posterior_mode = curves->x[top];
+      if (isfinite (curvature) && curvature < 0.0)
+        curves->posterior_mode += 0.5 * step * (l - r) / curvature;
+    }
+  else if (!curves->posterior_narrow)
+    curves->posterior_mode = curves->x[top];
   curves->parameter_markup = g_strdup ("θ<sub>A</sub> − θ<sub>B</sub>");
 }
 

@@ -349,7 +349,9 @@ void
 tf_two_proportions_add_log_or_bf (const TfAnalysis *analysis, TfResults *results)
 {
   const char *why = NULL;
-  const char *label = _("BF01, normal prior on the log odds ratio (SD = PriorScale, two-sided)");
+  g_autofree char *sd = tf_format_value (analysis->prior_scale, TF_MEASURE_ESTIMATE);
+  /* TRANSLATORS: %s is the prior's standard deviation, e.g. 0.7071 */
+  g_autofree char *label = g_strdup_printf (_("BF01, normal prior on the log odds ratio (SD %s, two-sided)"), sd);
   double l = tf_two_proportions_log_or_bf01 (analysis->successes_a, analysis->trials_a,
                                              analysis->successes_b, analysis->trials_b,
                                              analysis->prior_scale, &why);
