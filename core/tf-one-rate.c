@@ -60,20 +60,20 @@ tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double shape, d
          - tf_stirling_remainder (shape + k);
 }
 
-/* ln of the Gamma(s, r) mass in (lo, hi), hi may be +inf, from the side where it is
- * small (Mächler 2012 for the differences). */
-static double
-log_gamma_mass (double s, double r, double lo, double hi)
+/* λ ~ Gamma(param[0], param[1]) (shape, rate): regularised incomplete gammas. */
+static void
+gamma_log_tails (const double *param, double c, double *log_lower, double *log_upper)
 {
-  double pl, ql, ph, qh;
-  tf_gamma_inc_log_both (s, r * lo, &pl, &ql);
-  if (isinf (hi))
-    return ql;
-  tf_gamma_inc_log_both (s, r * hi, &ph, &qh);
-  if (ql <= ph)
-    return tf_log_sub (ql, qh);
-  return tf_log_sub (ph, pl);
+  tf_gamma_inc_log_both (param[0], param[1] * c, log_lower, log_upper);
 }
+
+static double
+gamma_quantile_log (const double *param, double log_p, gboolean lower)
+{
+  return tf_gamma_inc_inverse_log (log_p, param[0], lower) / param[1];
+}
+
+static const TfRatesFamily gamma_family = { gamma_log_tails, gamma_quantile_log };
 
 /* The classical tests of one rate against the Poisson mean m = λ0 E, in log space. */
 typedef struct {
@@ -142,57 +142,11 @@ boundary_rate (const TfAnalysis *a, gboolean *inside)
 static double
 analysis_log_bf01 (const TfAnalysis *a, double shape, double rate, double k, double exposure)
 {
-  const double P = shape + k, R = rate + exposure;
-
-  if (a->null_kind == TF_NULL_POINT)
-    {
-      double l0 = a->null_value;
-      double lbf = tf_one_rate_log_bf01 (k, exposure, l0, shape, rate);
-      if (a->direction == TF_DIRECTION_GREATER)
-        lbf += tf_gamma_inc_log_upper (shape, rate * l0) - tf_gamma_inc_log_upper (P, R * l0);
-      else if (a->direction == TF_DIRECTION_LESS)
-        lbf += tf_gamma_inc_log_lower (shape, rate * l0) - tf_gamma_inc_log_lower (P, R * l0);
-      return lbf;
-    }
-  double L = a->null_low, H = a->null_high;
-  double in = log_gamma_mass (P, R, L, H) - log_gamma_mass (shape, rate, L, H);
-  double out_post, out_prior;
-  switch (a->direction)
-    {
-    case TF_DIRECTION_GREATER:
-      out_post = tf_gamma_inc_log_upper (P, R * H);
-      out_prior = tf_gamma_inc_log_upper (shape, rate * H);
-      break;
-    case TF_DIRECTION_LESS:
-      out_post = tf_gamma_inc_log_lower (P, R * L);
-      out_prior = tf_gamma_inc_log_lower (shape, rate * L);
-      break;
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      out_post = tf_log_add (tf_gamma_inc_log_lower (P, R * L), tf_gamma_inc_log_upper (P, R * H));
-      out_prior = tf_log_add (tf_gamma_inc_log_lower (shape, rate * L),
-                              tf_gamma_inc_log_upper (shape, rate * H));
-      break;
-    }
-  return in - (out_post - out_prior);
-}
-
-/* A quantile u of Gamma(P, R) truncated to the side of the alternative (above c for
- * greater, below c for less), through the log-space inverse. */
-static double
-posterior_quantile (double u, double P, double R, double c, TfDirection dir)
-{
-  switch (dir)
-    {
-    case TF_DIRECTION_GREATER:
-      return tf_gamma_inc_inverse_log (log1p (-u) + tf_gamma_inc_log_upper (P, R * c), P, FALSE) / R;
-    case TF_DIRECTION_LESS:
-      return tf_gamma_inc_inverse_log (log (u) + tf_gamma_inc_log_lower (P, R * c), P, TRUE) / R;
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      return (u <= 0.5 ? tf_gamma_inc_inverse_log (log (u), P, TRUE)
-                       : tf_gamma_inc_inverse_log (log1p (-u), P, FALSE)) / R;
-    }
+  const double prior[] = { shape, rate }, post[] = { shape + k, rate + exposure };
+  double l0 = a->null_value;
+  double point = a->null_kind == TF_NULL_POINT
+                 ? tf_one_rate_log_bf01 (k, exposure, l0, shape, rate) : NAN;
+  return tf_rates_log_bf01 (a, &gamma_family, prior, post, point, l0);
 }
 
 void
@@ -236,13 +190,12 @@ tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
   /* The posterior under the alternative, truncated to its side for a one-sided one. */
   double cut = a->null_kind == TF_NULL_POINT ? a->null_value
                : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
-  TfDirection side = a->null_kind == TF_NULL_POINT || dir != TF_DIRECTION_TWO_SIDED
-                     ? dir : TF_DIRECTION_TWO_SIDED;
+  const double post[] = { P, R };
   double alpha2 = 0.5 * (1.0 - a->level);
   tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_quantile (alpha2, P, R, cut, side));
+                  tf_rates_posterior_quantile (&gamma_family, post, alpha2, cut, dir));
   tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_quantile (1.0 - alpha2, P, R, cut, side));
+                  tf_rates_posterior_quantile (&gamma_family, post, 1.0 - alpha2, cut, dir));
   double top = a->null_kind == TF_NULL_POINT ? a->null_value : a->null_high;
   tf_results_add (results, "prob_greater",
                   a->null_kind == TF_NULL_POINT ? _("Posterior probability that λ > λ0")

@@ -4,6 +4,7 @@
 #include "tf-rates-curves.h"
 #include "tf-evidence.h"
 #include "tf-results.h"
+#include "tf-logspace.h"
 
 #include <math.h>
 #include <glib/gi18n-lib.h>
@@ -77,6 +78,85 @@ tf_rates_log_normal_upper (double z)
   if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
     return NAN;
   return r.val - G_LN2;
+}
+
+double
+tf_rates_log_tail (const TfRatesFamily *family, const double *param, double c, gboolean upper)
+{
+  double l, u;
+  family->log_tails (param, c, &l, &u);
+  return upper ? u : l;
+}
+
+/* ln of the mass in (lo, hi), hi may be +inf, from the side where it is small
+ * (Mächler 2012 for the differences). */
+static double
+log_mass (const TfRatesFamily *family, const double *param, double lo, double hi)
+{
+  double ll, ul, lh, uh;
+  family->log_tails (param, lo, &ll, &ul);
+  if (isinf (hi))
+    return ul;
+  family->log_tails (param, hi, &lh, &uh);
+  if (ul <= lh)
+    return tf_log_sub (ul, uh);
+  return tf_log_sub (lh, ll);
+}
+
+double
+tf_rates_log_bf01 (const TfAnalysis *analysis, const TfRatesFamily *family,
+                   const double *prior, const double *post, double log_bf01_point, double c0)
+{
+  const TfAnalysis *a = analysis;
+  const TfRatesFamily *f = family;
+
+  if (a->null_kind == TF_NULL_POINT)
+    {
+      if (a->direction == TF_DIRECTION_TWO_SIDED)
+        return log_bf01_point;
+      gboolean up = a->direction == TF_DIRECTION_GREATER;
+      return log_bf01_point + tf_rates_log_tail (f, prior, c0, up)
+             - tf_rates_log_tail (f, post, c0, up);
+    }
+  double L = a->null_low, H = a->null_high, out_post, out_prior;
+  double in = log_mass (f, post, L, H) - log_mass (f, prior, L, H);
+  switch (a->direction)
+    {
+    case TF_DIRECTION_GREATER:
+      out_post = tf_rates_log_tail (f, post, H, TRUE);
+      out_prior = tf_rates_log_tail (f, prior, H, TRUE);
+      break;
+    case TF_DIRECTION_LESS:
+      out_post = tf_rates_log_tail (f, post, L, FALSE);
+      out_prior = tf_rates_log_tail (f, prior, L, FALSE);
+      break;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      out_post = tf_log_add (tf_rates_log_tail (f, post, L, FALSE),
+                             tf_rates_log_tail (f, post, H, TRUE));
+      out_prior = tf_log_add (tf_rates_log_tail (f, prior, L, FALSE),
+                              tf_rates_log_tail (f, prior, H, TRUE));
+      break;
+    }
+  return in - (out_post - out_prior);
+}
+
+double
+tf_rates_posterior_quantile (const TfRatesFamily *family, const double *post, double u,
+                             double c, TfDirection dir)
+{
+  const TfRatesFamily *f = family;
+
+  switch (dir)
+    {
+    case TF_DIRECTION_GREATER:
+      return f->quantile (post, log1p (-u) + tf_rates_log_tail (f, post, c, TRUE), FALSE);
+    case TF_DIRECTION_LESS:
+      return f->quantile (post, log (u) + tf_rates_log_tail (f, post, c, FALSE), TRUE);
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      return u <= 0.5 ? f->quantile (post, log (u), TRUE) : f->quantile (post, log1p (-u), FALSE);
+    }
 }
 
 gboolean

@@ -26,6 +26,30 @@ void tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems);
 /* ln P(Z >= z), Z standard normal. */
 double tf_rates_log_normal_upper (double z);
 
+/* How a design's parameter (λ, or ρ = λA/λB) is distributed under a prior or a
+ * posterior with parameters param: both ln tails at c, and the quantile whose lower
+ * (lower TRUE) or upper tail has ln probability log_p. */
+typedef struct {
+  void (*log_tails) (const double *param, double c, double *log_lower, double *log_upper);
+  double (*quantile) (const double *param, double log_p, gboolean lower);
+} TfRatesFamily;
+
+/* ln P(θ >= c) (upper TRUE) or ln P(θ <= c). */
+double tf_rates_log_tail (const TfRatesFamily *family, const double *param, double c,
+                          gboolean upper);
+
+/* ln BF01 in the analysis's hypotheses from the prior and posterior of the parameter
+ * under the alternative: for a point null c0, log_bf01_point (two-sided) with the
+ * prior truncated to the alternative's side; for an interval null, the prior and
+ * posterior masses inside it against those on the alternative's side(s). */
+double tf_rates_log_bf01 (const TfAnalysis *analysis, const TfRatesFamily *family,
+                          const double *prior, const double *post, double log_bf01_point,
+                          double c0);
+
+/* The quantile u of the posterior, truncated to above c (greater) or below c (less). */
+double tf_rates_posterior_quantile (const TfRatesFamily *family, const double *post,
+                                    double u, double c, TfDirection dir);
+
 /* TRUE when the analysis has a point null; otherwise *why_not = why (copied). */
 gboolean tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not);
 

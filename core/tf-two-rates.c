@@ -134,75 +134,35 @@ tf_two_rates_ratio_quantile_log (double log_p, double sa, double ra, double sb, 
   return rb / ra * w / v;
 }
 
-/* ln of the probability that ρ lies in (lo, hi) (hi may be +inf) when ra ρ / rb is
- * beta-prime(sa, sb), from the small side. */
-static double
-log_ratio_mass (double sa, double ra, double sb, double rb, double lo, double hi)
+/* ρ when ra ρ / rb is beta-prime(sa, sb), param = { sa, ra, sb, rb }: incomplete betas
+ * at w = ra c / (ra c + rb), w and 1 − w each from its own numerator. */
+static void
+ratio_log_tails (const double *param, double c, double *log_lower, double *log_upper)
 {
-  double ll, ul, lh, uh;
-  double d = ra * lo + rb;
-  tf_incbeta_log_both (ra * lo / d, rb / d, sa, sb, &ll, &ul);
-  if (isinf (hi))
-    return ul;
-  d = ra * hi + rb;
-  tf_incbeta_log_both (ra * hi / d, rb / d, sa, sb, &lh, &uh);
-  if (ul <= lh)
-    return tf_log_sub (ul, uh);
-  return tf_log_sub (lh, ll);
+  double d = param[1] * c + param[3];
+  tf_incbeta_log_both (param[1] * c / d, param[3] / d, param[0], param[2], log_lower, log_upper);
 }
 
 static double
-log_ratio_upper (double sa, double ra, double sb, double rb, double c)
+ratio_quantile_log (const double *param, double log_p, gboolean lower)
 {
-  return log_ratio_mass (sa, ra, sb, rb, c, INFINITY);
+  return tf_two_rates_ratio_quantile_log (log_p, param[0], param[1], param[2], param[3], lower);
 }
 
-static double
-log_ratio_lower (double sa, double ra, double sb, double rb, double c)
-{
-  double d = ra * c + rb;
-  return tf_incbeta_log_lower (ra * c / d, rb / d, sa, sb);
-}
+static const TfRatesFamily ratio_family = { ratio_log_tails, ratio_quantile_log };
 
 /* ln BF01 in the analysis's hypotheses, for prior (s, r) and counts (ka, kb) over
- * exposures (ea, eb). */
+ * exposures (ea, eb); an interval null by the independent model's prior and posterior
+ * masses, inside against the side(s) of the alternative. */
 static double
 analysis_log_bf01 (const TfAnalysis *a, double s, double r, double ka, double ea, double kb,
                    double eb)
 {
-  const double sa = s + ka, sb = s + kb, ra = r + ea, rb = r + eb;
-
-  if (a->null_kind == TF_NULL_POINT)
-    {
-      double rho0 = tf_two_rates_null_ratio (a);
-      double lbf = tf_two_rates_log_bf01 (ka, ea, kb, eb, rho0, s, r);
-      if (a->direction == TF_DIRECTION_GREATER)
-        lbf += log_ratio_upper (s, r, s, r, rho0) - log_ratio_upper (sa, ra, sb, rb, rho0);
-      else if (a->direction == TF_DIRECTION_LESS)
-        lbf += log_ratio_lower (s, r, s, r, rho0) - log_ratio_lower (sa, ra, sb, rb, rho0);
-      return lbf;
-    }
-  /* Interval null: the independent model's prior and posterior, inside against the
-   * side(s) of the alternative. */
-  double L = a->null_low, H = a->null_high, out_post, out_prior;
-  double in = log_ratio_mass (sa, ra, sb, rb, L, H) - log_ratio_mass (s, r, s, r, L, H);
-  switch (a->direction)
-    {
-    case TF_DIRECTION_GREATER:
-      out_post = log_ratio_upper (sa, ra, sb, rb, H);
-      out_prior = log_ratio_upper (s, r, s, r, H);
-      break;
-    case TF_DIRECTION_LESS:
-      out_post = log_ratio_lower (sa, ra, sb, rb, L);
-      out_prior = log_ratio_lower (s, r, s, r, L);
-      break;
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      out_post = tf_log_add (log_ratio_lower (sa, ra, sb, rb, L), log_ratio_upper (sa, ra, sb, rb, H));
-      out_prior = tf_log_add (log_ratio_lower (s, r, s, r, L), log_ratio_upper (s, r, s, r, H));
-      break;
-    }
-  return in - (out_post - out_prior);
+  const double prior[] = { s, r, s, r }, post[] = { s + ka, r + ea, s + kb, r + eb };
+  double rho0 = tf_two_rates_null_ratio (a);
+  double point = a->null_kind == TF_NULL_POINT
+                 ? tf_two_rates_log_bf01 (ka, ea, kb, eb, rho0, s, r) : NAN;
+  return tf_rates_log_bf01 (a, &ratio_family, prior, post, point, rho0);
 }
 
 typedef struct {
@@ -276,26 +236,6 @@ boundary_ratio (const TfAnalysis *a, gboolean *inside)
 #undef BELOW
 }
 
-/* A quantile u of the posterior ratio, truncated above c (greater) or below c (less). */
-static double
-posterior_ratio_quantile (double u, double sa, double ra, double sb, double rb, double c,
-                          TfDirection dir)
-{
-  switch (dir)
-    {
-    case TF_DIRECTION_GREATER:
-      return tf_two_rates_ratio_quantile_log (log1p (-u) + log_ratio_upper (sa, ra, sb, rb, c),
-                                              sa, ra, sb, rb, FALSE);
-    case TF_DIRECTION_LESS:
-      return tf_two_rates_ratio_quantile_log (log (u) + log_ratio_lower (sa, ra, sb, rb, c),
-                                              sa, ra, sb, rb, TRUE);
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      return u <= 0.5 ? tf_two_rates_ratio_quantile_log (log (u), sa, ra, sb, rb, TRUE)
-                      : tf_two_rates_ratio_quantile_log (log1p (-u), sa, ra, sb, rb, FALSE);
-    }
-}
-
 void
 tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
 {
@@ -303,6 +243,7 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
   const double ka = a->events_a, ea = a->exposure_a, kb = a->events_b, eb = a->exposure_b;
   const double n = ka + kb, s = a->prior_shape, r = a->prior_rate;
   const double sa = s + ka, sb = s + kb, ra = r + ea, rb = r + eb;
+  const double post[] = { sa, ra, sb, rb };
   const TfDirection dir = a->direction;
   gboolean inside;
   double rho = boundary_ratio (a, &inside), p0, q0;
@@ -354,14 +295,14 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
                : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
   double alpha2 = 0.5 * (1.0 - a->level);
   tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_ratio_quantile (alpha2, sa, ra, sb, rb, cut, dir));
+                  tf_rates_posterior_quantile (&ratio_family, post, alpha2, cut, dir));
   tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
-                  posterior_ratio_quantile (1.0 - alpha2, sa, ra, sb, rb, cut, dir));
+                  tf_rates_posterior_quantile (&ratio_family, post, 1.0 - alpha2, cut, dir));
   double top = a->null_kind == TF_NULL_POINT ? tf_two_rates_null_ratio (a) : a->null_high;
   tf_results_add (results, "prob_greater",
                   a->null_kind == TF_NULL_POINT ? _("Posterior probability that λA/λB > ρ0")
                                                 : _("Posterior probability that λA/λB lies above the null interval"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (log_ratio_upper (sa, ra, sb, rb, top)));
+                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_rates_log_tail (&ratio_family, post, top, TRUE)));
 
   /* The conditional likelihood ratio at its maximum, exp(−G/2), equal to the profile
    * likelihood ratio of the two Poisson counts (Edwards, Lindman & Savage 1963); 1 when
