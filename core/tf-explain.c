@@ -240,6 +240,21 @@ explain_confidence (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
                         percent));
 }
 
+/* Under Welch's test the classical numbers do not assume equal SDs, but the Bayes
+ * factors, δ and its intervals come from Student's pooled t: the reader is told. */
+static char *
+welch_bayes_note (const TfAnalysis *a, const char *text)
+{
+  if (a->design != TF_DESIGN_TWO_MEANS || a->equal_variances)
+    return g_strdup (text);
+  return g_strdup_printf ("%s %s", text,
+                          _("Here the Bayes factor and the standardised effect δ assume that the "
+                            "two groups share one SD: they use Student's pooled t, while the "
+                            "p-value and the confidence interval are Welch's and do not assume "
+                            "it. When the SDs differ much, the two readings can disagree for "
+                            "that reason alone."));
+}
+
 static void
 explain_bayes_factor (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
 {
@@ -260,9 +275,9 @@ explain_bayes_factor (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
                           "data: the null, %s, and the alternative, %s. The data were BF₀₁ times "
                           "as probable under the null as under the alternative. %s"),
                         bf01, bf10, h0, h1, leaning),
-       g_strdup (_("It is not a probability of either model, and it depends on the prior under "
-                   "the alternative: a wider prior spreads its predictions thinner and so favours "
-                   "the null more. It says nothing of models that were not compared.")));
+       welch_bayes_note (a, _("It is not a probability of either model, and it depends on the prior under "
+                              "the alternative: a wider prior spreads its predictions thinner and so favours "
+                              "the null more. It says nothing of models that were not compared.")));
 }
 
 static void

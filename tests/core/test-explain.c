@@ -63,6 +63,11 @@ test_every_design (void)
       /* a NULL string printed with %s shows as "(null)"; "P(null)" is ours */
       for (const char *q = strstr (all->str, "(null)"); q; q = strstr (q + 1, "(null)"))
         g_assert_true (q > all->str && q[-1] == 'P');
+      /* two means under Welch's test (the default): the Bayes factor's pooled t is named */
+      if (a->design == TF_DESIGN_TWO_MEANS)
+        g_assert_nonnull (strstr (all->str, "Student's pooled t"));
+      else
+        g_assert_null (strstr (all->str, "Student's pooled t"));
     }
 }
 
