@@ -111,32 +111,6 @@ rate_tests (double k, double m, TfDirection dir, RateTests *t)
     }
 }
 
-/* For an interval null [L, H]: the rate on the null's boundary that a test of the
- * chosen direction is made against, and whether the estimate lies inside the null
- * (then every p-value is 1). */
-static double
-boundary_rate (const TfAnalysis *a, gboolean *inside)
-{
-  double est = a->events / a->exposure;
-
-  *inside = FALSE;
-  if (a->null_kind == TF_NULL_POINT)
-    return a->null_value;
-  switch (a->direction)
-    {
-    case TF_DIRECTION_GREATER:
-      *inside = est <= a->null_high;
-      return a->null_high;
-    case TF_DIRECTION_LESS:
-      *inside = est >= a->null_low;
-      return a->null_low;
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      *inside = est >= a->null_low && est <= a->null_high;
-      return est < a->null_low ? a->null_low : a->null_high;
-    }
-}
-
 /* ln BF01 in the analysis's hypotheses: point or interval null, side of the
  * alternative by truncation of the prior (ratios of incomplete gamma masses). */
 static double
@@ -158,7 +132,7 @@ tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
   const double P = alpha + k, R = beta + E;
   const TfDirection dir = a->direction;
   gboolean inside;
-  double lam = boundary_rate (a, &inside);
+  double lam = tf_rates_boundary (a, a->null_value, k, E, &inside);
   RateTests t;
 
   tf_results_add (results, "estimate", _("Observed rate"), TF_MEASURE_ESTIMATE, k / E);

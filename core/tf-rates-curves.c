@@ -159,6 +159,32 @@ tf_rates_posterior_quantile (const TfRatesFamily *family, const double *post, do
     }
 }
 
+double
+tf_rates_boundary (const TfAnalysis *analysis, double point, double num, double den,
+                   gboolean *inside)
+{
+  const TfAnalysis *a = analysis;
+  const double L = a->null_low, H = a->null_high;
+  const gboolean below = num < L * den, above = num > H * den;
+
+  *inside = FALSE;
+  if (a->null_kind == TF_NULL_POINT)
+    return point;
+  switch (a->direction)
+    {
+    case TF_DIRECTION_GREATER:
+      *inside = !above;
+      return H;
+    case TF_DIRECTION_LESS:
+      *inside = !below;
+      return L;
+    case TF_DIRECTION_TWO_SIDED:
+    default:
+      *inside = !below && !above;
+      return below ? L : H;
+    }
+}
+
 gboolean
 tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not)
 {

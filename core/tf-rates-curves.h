@@ -50,6 +50,13 @@ double tf_rates_log_bf01 (const TfAnalysis *analysis, const TfRatesFamily *famil
 double tf_rates_posterior_quantile (const TfRatesFamily *family, const double *post,
                                     double u, double c, TfDirection dir);
 
+/* The null value a test in the analysis's direction is made against: the point null
+ * (point), or the nearer end of an interval null on the side of the alternative; and
+ * whether the estimate num / den lies in the null (compared as num against c den,
+ * so that den = 0 needs no division). */
+double tf_rates_boundary (const TfAnalysis *analysis, double point, double num, double den,
+                          gboolean *inside);
+
 /* TRUE when the analysis has a point null; otherwise *why_not = why (copied). */
 gboolean tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not);
 

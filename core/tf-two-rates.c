@@ -206,36 +206,6 @@ split_tests (double ka, double n, double p0, double q0, TfDirection dir, SplitTe
     }
 }
 
-/* The null ratio the test is made against (the nearer end of an interval null on the
- * side of the alternative) and whether the estimate lies in the null. */
-static double
-boundary_ratio (const TfAnalysis *a, gboolean *inside)
-{
-  double ka = a->events_a, kb = a->events_b;
-  /* ρ̂ compared with c as kA EB against c kB EA, so that kB = 0 needs no division */
-  double ea = a->exposure_a, eb = a->exposure_b;
-#define ABOVE(c) (ka * eb > (c) * kb * ea)
-#define BELOW(c) (ka * eb < (c) * kb * ea)
-  *inside = ka + kb == 0.0;
-  if (a->null_kind == TF_NULL_POINT)
-    return tf_two_rates_null_ratio (a);
-  switch (a->direction)
-    {
-    case TF_DIRECTION_GREATER:
-      *inside = *inside || !ABOVE (a->null_high);
-      return a->null_high;
-    case TF_DIRECTION_LESS:
-      *inside = *inside || !BELOW (a->null_low);
-      return a->null_low;
-    case TF_DIRECTION_TWO_SIDED:
-    default:
-      *inside = *inside || (!BELOW (a->null_low) && !ABOVE (a->null_high));
-      return BELOW (a->null_low) ? a->null_low : a->null_high;
-    }
-#undef ABOVE
-#undef BELOW
-}
-
 void
 tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
 {
@@ -246,7 +216,10 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
   const double post[] = { sa, ra, sb, rb };
   const TfDirection dir = a->direction;
   gboolean inside;
-  double rho = boundary_ratio (a, &inside), p0, q0;
+  /* every p-value is 1 with no events */
+  double rho = tf_rates_boundary (a, tf_two_rates_null_ratio (a), ka * eb, kb * ea, &inside);
+  double p0, q0;
+  inside = inside || n == 0.0;
   SplitTests t;
 
   if (kb > 0.0)
