@@ -138,16 +138,8 @@ tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
   tf_results_add (results, "estimate", _("Observed rate"), TF_MEASURE_ESTIMATE, k / E);
 
   rate_tests (k, lam * E, dir, &t);
-  if (inside)
-    t.lp_exact = t.lp_mid = t.lp_score = 0.0;
-  tf_results_add (results, "p_value", _("p-value (exact)"), TF_MEASURE_TAIL_PROBABILITY,
-                  exp (t.lp_exact));
-  tf_results_add (results, "p_value_exact", _("Exact Poisson p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, exp (t.lp_exact));
-  tf_results_add (results, "p_value_midp", _("Mid-p-value"), TF_MEASURE_TAIL_PROBABILITY,
-                  MIN (exp (t.lp_mid), 1.0));
-  tf_results_add (results, "p_value_score", _("Score test p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (t.lp_score), 1.0));
+  tf_rates_add_p_values (results, inside, t.lp_exact, t.lp_mid, t.lp_score,
+                         _("Exact Poisson p-value"));
 
   /* Garwood (1936), two-sided at level whatever the direction. */
   double lo, hi;
@@ -162,25 +154,16 @@ tf_one_rate_compute (const TfAnalysis *analysis, TfResults *results)
                                 _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
 
   /* The posterior under the alternative, truncated to its side for a one-sided one. */
-  double cut = a->null_kind == TF_NULL_POINT ? a->null_value
-               : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
   const double post[] = { P, R };
-  double alpha2 = 0.5 * (1.0 - a->level);
-  tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
-                  tf_rates_posterior_quantile (&gamma_family, post, alpha2, cut, dir));
-  tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
-                  tf_rates_posterior_quantile (&gamma_family, post, 1.0 - alpha2, cut, dir));
-  double top = a->null_kind == TF_NULL_POINT ? a->null_value : a->null_high;
-  tf_results_add (results, "prob_greater",
-                  a->null_kind == TF_NULL_POINT ? _("Posterior probability that λ > λ0")
-                                                : _("Posterior probability that λ lies above the null interval"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_gamma_inc_log_upper (P, R * top)));
+  tf_rates_add_posterior (results, a, &gamma_family, post, a->null_value,
+                          _("Posterior probability that λ > λ0"),
+                          _("Posterior probability that λ lies above the null interval"));
 
   /* L(λ0) / L(k/E) = exp(−G/2) (Edwards, Lindman & Savage 1963); 1 when the estimate
    * lies in the null or on its side. */
   gboolean null_side = inside || (dir == TF_DIRECTION_GREATER && k <= lam * E)
                        || (dir == TF_DIRECTION_LESS && k >= lam * E);
-  tf_results_add_bounds (results, t.lp_exact, null_side ? 0.0 : -t.dev);
+  tf_results_add_bounds (results, inside ? 0.0 : t.lp_exact, null_side ? 0.0 : -t.dev);
 }
 
 static double

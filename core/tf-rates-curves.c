@@ -185,6 +185,41 @@ tf_rates_boundary (const TfAnalysis *analysis, double point, double num, double 
     }
 }
 
+void
+tf_rates_add_p_values (TfResults *results, gboolean inside, double lp_exact, double lp_mid,
+                       double lp_score, const char *exact_label)
+{
+  if (inside)
+    lp_exact = lp_mid = lp_score = 0.0;
+  tf_results_add (results, "p_value", _("p-value (exact)"), TF_MEASURE_TAIL_PROBABILITY,
+                  exp (lp_exact));
+  tf_results_add (results, "p_value_exact", exact_label, TF_MEASURE_TAIL_PROBABILITY,
+                  exp (lp_exact));
+  tf_results_add (results, "p_value_midp", _("Mid-p-value"), TF_MEASURE_TAIL_PROBABILITY,
+                  MIN (exp (lp_mid), 1.0));
+  tf_results_add (results, "p_value_score", _("Score test p-value"),
+                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (lp_score), 1.0));
+}
+
+void
+tf_rates_add_posterior (TfResults *results, const TfAnalysis *analysis,
+                        const TfRatesFamily *family, const double *post, double point,
+                        const char *point_label, const char *interval_label)
+{
+  const TfAnalysis *a = analysis;
+  const gboolean is_point = a->null_kind == TF_NULL_POINT;
+  double cut = is_point ? point : a->direction == TF_DIRECTION_LESS ? a->null_low : a->null_high;
+  double alpha2 = 0.5 * (1.0 - a->level);
+
+  tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
+                  tf_rates_posterior_quantile (family, post, alpha2, cut, a->direction));
+  tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
+                  tf_rates_posterior_quantile (family, post, 1.0 - alpha2, cut, a->direction));
+  tf_results_add (results, "prob_greater", is_point ? point_label : interval_label,
+                  TF_MEASURE_POSTERIOR_PROBABILITY,
+                  exp (tf_rates_log_tail (family, post, is_point ? point : a->null_high, TRUE)));
+}
+
 gboolean
 tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not)
 {

@@ -8,6 +8,7 @@
 
 #include "tf-analysis.h"
 #include "tf-curves.h"
+#include "tf-results.h"
 
 G_BEGIN_DECLS
 
@@ -56,6 +57,18 @@ double tf_rates_posterior_quantile (const TfRatesFamily *family, const double *p
  * so that den = 0 needs no division). */
 double tf_rates_boundary (const TfAnalysis *analysis, double point, double num, double den,
                           gboolean *inside);
+
+/* The rows p_value, p_value_exact (labelled exact_label), p_value_midp and
+ * p_value_score from their ln; inside: the estimate lies in the null, every p is 1. */
+void tf_rates_add_p_values (TfResults *results, gboolean inside, double lp_exact,
+                            double lp_mid, double lp_score, const char *exact_label);
+
+/* The rows cri_low, cri_high (equal-tailed, the posterior truncated to the side of a
+ * one-sided alternative) and prob_greater (above the point null, or above the interval
+ * null; labelled point_label or interval_label) of the posterior post. */
+void tf_rates_add_posterior (TfResults *results, const TfAnalysis *analysis,
+                             const TfRatesFamily *family, const double *post, double point,
+                             const char *point_label, const char *interval_label);
 
 /* TRUE when the analysis has a point null; otherwise *why_not = why (copied). */
 gboolean tf_rates_point_null (const TfAnalysis *analysis, const char *why, char **why_not);

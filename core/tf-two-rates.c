@@ -231,16 +231,8 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
 
   pi_of_ratio (rho, ea, eb, &p0, &q0);
   split_tests (ka, n, p0, q0, dir, &t);
-  if (inside)
-    t.lp_exact = t.lp_mid = t.lp_score = 0.0;
-  tf_results_add (results, "p_value", _("p-value (exact)"), TF_MEASURE_TAIL_PROBABILITY,
-                  exp (t.lp_exact));
-  tf_results_add (results, "p_value_exact", _("Exact conditional p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, exp (t.lp_exact));
-  tf_results_add (results, "p_value_midp", _("Mid-p-value"), TF_MEASURE_TAIL_PROBABILITY,
-                  MIN (exp (t.lp_mid), 1.0));
-  tf_results_add (results, "p_value_score", _("Score test p-value"),
-                  TF_MEASURE_TAIL_PROBABILITY, MIN (exp (t.lp_score), 1.0));
+  tf_rates_add_p_values (results, inside, t.lp_exact, t.lp_mid, t.lp_score,
+                         _("Exact conditional p-value"));
 
   /* Clopper–Pearson for π carried to ρ = (EB / EA) π / (1 − π), π and 1 − π each
    * inverted on its own side. */
@@ -264,25 +256,16 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
   tf_results_add_bayes_factors (results, lbf01, a->prior_null,
                                 _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
 
-  double cut = a->null_kind == TF_NULL_POINT ? tf_two_rates_null_ratio (a)
-               : dir == TF_DIRECTION_LESS ? a->null_low : a->null_high;
-  double alpha2 = 0.5 * (1.0 - a->level);
-  tf_results_add (results, "cri_low", _("Credible interval, lower"), TF_MEASURE_CREDIBLE_LIMIT,
-                  tf_rates_posterior_quantile (&ratio_family, post, alpha2, cut, dir));
-  tf_results_add (results, "cri_high", _("Credible interval, upper"), TF_MEASURE_CREDIBLE_LIMIT,
-                  tf_rates_posterior_quantile (&ratio_family, post, 1.0 - alpha2, cut, dir));
-  double top = a->null_kind == TF_NULL_POINT ? tf_two_rates_null_ratio (a) : a->null_high;
-  tf_results_add (results, "prob_greater",
-                  a->null_kind == TF_NULL_POINT ? _("Posterior probability that λA/λB > ρ0")
-                                                : _("Posterior probability that λA/λB lies above the null interval"),
-                  TF_MEASURE_POSTERIOR_PROBABILITY, exp (tf_rates_log_tail (&ratio_family, post, top, TRUE)));
+  tf_rates_add_posterior (results, a, &ratio_family, post, tf_two_rates_null_ratio (a),
+                          _("Posterior probability that λA/λB > ρ0"),
+                          _("Posterior probability that λA/λB lies above the null interval"));
 
   /* The conditional likelihood ratio at its maximum, exp(−G/2), equal to the profile
    * likelihood ratio of the two Poisson counts (Edwards, Lindman & Savage 1963); 1 when
    * the estimate lies in the null or on its side. */
   gboolean null_side = inside || (dir == TF_DIRECTION_GREATER && ka <= n * p0)
                        || (dir == TF_DIRECTION_LESS && ka >= n * p0);
-  tf_results_add_bounds (results, t.lp_exact, null_side ? 0.0 : -t.dev);
+  tf_results_add_bounds (results, inside ? 0.0 : t.lp_exact, null_side ? 0.0 : -t.dev);
 }
 
 /* ln density of l = ln ρ when c ρ is beta-prime(sa, sb): with w = c ρ / (1 + c ρ),
