@@ -86,29 +86,45 @@ prior_shift (double ka, double ea, double rho0, double shape, double rate, doubl
 /* BF01 = Γ(α + n) Γ(α) / (Γ(α + kA) Γ(α + kB)) · ρ0^kA β^−α (β + EA)^(α + kA)
  * (β + EB)^(α + kB) / (β + ρ0 EA + EB)^(α + n), n = kA + kB: the common-rate marginal
  * over the product of the two Poisson–gamma ones (Greenwood & Yule 1920). With
- * Stirling's formula and Loader's deviance terms (Loader 2000) its powers pool into
- * heterogeneities H (tf_pois_log_heterogeneity): H(α, β; kA, EA) − H(α + kB,
- * (β + EB)/ρ0; kA, EA), "how much more group A disagrees with B's posterior than with
- * the prior"; or H(α, β; kB, EB) − H(α + kA, β + ρ0 EA; kB, EB) + X with group B
- * pooled instead (X = prior_shift, 0 when ρ0 = 1). The way whose largest term is
- * smaller is taken, so that no term is much larger than ln BF01. Counts may be real. */
+ * Stirling's formula its powers are the mixed difference F(P + A + D) − F(P + A) −
+ * F(P + D) + F(P) of F(x, m) = x ln(x/m) over samples (x events over exposure m): the
+ * prior P = (α, ρ0 β) on group B's scale, A = (kA, ρ0 EA), D = (kB, EB + (1 − ρ0) β).
+ * By pooling, in Loader's deviance terms (Loader 2000), it is H(P, A) − H(P + D, A),
+ * H the heterogeneity of two samples (tf_pois_log_heterogeneity): how much more group
+ * A disagrees with B's posterior than with the prior; or, where D is a sample,
+ * H(P, D) − H(P + A, D); or H(α, β; kB, EB) − H(α + kA, β + ρ0 EA; kB, EB) + X
+ * (X = prior_shift, 0 when ρ0 = 1). The way whose largest term is smallest is taken,
+ * so that no term is much larger than ln BF01. Counts may be real. */
 double
 tf_two_rates_log_bf01 (double ka, double ea, double kb, double eb, double rho0,
                        double shape, double rate)
 {
   double a = shape + ka, b = shape + kb, s = a + kb, size;
-  TfPoisSample prior = tf_pois_sample (shape, rate);
-  TfPoisSample da = tf_pois_sample (ka, ea), db = tf_pois_sample (kb, eb);
-  TfPoisSample da0 = tf_pois_sample (0.0, 0.0), post_a = prior, post_b = prior;
-  tf_pois_sample_add (&da0, ka, ea, rho0);        /* A's data on B's scale */
-  tf_pois_sample_add (&post_a, ka, ea, rho0);
-  tf_pois_sample_add (&post_b, kb, eb, 1.0);
-  double ha0 = tf_pois_log_heterogeneity (&prior, &da);
-  double ha1 = tf_pois_log_heterogeneity (&post_b, &da0);
-  double hb0 = tf_pois_log_heterogeneity (&prior, &db);
-  double hb1 = tf_pois_log_heterogeneity (&post_a, &db);
+  TfPoisSample prior = tf_pois_sample (shape, rate), db = tf_pois_sample (kb, eb);
+  TfPoisSample p = tf_pois_sample (shape, 0.0), da = tf_pois_sample (0.0, 0.0);
+  tf_pois_sample_add (&p, 0.0, rate, rho0);
+  tf_pois_sample_add (&da, ka, ea, rho0);
+  TfPoisSample pa = p, pd = prior, d = db;
+  tf_pois_sample_add (&pa, ka, ea, rho0);
+  tf_pois_sample_add (&pd, kb, eb, 1.0);
+  tf_pois_sample_add (&d, 0.0, rate, 1.0 - rho0);
+  double ha0 = tf_pois_log_heterogeneity (&p, &da), ha1 = tf_pois_log_heterogeneity (&pd, &da);
+  double cost = MAX (ha0, ha1), core = ha0 - ha1;
+  if (d.m + d.m_lo > 0.0)
+    {
+      double hd0 = tf_pois_log_heterogeneity (&p, &d), hd1 = tf_pois_log_heterogeneity (&pa, &d);
+      if (MAX (hd0, hd1) < cost)
+        {
+          cost = MAX (hd0, hd1);
+          core = hd0 - hd1;
+        }
+    }
+  TfPoisSample qa = prior;
+  tf_pois_sample_add (&qa, ka, ea, rho0);
+  double hb0 = tf_pois_log_heterogeneity (&prior, &db), hb1 = tf_pois_log_heterogeneity (&qa, &db);
   double x = rho0 == 1.0 ? (size = 0.0) : prior_shift (ka, ea, rho0, shape, rate, &size);
-  double core = MAX (ha0, ha1) <= MAX (MAX (hb0, hb1), size) ? ha0 - ha1 : hb0 - hb1 + x;
+  if (MAX (MAX (hb0, hb1), size) < cost)
+    core = hb0 - hb1 + x;
   /* −½ ln(s α / (a b)) and the Stirling remainders */
   return core + 0.5 * (log1p (ka / shape) - log1p (ka / b))
          + tf_stirling_remainder (shape) + tf_stirling_remainder (s)

@@ -159,6 +159,9 @@ test_bf_cancellation (void)
     { 337591536845, 336115766.21973705, 0, 0.016734247088335128, 1, 227122669358.58163,
       11929588903.190395, -0.45184968904345482216 },
     { 3e11, 1e9, 2e11, 5e8, 1.5, 1e12, 1e10, 78946878192.240361235 },
+    /* both groups far from a tight prior, their ratio the null's: terms of 1e13 in
+     * every pooling but that of group B into the prior on B's scale (was 1.4e-4 off) */
+    { 1e12, 1e12, 1, 1e12, 1e12, 1e12, 1, -25.937873935371102899 },
   };
   for (guint i = 0; i < G_N_ELEMENTS (two); i++)
     {
