@@ -147,22 +147,57 @@ tf_pois_sample_bd0 (const TfPoisSample *s, double lambda)
   return tf_bd0_delta (s->x, mu, d);
 }
 
-/* x − m r = (x e − k m) / (m + e), and k − e r its negative; the cross products by
- * TwoProduct, so that a near-tie keeps its digits. */
-double
-tf_pois_log_heterogeneity (const TfPoisSample *s, const TfPoisSample *t)
+/* The two deviances of H at the pooled rate *r: x − m r = (x e − k m) / (m + e), and
+ * k − e r its negative; the cross products by TwoProduct, so that a near-tie keeps
+ * its digits. */
+static void
+pooled_deviances (const TfPoisSample *s, const TfPoisSample *t, double *r, double *first,
+                  double *second)
 {
   double x = s->x, m = s->m, k = t->x, e = t->m;
-  if (isnan (x) || isnan (m) || isnan (k) || isnan (e))
-    return NAN;
-  if (x + k == 0.0)
-    return 0.0;
   double p1 = x * e, p2 = k * m;
   double e1 = fma (x, e, -p1) + x * t->m_lo + s->x_lo * e;
   double e2 = fma (k, m, -p2) + k * s->m_lo + t->x_lo * m;
   double d = ((p1 - p2) + (e1 - e2)) / (m + e);
-  double r = (x + k) / (m + e);
-  return tf_bd0_delta (x, m * r, d) + tf_bd0_delta (k, e * r, -d);
+  *r = (x + k) / (m + e);
+  *first = tf_bd0_delta (x, m * *r, d);
+  *second = tf_bd0_delta (k, e * *r, -d);
+}
+
+double
+tf_pois_log_heterogeneity (const TfPoisSample *s, const TfPoisSample *t)
+{
+  double r, first, second;
+  if (isnan (s->x) || isnan (s->m) || isnan (t->x) || isnan (t->m))
+    return NAN;
+  if (s->x + t->x == 0.0)
+    return 0.0;
+  pooled_deviances (s, t, &r, &first, &second);
+  return first + second;
+}
+
+/* H(p, t) − H(q, t) directly, or with t's two deviances taken together:
+ * bd0(k, e rp) − bd0(k, e rq) = k ln(rq / rp) + e (rp − rq), which is small where both
+ * are large but the pooled rates are near. The way with the smaller terms is taken;
+ * *cost is the largest term of it (its rounding error is ~1e-16 of that). */
+double
+tf_pois_log_heterogeneity_change (const TfPoisSample *p, const TfPoisSample *q,
+                                  const TfPoisSample *t, double *cost)
+{
+  double hp = tf_pois_log_heterogeneity (p, t), hq = tf_pois_log_heterogeneity (q, t);
+  double rp, rq, fp, fq, sp, sq, k = t->x, e = t->m;
+
+  *cost = MAX (hp, hq);
+  if (!(p->x > 0.0 && q->x > 0.0))
+    return hp - hq;
+  pooled_deviances (p, t, &rp, &fp, &sp);
+  pooled_deviances (q, t, &rq, &fq, &sq);
+  double l = log (rq / rp);
+  double c = MAX (MAX (fp, fq), MAX (k * MAX (1.0, fabs (l)), e * MAX (rp, rq)));
+  if (!(c < *cost))
+    return hp - hq;
+  *cost = c;
+  return (fp - fq) + (k > 0.0 ? k * l : 0.0) + e * (rp - rq);
 }
 
 /* ln P(a, x) by the power series P = D · Σ x^n / ((a + 1) … (a + n)), D = dpois(a, x)

@@ -50,6 +50,11 @@ double tf_pois_sample_bd0 (const TfPoisSample *s, double lambda);
  * are scaled together. */
 double tf_pois_log_heterogeneity (const TfPoisSample *s, const TfPoisSample *t);
 
+/* H(p, t) − H(q, t), computed so as to lose the fewest digits; *cost is the size of
+ * its largest term. */
+double tf_pois_log_heterogeneity_change (const TfPoisSample *p, const TfPoisSample *q,
+                                         const TfPoisSample *t, double *cost);
+
 /* ln P(X <= k) and ln P(X >= k) for X ~ Poisson(mu), mu >= 0. */
 double tf_pois_log_cdf (double k, double mu);
 double tf_pois_log_sf (double k, double mu);

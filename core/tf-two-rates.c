@@ -108,23 +108,23 @@ tf_two_rates_log_bf01 (double ka, double ea, double kb, double eb, double rho0,
   tf_pois_sample_add (&pa, ka, ea, rho0);
   tf_pois_sample_add (&pd, kb, eb, 1.0);
   tf_pois_sample_add (&d, 0.0, rate, 1.0 - rho0);
-  double ha0 = tf_pois_log_heterogeneity (&p, &da), ha1 = tf_pois_log_heterogeneity (&pd, &da);
-  double cost = MAX (ha0, ha1), core = ha0 - ha1;
+  double cost, c;
+  double core = tf_pois_log_heterogeneity_change (&p, &pd, &da, &cost);
   if (d.m + d.m_lo > 0.0)
     {
-      double hd0 = tf_pois_log_heterogeneity (&p, &d), hd1 = tf_pois_log_heterogeneity (&pa, &d);
-      if (MAX (hd0, hd1) < cost)
+      double v = tf_pois_log_heterogeneity_change (&p, &pa, &d, &c);
+      if (c < cost)
         {
-          cost = MAX (hd0, hd1);
-          core = hd0 - hd1;
+          cost = c;
+          core = v;
         }
     }
   TfPoisSample qa = prior;
   tf_pois_sample_add (&qa, ka, ea, rho0);
-  double hb0 = tf_pois_log_heterogeneity (&prior, &db), hb1 = tf_pois_log_heterogeneity (&qa, &db);
+  double v = tf_pois_log_heterogeneity_change (&prior, &qa, &db, &c);
   double x = rho0 == 1.0 ? (size = 0.0) : prior_shift (ka, ea, rho0, shape, rate, &size);
-  if (MAX (MAX (hb0, hb1), size) < cost)
-    core = hb0 - hb1 + x;
+  if (MAX (c, size) < cost)
+    core = v + x;
   /* −½ ln(s α / (a b)) and the Stirling remainders */
   return core + 0.5 * (log1p (ka / shape) - log1p (ka / b))
          + tf_stirling_remainder (shape) + tf_stirling_remainder (s)

@@ -22,9 +22,10 @@ References (Debian 12: scipy 1.10.1, mpmath 1.2.1):
       compared absolutely below 1 and relatively above (no allowance for the size of
       the log marginals). Counts 0..1e12, shapes 1e-3..1e12, exposures and prior
       rates 1e-6..1e12, with strong priors placed on, near and far from the data and
-      the null, and the edges drawn on purpose.
+      the null; and a grid of the ranges' edges (prior means up to 1e12).
 It also re-derives Temme's coefficients in core/tf-poisson.c.
 """
+import itertools
 import math
 import re
 import sys
@@ -455,6 +456,21 @@ for _ in range(N):
     s, r = prior_near(lam)
     cases.append(('lbf2', 'lbf2 %r %r %r %r %r %r %r' % (ka, ea, kb, eb, rho, s, r),
                   (ka, ea, kb, eb, rho, s, r)))
+
+# the edges: every combination of counts, shapes, exposures and prior rates at the
+# ends of their ranges (and between), prior means up to 1e12, null ratios 1, far, near
+# 1 and at the observed ratio
+K = (0.0, 1.0, 37.0, 1e6, 999999999989.0, 1e12)
+S, E, R = (1e-3, 0.5, 1e3, 1e12), (1e-6, 1.0, 1e12), (1e-6, 1.0, 1e12)
+for k, s, e, r in itertools.product(K, S, E, R):
+    if s / r <= 1e12:
+        for l0 in (1e-6, 1.0, k / e if k > 0 else 1.0, s / r):
+            cases.append(('lbf1', 'lbf1 %r %r %r %r %r' % (k, e, l0, s, r), (k, e, l0, s, r)))
+for ka, kb, ea, eb, s, r in itertools.product(K[::3] + K[1::4], K[::3] + K[1::4], E, E, S, R):
+    if s / r <= 1e12:
+        for rho in (1.0, 1e-3, 1 + 1e-9, (ka / ea) / (kb / eb) if ka > 0 and kb > 0 else 7.0):
+            cases.append(('lbf2', 'lbf2 %r %r %r %r %r %r %r' % (ka, ea, kb, eb, rho, s, r),
+                          (ka, ea, kb, eb, rho, s, r)))
 
 for _ in range(N):
     sa, sb = lu(1e-2, 1e4), lu(1e-2, 1e4)
