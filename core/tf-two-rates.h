@@ -25,7 +25,10 @@ gboolean tf_two_rates_null_distribution (const TfAnalysis *analysis, TfNullDistr
 double tf_two_rates_null_ratio (const TfAnalysis *analysis);
 
 /* ln BF01, two-sided: H0 λA = ρ0 λ, λB = λ, λ ~ Gamma(shape, rate), against λA, λB
- * independent Gamma(shape, rate). Closed form in Loader's deviance form. */
+ * independent Gamma(shape, rate). Closed form, as a change of heterogeneities of
+ * Poisson samples in Loader's deviance terms; within 1e-9 (relative above 1) of mpmath
+ * for counts and shape up to 10^12, exposures and rate from 1e-6 to 10^12 and prior
+ * means up to 10^12. Counts may be real. */
 double tf_two_rates_log_bf01 (double ka, double ea, double kb, double eb, double rho0,
                               double shape, double rate);
 
