@@ -225,7 +225,7 @@ tf_one_rate_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
 
 /* The Bayes factor at a curve's point: the count at exposure f E is λ0 f E +
  * z √(λ0 f E) (a real count; the Bayes factor's formula takes one), floored at 0 where
- * the exposure is too small to reach the observed p-value. */
+ * the exposure is too small to reach the observed score statistic. */
 double
 tf_one_rate_log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
 {
@@ -234,7 +234,7 @@ tf_one_rate_log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
   return analysis_log_bf01 (a, at->shape, at->rate, k, e);
 }
 
-/* x = exposure from 1e-2 to 1e6 times the observed, the p-value held. */
+/* x = exposure from 1e-2 to 1e6 times the observed, the score statistic held. */
 gboolean
 tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
 {
@@ -245,8 +245,8 @@ tf_one_rate_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, cha
     return FALSE;
   double m = a->null_value * a->exposure;
   rate_tests (a->events, m, a->direction, &t);
-  tf_rates_sample_size (a, curve, tf_one_rate_log_bf01_at, t.lp_exact, a->events < m, a->exposure,
-                        _("exposure <i>E</i>"));
+  tf_rates_sample_size (a, curve, tf_one_rate_log_bf01_at, t.z, t.lp_score, a->exposure,
+                        _("exposure <i>E</i> (score <i>z</i> held)"));
   return TRUE;
 }
 

@@ -8,7 +8,6 @@
 
 #include <math.h>
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_cdf.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_sf_erf.h>
 
@@ -268,17 +267,11 @@ tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
  * Q(z) ≈ φ(z)/z (common practice). */
 void
 tf_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                      TfRatesLogBf01 log_bf01, double lp_exact, gboolean below,
+                      TfRatesLogBf01 log_bf01, double z, double lp_score,
                       double x_scale, const char *x_markup)
 {
   const TfAnalysis *a = analysis;
-  double lp = MIN (lp_exact, 0.0);
-  double pz = a->direction == TF_DIRECTION_TWO_SIDED ? lp - G_LN2 : lp;
-  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
-                         : gsl_cdf_ugaussian_Qinv (exp (pz));
 
-  if (a->direction == TF_DIRECTION_LESS || (a->direction == TF_DIRECTION_TWO_SIDED && below))
-    z = -z;
   if (!isfinite (z))
     z = 0.0;
   for (guint i = 0; i < curve->n; i++)
@@ -291,7 +284,7 @@ tf_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
     }
   curve->x_markup = g_strdup (x_markup);
   set_chosen (a, curve, log_bf01, x_scale);
-  curve->p_value = exp (lp);
+  curve->p_value = exp (MIN (lp_score, 0.0));
 }
 
 gboolean

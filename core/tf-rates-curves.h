@@ -91,11 +91,12 @@ double tf_two_rates_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint 
 gboolean tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
                                char **why_not);
 
-/* x = x_scale f for f from 1e-2 to 1e6, log-spaced; the counts hold the deviate of
- * the observed exact p-value (ln p = lp_exact; below: the observed count lies below
- * its null mean). A point null. */
+/* x = x_scale f for f from 1e-2 to 1e6, log-spaced; the counts hold the observed score
+ * statistic z (signed), so that at f = 1 they are the observed counts and the curve
+ * passes through the analysis's own Bayes factor. The p-value held is the score test's,
+ * ln p = lp_score. A point null. */
 void tf_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                           TfRatesLogBf01 log_bf01, double lp_exact, gboolean below,
+                           TfRatesLogBf01 log_bf01, double z, double lp_score,
                            double x_scale, const char *x_markup);
 
 typedef double (*TfRatesLogPmf) (double j, const double *param);

@@ -380,7 +380,7 @@ tf_two_rates_densities (const TfAnalysis *analysis, TfDensityCurves *curves)
 
 /* The Bayes factor at a curve's point: with the exposures times f the total is n f,
  * split as kA = n f π0 + z √(n f π0 (1 − π0)) (real counts, clipped to [0, n f] where
- * the total is too small to reach the observed p-value). */
+ * the total is too small to reach the observed score statistic). */
 double
 tf_two_rates_log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
 {
@@ -396,7 +396,7 @@ tf_two_rates_log_bf01_at (const TfAnalysis *a, const TfRatesPoint *at)
                             a->exposure_b * f);
 }
 
-/* x = the factor both exposures are scaled by, 1e-2 to 1e6, the p-value held. */
+/* x = the factor both exposures are scaled by, 1e-2 to 1e6, the score statistic held. */
 gboolean
 tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
 {
@@ -414,8 +414,8 @@ tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, ch
     }
   pi_of_ratio (tf_two_rates_null_ratio (a), a->exposure_a, a->exposure_b, &p0, &q0);
   split_tests (ka, n, p0, q0, a->direction, &t);
-  tf_rates_sample_size (a, curve, tf_two_rates_log_bf01_at, t.lp_exact, ka < n * p0, 1.0,
-                        _("exposures × <i>f</i> (both groups)"));
+  tf_rates_sample_size (a, curve, tf_two_rates_log_bf01_at, (ka - n * p0) / sqrt (n * p0 * q0),
+                        t.lp_score, 1.0, _("exposures × <i>f</i> (both groups; score <i>z</i> held)"));
   return TRUE;
 }
 

@@ -251,6 +251,22 @@ test_curves (void)
       g_assert_nonnull (n);
       for (guint j = 0; j < n->n; j++)
         g_assert_true (isfinite (n->log_bf01[j]));
+      /* 41 points put the observed exposure at the 11th (10^(−2 + 8·10/40) = 1): there
+       * the counts that hold the score statistic are the observed ones, so the curve
+       * passes through the analysis's own BF01 and P(null | data); the p-value held is
+       * the score test's */
+      {
+        g_autoptr (TfEvidenceCurve) n41 = tf_sample_size_curve_new (both[i], 41, NULL, NULL);
+        g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+        g_autoptr (TfResults) r = tf_analysis_compute (both[i], problems);
+
+        g_assert_nonnull (n41);
+        g_assert_nonnull (r);
+        assert_rel (n41->x[10], n41->chosen_x, 1e-12);
+        assert_rel (exp (n41->log_bf01[10]), get (r, "bf01"), 1e-10);
+        assert_rel (n41->posterior_null[10], get (r, "posterior_null"), 1e-10);
+        assert_rel (n41->p_value, get (r, "p_value_score"), 1e-12);
+      }
       g_autoptr (TfNullDistribution) d = tf_null_distribution_new (both[i], 100, NULL, NULL);
       g_assert_nonnull (d);
       g_assert_true (d->discrete);
