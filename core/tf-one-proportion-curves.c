@@ -10,7 +10,6 @@
 #include "tf-evidence.h"
 
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_cdf.h>
 
 static void
 set_chosen (const TfAnalysis *an, TfEvidenceCurve *curve)
@@ -43,22 +42,11 @@ tf_one_proportion_sensitivity (const TfAnalysis *an, TfEvidenceCurve *curve,
   return TRUE;
 }
 
-/* The normal deviate z of a p-value given as ln p, on the side of the data: Q⁻¹(p)
- * one-sided, Q⁻¹(p/2) two-sided; beyond GSL's range, the tail expansion
- * z ≈ √(−2 ln p − ln(−4π ln p)) (Abramowitz & Stegun 1964, 26.2.23's leading terms). */
-static double
-deviate_of_log_p (double lp, gboolean two_sided)
-{
-  double pz = MIN (lp, 0.0) - (two_sided ? G_LN2 : 0.0);
-  double z = pz < -700.0 ? sqrt (-2.0 * pz - log (-4.0 * G_PI * pz))
-                         : gsl_cdf_ugaussian_Qinv (exp (pz));
-  return isfinite (z) ? z : 0.0;
-}
-
-/* x = n from 1 to 10^12, log-spaced. The observed exact p-value is held by holding its
- * score deviate z: at n trials the count is k = nθ0 + z √(nθ0(1 − θ0)), a real count
- * (the Bayes factor's formula takes one), kept within [0, n] where n is too small to
- * reach that p-value. This is the curve on which BF01 grows like √n at a fixed p. */
+/* x = n from 1 to 10^12, log-spaced. The observed score statistic z is held: at n
+ * trials the count is k = nθ0 + z √(nθ0(1 − θ0)), a real count (the Bayes factor's
+ * formula takes one), kept within [0, n] where n is too small to reach that z. At the
+ * observed n this is the observed count, so the curve passes through the analysis's own
+ * Bayes factor; the p-value held is the score test's. BF01 grows like √n along it. */
 gboolean
 tf_one_proportion_sample_size (const TfAnalysis *an, TfEvidenceCurve *curve, char **why_not)
 {
@@ -71,10 +59,7 @@ tf_one_proportion_sample_size (const TfAnalysis *an, TfEvidenceCurve *curve, cha
       return FALSE;
     }
   tf_one_proportion_tests (an->successes, an->trials, t, an->direction, &tests);
-  double z = deviate_of_log_p (tests.lp_exact, an->direction == TF_DIRECTION_TWO_SIDED);
-  if (an->direction == TF_DIRECTION_LESS
-      || (an->direction == TF_DIRECTION_TWO_SIDED && tests.d < 0.0))
-    z = -z;
+  double z = isfinite (tests.z) ? tests.z : 0.0;
   /* The p-value can be held only where k = nθ0 + z·sqrt(nθ0(1 − θ0)) stays inside
    * [0, n], that is from n = z² max(θ0/(1 − θ0), (1 − θ0)/θ0); start at twice that, or
    * at the observed n if it is smaller, so the curve shows no clipping artefacts. */
@@ -91,10 +76,10 @@ tf_one_proportion_sample_size (const TfAnalysis *an, TfEvidenceCurve *curve, cha
       curve->posterior_null[i] = tf_posterior_null_from_log_bf01 (curve->log_bf01[i], an->prior_null);
     }
   curve->x_log = TRUE;
-  curve->x_markup = g_strdup (_("trials <i>n</i> (p-value held)"));
+  curve->x_markup = g_strdup (_("trials <i>n</i> (score <i>z</i> held)"));
   curve->chosen_x = an->trials;
   set_chosen (an, curve);
-  curve->p_value = exp (MIN (tests.lp_exact, 0.0));
+  curve->p_value = exp (MIN (tests.lp_score, 0.0));
   return TRUE;
 }
 

@@ -456,7 +456,21 @@ test_curves (void)
    * decades, within 1e-3 at n = 10^10..10^12) */
   g_autoptr (TfEvidenceCurve) n = tf_sample_size_curve_new (an, 241, NULL, NULL);
   g_assert_nonnull (n);
-  assert_rel (n->p_value, get (r, "p_value"), 1e-12);
+  assert_rel (n->p_value, get (r, "p_value_score"), 1e-12);
+  /* through the observed point: the score statistic held, the counts at the observed
+   * n are the observed ones, so the curve, interpolated in ln n through three of its
+   * grid points (0.05 decades apart; quadratic), meets the analysis's own ln BF01 there
+   * (within 1e-4: the quadratic's own error at n = 20 is about 1e-5) */
+  assert_rel (exp (n->chosen_log_bf01), get (r, "bf01"), 1e-12);
+  for (guint i = 1; i + 1 < n->n; i++)
+    if (n->x[i] <= 20.0 && n->x[i + 1] > 20.0)
+      {
+        double u = log (20.0), x0 = log (n->x[i - 1]), x1 = log (n->x[i]), x2 = log (n->x[i + 1]);
+        double at = n->log_bf01[i - 1] * (u - x1) * (u - x2) / ((x0 - x1) * (x0 - x2))
+                    + n->log_bf01[i] * (u - x0) * (u - x2) / ((x1 - x0) * (x1 - x2))
+                    + n->log_bf01[i + 1] * (u - x0) * (u - x1) / ((x2 - x0) * (x2 - x1));
+        g_assert_cmpfloat (fabs (at - log (get (r, "bf01"))), <, 1e-4);
+      }
   assert_rel (n->x[240], 1e12, 1e-12);
   {
     guint j = 0;  /* the grid point nearest 10^10 (the grid starts where p can be held) */
