@@ -166,25 +166,32 @@ log_bpser (double a, double b, double x, double y, double log_beta)
   return a * lx - log (a) - log_beta + log1p (a * sum);
 }
 
-/* The continued fraction for I_x(a, b) in terms of λ = a − (a + b) x, for x below
- * the mean, by the modified Lentz method (DiDonato & Morris 1992, "bfrac";
- * Lentz 1976; Thompson & Barnett 1986). Returns NAN when it does not converge. */
+/* The n-th partial numerator α and denominator β of the continued fraction below,
+ * given 1/(a + 2n − 1) and 1/(a + 2n + 1). */
+static inline void
+bfrac_terms (double a, double b, double x, double y, double lambda, int n, double inv_an,
+             double inv_an2, double *alpha, double *beta)
+{
+  double w = n * (b - n) * x;
+  *alpha = (a + n - 1.0) * (a + b + n - 1.0) * (inv_an * inv_an) * (w * x);
+  *beta = n + w * inv_an + (a + n) * inv_an2 * (lambda + 1.0 + n * (1.0 + y));
+}
+
+/* The same fraction by the modified Lentz method (Lentz 1976; Thompson & Barnett
+ * 1986), which survives a vanishing denominator; NAN when it does not converge. */
 static double
-log_bfrac (double a, double b, double x, double y, double lambda, double log_prefactor)
+bfrac_lentz (double a, double b, double x, double y, double lambda)
 {
   const double tiny = 1e-300;
   double f = a * (lambda + 1.0) / (a + 1.0);
   double C = f, D = 0.0;
-  gboolean converged = FALSE;
 
   if (f == 0.0)
     f = C = tiny;
   for (int n = 1; n <= 20000; n++)
     {
-      double an = a + 2.0 * n - 1.0;
-      double w = n * (b - n) * x;
-      double alpha = (a + n - 1.0) * (a + b + n - 1.0) / (an * an) * (w * x);
-      double beta = n + w / an + (a + n) / (an + 2.0) * (lambda + 1.0 + n * (1.0 + y));
+      double an = a + 2.0 * n - 1.0, alpha, beta;
+      bfrac_terms (a, b, x, y, lambda, n, 1.0 / an, 1.0 / (an + 2.0), &alpha, &beta);
       D = beta + alpha * D;
       if (D == 0.0)
         D = tiny;
@@ -195,12 +202,52 @@ log_bfrac (double a, double b, double x, double y, double lambda, double log_pre
       double delta = C * D;
       f *= delta;
       if (fabs (delta - 1.0) <= 1e-16)
+        return f;
+    }
+  return NAN;
+}
+
+/* The continued fraction for I_x(a, b) in terms of λ = a − (a + b) x, for x below
+ * the mean (DiDonato & Morris 1992, "bfrac"): f = β0 + α1/(β1 + α2/(β2 + ...)) by the
+ * Wallis recurrences A_n = β_n A_{n−1} + α_n A_{n−2}, B_n likewise, f = A_n / B_n,
+ * rescaled every fourth term (no division waits on the one before, unlike Lentz's
+ * form, which stands in when these fail). */
+static double
+log_bfrac (double a, double b, double x, double y, double lambda, double log_prefactor)
+{
+  double f = a * (lambda + 1.0) / (a + 1.0);
+  double A0 = 1.0, A1 = f, B0 = 0.0, B1 = 1.0;   /* A_{n−2}, A_{n−1}, B likewise */
+  double inv_an = 1.0 / (a + 1.0);
+  gboolean converged = FALSE;
+
+  for (int n = 1; n <= 20000 && f > 0.0; n++)
+    {
+      double inv_an2 = 1.0 / (a + 2.0 * n + 1.0), alpha, beta;
+      bfrac_terms (a, b, x, y, lambda, n, inv_an, inv_an2, &alpha, &beta);
+      inv_an = inv_an2;
+      double A2 = beta * A1 + alpha * A0, B2 = beta * B1 + alpha * B0;
+      A0 = A1;
+      A1 = A2;
+      B0 = B1;
+      B1 = B2;
+      if (n % 4 == 0)
         {
-          converged = TRUE;
-          break;
+          double s = 1.0 / B1, fn = A1 * s;
+          A0 *= s;
+          A1 = fn;
+          B0 *= s;
+          B1 = 1.0;
+          if (!isfinite (fn))
+            break;
+          converged = fabs (fn - f) <= 1e-16 * fabs (fn);
+          f = fn;
+          if (converged)
+            break;
         }
     }
   if (!converged || !(f > 0.0))
+    f = bfrac_lentz (a, b, x, y, lambda);
+  if (!(f > 0.0))
     return NAN;
   return log_prefactor - log (f);
 }
