@@ -162,42 +162,59 @@ find_peak (const Line *ln, double u0, double step, double *peak, double *width)
       da = db;
       db = t;
     }
-  /* now da >= 0 >= db on [ua, ub] */
-  double um = ua, dm = da, wa = 1.0, wb = 1.0;
-  for (int it = 0; it < 60; it++)
+  /* now da >= 0 >= db on [ua, ub]; Illinois steps, a bisection whenever a step left
+   * more than half the bracket, until the last two points put the peak within about
+   * a third of the local width */
+  double um = ua, dm = da, wa = 1.0, wb = 1.0, up = NAN, dp = NAN;
+  gboolean bisect = FALSE;
+  for (int it = 0; it < 100 && da != 0.0 && db != 0.0; it++)
     {
-      double k = (da - db) / (ub - ua);          /* −(ln g)'' across the bracket */
-      double wdt = k > 0.0 ? 1.0 / sqrt (k) : INFINITY;
-      if (da == 0.0 || db == 0.0 || (ub - ua) < 0.5 * wdt || fabs (dm) * wdt < 0.05)
-        break;
-      um = (ua * db * wa - ub * da * wb) / (db * wa - da * wb);
+      double span = ub - ua;
+      um = bisect ? 0.5 * (ua + ub) : (ua * db * wa - ub * da * wb) / (db * wa - da * wb);
       if (!(um > ua && um < ub))
         um = 0.5 * (ua + ub);
       g = line_log (ln, um, &dm);
       if (!isfinite (g) || !isfinite (dm))
         return FALSE;
       if (dm > 0.0)
-        {
-          ua = um, da = dm, wa = 1.0, wb *= 0.5;
-        }
+        ua = um, da = dm, wa = 1.0, wb *= 0.5;
       else
-        {
-          ub = um, db = dm, wb = 1.0, wa *= 0.5;
-        }
+        ub = um, db = dm, wb = 1.0, wa *= 0.5;
+      bisect = ub - ua > 0.5 * span;
+      double kl = isfinite (up) ? (dp - dm) / (um - up) : NAN;
+      if (kl > 0.0 && fabs (dm) / sqrt (kl) < 0.3)
+        break;
+      up = um;
+      dp = dm;
     }
   um = da == 0.0 ? ua : (db == 0.0 ? ub : um);
-  /* the width from the log-derivative a little to each side */
+  /* Newton steps with the curvature from the log-derivative a little to each side, until
+   * the step and the change of the width are small */
   double k0 = (da - db) / (ub - ua);
-  double h = isfinite (k0) && k0 > 0.0 ? 0.25 / sqrt (k0) : 0.25 * step;
-  double d1, d2;
-  if (!isfinite (line_log (ln, um - h, &d1)) || !isfinite (line_log (ln, um + h, &d2)))
-    return FALSE;
-  double k = (d1 - d2) / (2.0 * h);
-  if (!(k > 0.0) || !isfinite (k))
-    return FALSE;
-  *peak = um;
-  *width = 1.0 / sqrt (k);
-  return TRUE;
+  double wdt = isfinite (k0) && k0 > 0.0 ? 1.0 / sqrt (k0) : step;
+  for (int it = 0; it < 12; it++)
+    {
+      double h = 0.1 * wdt, d1, d2;
+      if (!isfinite (line_log (ln, um - h, &d1)) || !isfinite (line_log (ln, um + h, &d2)))
+        return FALSE;
+      double k = (d1 - d2) / (2.0 * h);
+      if (!(k > 0.0) || !isfinite (k))
+        return FALSE;
+      double w_new = 1.0 / sqrt (k), delta = dm / k;
+      gboolean settled = fabs (delta) < 0.1 * w_new && fabs (w_new - wdt) < 0.2 * wdt;
+      wdt = w_new;
+      if (settled)
+        {
+          *peak = um;
+          *width = wdt;
+          return TRUE;
+        }
+      um = CLAMP (um + delta, ua, ub);
+      g = line_log (ln, um, &dm);
+      if (!isfinite (g) || !isfinite (dm))
+        return FALSE;
+    }
+  return FALSE;
 }
 
 /* ln ∫ g(u) du by the trapezoidal rule centred on the peak, FALSE when it did not
