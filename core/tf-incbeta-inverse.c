@@ -16,7 +16,8 @@
 #include <float.h>
 #include <gsl/gsl_cdf.h>
 
-/* ln of the smallest subnormal is −744.44: below this t the quantile is 0. */
+/* The lowest t tried: e^−744 is a few times the smallest subnormal (e^−744.44); a
+ * quantile below it is returned as 0 (or 1). */
 #define T_MIN (-744.0)
 
 /* The standard normal z with ln Φ(z) = lp <= −ln 2: GSL's quantile (Wichura 1988,
