@@ -75,6 +75,14 @@ sum_outward (const TfHyper *h, double x0, int step)
   return l0 + log (s);
 }
 
+/* The same rounded into [0, 1] (the sum is computed once: MIN would evaluate it twice). */
+static double
+sum_outward_clamped (const TfHyper *h, double x0, int step)
+{
+  double l = sum_outward (h, x0, step);
+  return MIN (l, 0.0);
+}
+
 double
 tf_hyper_log_cdf (const TfHyper *h, double x)
 {
@@ -84,9 +92,9 @@ tf_hyper_log_cdf (const TfHyper *h, double x)
   if (x >= h->hi)
     return 0.0;
   if (x < h->mode)
-    return MIN (sum_outward (h, x, -1), 0.0);
+    return sum_outward_clamped (h, x, -1);
   /* the upper tail beyond x is the smaller side */
-  return tf_log1mexp (MIN (sum_outward (h, x + 1.0, +1), 0.0));
+  return tf_log1mexp (sum_outward_clamped (h, x + 1.0, +1));
 }
 
 double
@@ -98,8 +106,8 @@ tf_hyper_log_sf (const TfHyper *h, double x)
   if (x <= h->lo)
     return 0.0;
   if (x > h->mode)
-    return MIN (sum_outward (h, x, +1), 0.0);
-  return tf_log1mexp (MIN (sum_outward (h, x - 1.0, -1), 0.0));
+    return sum_outward_clamped (h, x, +1);
+  return tf_log1mexp (sum_outward_clamped (h, x - 1.0, -1));
 }
 
 /* Bisection on the monotone side of the mode for the outcome nearest the mode whose
