@@ -7,17 +7,20 @@
  * the density ∫ f_A(z) f_B(z − d) dz, or the same over θB, whichever is the narrower
  * (the integration variable V; the other is O, at w = v − c with c = d over θA and
  * c = −d over θB). Outside the v where 0 < w < 1 the tail factor is 0 or 1, and that
- * part is V's own tail, one incomplete beta. Inside, v runs over (max(0, c), min(1, 1 + c))
- * and is mapped to the real line by a logistic, u ↦ max(0, c) + (1 − |c|) σ(u), which
- * turns the algebraic behaviour at both ends (shapes, and the tail factor at w = 0, 1)
- * into exponential decay; the integrand is then analytic and, for posteriors, close to
- * a Gaussian in u. It is integrated by the trapezoidal rule on the whole line (exponentially
- * convergent for analytic integrands, Trefethen & Weideman 2014), centred on the
- * integrand's peak (found from its log-derivative), with a step from the peak's curvature,
- * walking out until the terms fall below 1e-5 of the tolerance, and halving the step
- * until two successive sums agree to 10 times the tolerance (1e-10). Where that does not happen (shapes far below
- * 1 whose mass sits below the smallest double, or a step budget exceeded) the adaptive
- * piecewise integration of tf-beta-difference-pieces.c is used instead.
+ * part is V's own tail, one incomplete beta. Inside, v runs over (max(0, c),
+ * min(1, 1 + c)) and is mapped to the real line by a logistic, v = max(0, c) +
+ * (1 − |c|) σ(u), which turns the algebraic behaviour at both ends (the shapes, and the
+ * tail factor at w = 0, 1) into exponential decay; the integrand is then analytic and,
+ * for posteriors, close to a Gaussian in u. It is integrated by the trapezoidal rule on
+ * the whole line (exponentially convergent for analytic integrands, Trefethen &
+ * Weideman 2014), centred on the integrand's peak (found from its log-derivative), with
+ * a step from the peak's curvature, walking out until the terms fall below 1e-5 of the
+ * tolerance, and halving the step until two successive sums agree to 10 times the
+ * tolerance (1e-10). Where that does not settle over the narrower variable (a shape
+ * far below 1 decays slowly on the line) it is tried over the other; where neither
+ * does (both shapes at the same end far below 1, mass below the smallest double), the
+ * adaptive piecewise integration of tf-beta-difference-pieces.c is used instead.
+ * TF_BETA_DIFF_PIECES set in the environment forces the latter (for comparisons).
  *
  * Quantiles are found by Newton's method on the log tail, safeguarded by bisection,
  * from the Cornish–Fisher approximation: each step is one tail and one density.
@@ -55,6 +58,7 @@ tf_beta_diff_init (TfBetaDiff *bd, double pa, double qa, double pb, double qb)
   bd->epsrel = 1e-10;
   bd->have_cuts = FALSE;
   bd->n_cuts = 0;
+  bd->pieces_only = g_getenv ("TF_BETA_DIFF_PIECES") != NULL;
 }
 
 /* The integrand on the line: V's shapes, O's shapes, the map and what to integrate. */
@@ -140,8 +144,9 @@ line_log (const Line *ln, double u, double *dlog)
 }
 
 /* The peak of the integrand on the line and its width (1 / √ −(ln g)''): a bracket on
- * the log-derivative by doubling steps, then regula falsi (Illinois variant, Dowell &
- * Jarratt 1971) until the point is within a fraction of a width of the peak. */
+ * the log-derivative by doubling steps, regula falsi (Illinois variant, Dowell &
+ * Jarratt 1971) with bisection until the point is within a fraction of a width of the
+ * peak, then Newton steps with the curvature from central differences. */
 static gboolean
 find_peak (const Line *ln, double u0, double step, double *peak, double *width)
 {
@@ -378,7 +383,8 @@ integrate_line (const TfBetaDiff *bd, gboolean over_a, double d, TfBdKind kind, 
   double u0 = log (s0) - log1p (-s0);
   double step = sv / (ln.len * s0 * (1.0 - s0));
   step = CLAMP (step, 1e-9, 4.0);
-  if (!find_peak (&ln, u0, step, &peak, &width) || !trapezoid (&ln, peak, width, bd->epsrel, &inside))
+  if (!find_peak (&ln, u0, step, &peak, &width)
+      || !trapezoid (&ln, peak, width, bd->epsrel, &inside))
     return FALSE;
   *result = tf_log_add (outside, inside);
   return isfinite (*result) || *result == -INFINITY;
@@ -392,7 +398,7 @@ integrate (TfBetaDiff *bd, double d, TfBdKind kind, gboolean *ok)
 {
   double r;
   *ok = TRUE;
-  if (g_getenv ("TF_BETA_DIFF_PIECES") == NULL
+  if (!bd->pieces_only
       && (integrate_line (bd, bd->over_a, d, kind, &r)
           || integrate_line (bd, !bd->over_a, d, kind, &r)))
     return r;
@@ -459,11 +465,12 @@ beta_mu3 (double p, double q)
  * ± f(x) / P, kept inside a bracket that every step narrows; bisection where a Newton
  * step leaves it. Starts from the Cornish–Fisher approximation with the skewness
  * (Cornish & Fisher 1937), else the normal one. Once the log tail is within 1e-6 of
- * its target, the next Newton step is within about 1e-12 and is returned unchecked. */
+ * its target, the next Newton step is within about 1e-12 and is returned unchecked.
+ * Where the fixed rule cannot give the density, a secant step is taken instead. */
 double
 tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower)
 {
-  double lo = -1.0, hi = 1.0, x;
+  double lo = -1.0, hi = 1.0, x, xp = NAN, ltp = NAN;
   gboolean ok;
 
   if (!(log_p < 0.0))
@@ -489,13 +496,22 @@ tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower)
         lo = x;
       else
         hi = x;
-      double ld = tf_beta_diff_log_density (bd, x);
-      double slope = (lower ? 1.0 : -1.0) * exp (ld - lt);
+      /* the density by the fixed rule only; where it does not settle, the secant
+       * through the previous point stands in for it */
+      double ld, slope;
+      gboolean exact = integrate_line (bd, bd->over_a, x, TF_BD_DENSITY, &ld)
+                       || integrate_line (bd, !bd->over_a, x, TF_BD_DENSITY, &ld);
+      if (exact)
+        slope = (lower ? 1.0 : -1.0) * exp (ld - lt);
+      else
+        slope = isfinite (xp) ? (lt - ltp) / (x - xp) : NAN;
+      xp = x;
+      ltp = lt;
       double next = x - f / slope;
       gboolean newton = next > lo && next < hi;
       if (!newton)
         next = 0.5 * (lo + hi);
-      if (newton && fabs (f) <= 1e-6)
+      if (newton && exact && fabs (f) <= 1e-6)
         return next;
       if (next == x || hi - lo <= 4.0 * DBL_EPSILON * MAX (fabs (lo), fabs (hi)))
         return next;

@@ -15,6 +15,7 @@ typedef struct {
   gboolean over_a;              /* integrate over θA (the narrower) rather than θB */
   double mean, sd;              /* of Δ */
   double epsrel;                /* relative tolerance of the integrals, 1e-10 unless set */
+  gboolean pieces_only;         /* TF_BETA_DIFF_PIECES is set: the adaptive rule only */
   /* For the slower, robust integration only, filled on its first use: quantiles of the
    * integration variable at fixed tail levels, and ln of the mass of the integration
    * variable's distribution between successive ones. */

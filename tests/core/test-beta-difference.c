@@ -79,7 +79,7 @@ test_tiny_shape (void)
 /* The tail at the returned quantile is the level asked for, and the density is the
  * derivative of the tail (a central difference, internal consistency). */
 static void
-check_quantile (double pa, double qa, double pb, double qb, double log_p)
+check_quantile (double pa, double qa, double pb, double qb, double log_p, gboolean density)
 {
   TfBetaDiff bd;
   double l, u, l1, u1;
@@ -91,6 +91,8 @@ check_quantile (double pa, double qa, double pb, double qb, double log_p)
       g_assert_true (tf_beta_diff_log_cdf (&bd, q, &l, &u));
       assert_log (lower ? l : u, log_p, 1e-9);
     }
+  if (!density)
+    return;
   double q = tf_beta_diff_quantile_log (&bd, log (0.3), TRUE), h = 1e-4 * bd.sd;
   g_assert_true (tf_beta_diff_log_cdf (&bd, q - h, &l, &u));
   g_assert_true (tf_beta_diff_log_cdf (&bd, q + h, &l1, &u1));
@@ -100,12 +102,15 @@ check_quantile (double pa, double qa, double pb, double qb, double log_p)
 static void
 test_quantiles (void)
 {
-  check_quantile (57, 15, 49, 33, log (0.025));
-  check_quantile (6, 52, 1, 30, log (0.025));
-  check_quantile (300501, 699501, 300001, 700001, log (1e-6));
-  check_quantile (500030001, 499970001, 500000001, 500000001, log (0.025));
-  check_quantile (1.5, 5, 8290759.5, 798168, -11.09922459321729);
-  check_quantile (57, 15, 49, 33, -700.0);
+  check_quantile (57, 15, 49, 33, log (0.025), TRUE);
+  check_quantile (6, 52, 1, 30, log (0.025), TRUE);
+  check_quantile (300501, 699501, 300001, 700001, log (1e-6), TRUE);
+  check_quantile (500030001, 499970001, 500000001, 500000001, log (0.025), TRUE);
+  check_quantile (1.5, 5, 8290759.5, 798168, -11.09922459321729, TRUE);
+  check_quantile (57, 15, 49, 33, -700.0, TRUE);
+  /* a prior shape of 0.01 and no successes in A: the quantiles by secant steps (the
+   * density there is left to the adaptive rule, which is not accurate for it yet) */
+  check_quantile (0.01, 10.01, 3.01, 17.01, log (0.025), FALSE);
 }
 
 int
