@@ -44,7 +44,7 @@ tf_means_densities (const TfAnalysis *analysis, const TfMeansStats *s, TfDensity
 
   /* likelihood scaled to integrate to 1: with a flat prior its mass is the posterior's
    * normaliser; on the grid by Simpson's rule over the same range */
-  double lmax = tf_delta_log_likelihood (s->t_delta, s->n_eff, s->df_delta, s->t_delta / sqrt (s->n_eff));
+  double lmax = tf_delta_posterior_log_likelihood (post, s->t_delta / sqrt (s->n_eff));
   double lsum = 0.0;
   for (guint i = 0; i < np; i++)
     {
@@ -52,7 +52,7 @@ tf_means_densities (const TfAnalysis *analysis, const TfMeansStats *s, TfDensity
       curves->x[i] = x;
       curves->prior[i] = finite_or_max (exp (tf_delta_log_prior (&prior, x)));
       curves->posterior[i] = finite_or_max (tf_delta_posterior_density (post, x));
-      double l = exp (tf_delta_log_likelihood (s->t_delta, s->n_eff, s->df_delta, x) - lmax);
+      double l = exp (tf_delta_posterior_log_likelihood (post, x) - lmax);
       curves->likelihood[i] = isfinite (l) ? l : 0.0;
       lsum += curves->likelihood[i] * ((i == 0 || i + 1 == np) ? 0.5 : 1.0);
     }

@@ -92,6 +92,58 @@ tf_means_validate_common (const TfAnalysis *analysis, GPtrArray *problems)
     }
 }
 
+void
+tf_delta_prior_from_analysis (const TfAnalysis *analysis, TfDeltaPrior *prior)
+{
+  prior->prior = analysis->prior == TF_PRIOR_NORMAL ? TF_PRIOR_NORMAL : TF_PRIOR_CAUCHY;
+  prior->r = analysis->prior_scale;
+  prior->direction = analysis->direction;
+  prior->interval = analysis->null_kind == TF_NULL_INTERVAL;
+  prior->low = analysis->null_low;
+  prior->high = analysis->null_high;
+}
+
+/* ln of the prior mass of δ on [a, b]: Cauchy or normal distribution function. */
+static double
+log_prior_mass (const TfDeltaPrior *prior, double a, double b)
+{
+  double ua = a / prior->r, ub = b / prior->r;
+  if (prior->prior == TF_PRIOR_NORMAL)
+    {
+      /* on the side where the tails are small */
+      if (ua >= 0.0)
+        return log (0.5 * erfc (ua / G_SQRT2) - 0.5 * erfc (ub / G_SQRT2));
+      if (ub <= 0.0)
+        return log (0.5 * erfc (-ub / G_SQRT2) - 0.5 * erfc (-ua / G_SQRT2));
+      return log1p (-0.5 * erfc (-ua / G_SQRT2) - 0.5 * erfc (ub / G_SQRT2));
+    }
+  return log ((atan (ub) - atan (ua)) / G_PI);
+}
+
+double
+tf_means_log_bf01 (const TfDeltaPrior *prior, double t, double n_eff, double df)
+{
+  if (!prior->interval && prior->direction == TF_DIRECTION_TWO_SIDED)
+    return prior->prior == TF_PRIOR_NORMAL ? -tf_normal_prior_log_bf10 (t, n_eff, df, prior->r)
+                                           : -tf_jzs_log_bf10 (t, n_eff, df, prior->r);
+  if (!prior->interval)
+    {
+      int side = prior->direction == TF_DIRECTION_GREATER ? 1 : -1;
+      return prior->prior == TF_PRIOR_NORMAL
+             ? -tf_normal_prior_log_bf_one_sided (t, n_eff, df, prior->r, side)
+             : -tf_jzs_log_bf_one_sided (t, n_eff, df, prior->r, side);
+    }
+  /* Interval null (Morey & Rouder 2011): both hypotheses truncate the same prior,
+   * BF01 = [P(I | y) / P(I)] / [P(out | y) / P(out)]. */
+  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (prior, t, n_eff, df);
+  double in = tf_delta_posterior_log_mass (post, prior->low, prior->high);
+  double out = tf_log_add (tf_delta_posterior_log_mass (post, -INFINITY, prior->low),
+                           tf_delta_posterior_log_mass (post, prior->high, INFINITY));
+  double pin = log_prior_mass (prior, prior->low, prior->high);
+  double pout = tf_log1mexp (pin);
+  return in - pin - out + pout;
+}
+
 /* P(T >= t) for t >= 0: ½ I_x(ν/2, ½), x = ν/(ν + t²), 1 − x = t²/(ν + t²) given
  * separately (Abramowitz & Stegun 1964, 26.5.27); the normal tail by erfc. */
 static double

@@ -101,6 +101,8 @@ double tf_delta_posterior_width (TfDeltaPosterior *post);
 double tf_delta_posterior_quantile (TfDeltaPosterior *post, double u, double a, double b);
 void tf_delta_posterior_hdi (TfDeltaPosterior *post, double level, double a, double b,
                              double *lo, double *hi);
+/* ln likelihood of δ up to a constant, from the posterior's table where it holds. */
+double tf_delta_posterior_log_likelihood (TfDeltaPosterior *post, double delta);
 /* ln prior density of δ and ln likelihood of δ (up to a constant). */
 double tf_delta_log_prior (const TfDeltaPrior *prior, double delta);
 double tf_delta_log_likelihood (double t, double n_eff, double df, double delta);

@@ -31,14 +31,25 @@ beta_inc (double a, double b, double x)
   return r.val;
 }
 
+/* ln of g(a) = x^a (1 − x)^b / (a B(a, b)), the step of I_x(a + 1, b) = I_x(a, b) − g(a)
+ * (Abramowitz & Stegun 1964, 26.5.16); ln x and ln(1 − x) given. */
+static double
+log_beta_step (double a, double b, double lx, double l1x)
+{
+  return a * lx + b * l1x - log (a) - gsl_sf_lnbeta (a, b);
+}
+
 /* P(T <= t) for t >= 0 (Lenth 1989, AS 243): Φ(−λ) + ½ Σ_j [p_j I_x(j + ½, ν/2)
  * + q_j I_x(j + 1, ν/2)], x = t²/(t² + ν), p_j and q_j Poisson(λ²/2) weights, summed
  * forward and backward from j = ⌊λ²/2⌋ (Benton & Krishnamoorthy 2003) until the
- * remaining weight bounds the error below 1e-15. */
+ * remaining weight bounds the error below 1e-15. The two I_x at the start are GSL's,
+ * the others by the recurrence in a: forward it subtracts g(a) from a value that
+ * only falls (absolute error a few ulps a step), backward it adds. */
 static double
 nct_cdf_nonneg (double t, double df, double ncp)
 {
-  double x = t * t / (t * t + df);
+  double s = t * t + df, x = t * t / s;
+  double lx = log (x), l1x = log (df / s);
   double lam = 0.5 * ncp * ncp;
   double half_b = 0.5 * df;
   double sum = 0.0;
@@ -54,32 +65,44 @@ nct_cdf_nonneg (double t, double df, double ncp)
   /* q_k = λ/√2 · e^(−λ²/2) (λ²/2)^k / Γ(k + 3/2), with the sign of λ */
   double qk = copysign (exp (-lam + k * log (lam) + log (fabs (ncp)) - 0.5 * M_LN2
                              - gsl_sf_lngamma (k + 1.5)), ncp);
-  double p = pk, q = qk;
+  double ip_k = beta_inc (k + 0.5, half_b, x), iq_k = beta_inc (k + 1.0, half_b, x);
+  double gp_k = exp (log_beta_step (k + 0.5, half_b, lx, l1x));
+  double gq_k = exp (log_beta_step (k + 1.0, half_b, lx, l1x));
+  double p = pk, q = qk, ip = ip_k, iq = iq_k, gp = gp_k, gq = gq_k;
   double cp_rest = 1.0, wsum = 0.0;
 
-  /* backward */
+  /* backward: I_x(a − 1, b) = I_x(a, b) + g(a − 1), g(a − 1) = g(a) a / (x (a − 1 + b)) */
   for (double j = k; j >= 0.0; j--)
     {
-      double pj = p, qj = q;
-      double ipj = beta_inc (j + 0.5, half_b, x), iqj = beta_inc (j + 1.0, half_b, x);
-      sum += pj * ipj + qj * iqj;
-      wsum += pj;
-      if (pj * ipj + fabs (qj) * iqj < 1e-17 * fabs (sum) && k - j > 3.0)
+      sum += p * ip + q * iq;
+      wsum += p;
+      if (p * ip + fabs (q) * iq < 1e-17 * fabs (sum) && k - j > 3.0)
+        break;
+      if (j == 0.0)
         break;
       p *= j / lam;
       q *= (j + 0.5) / lam;
-      if (j == 0.0)
-        break;
+      gp *= (j + 0.5) / (x * (j - 0.5 + half_b));
+      gq *= (j + 1.0) / (x * (j + half_b));
+      ip += gp;
+      iq += gq;
     }
-  /* forward */
+  /* forward: I_x(a + 1, b) = I_x(a, b) − g(a), g(a + 1) = g(a) x (a + b) / (a + 1) */
   p = pk;
   q = qk;
+  ip = ip_k;
+  iq = iq_k;
+  gp = gp_k;
+  gq = gq_k;
   for (double j = k + 1.0; ; j++)
     {
       p *= lam / j;
       q *= lam / (j + 0.5);
-      double ipj = beta_inc (j + 0.5, half_b, x), iqj = beta_inc (j + 1.0, half_b, x);
-      double term = p * ipj + q * iqj;
+      ip = MAX (ip - gp, 0.0);
+      iq = MAX (iq - gq, 0.0);
+      gp *= x * (j - 0.5 + half_b) / (j + 0.5);
+      gq *= x * (j + half_b) / (j + 1.0);
+      double term = p * ip + q * iq;
       sum += term;
       wsum += p;
       cp_rest = 1.0 - wsum;
@@ -120,12 +143,6 @@ log1p_minus (double e)
   return -e * e / (2.0 + e) + 2.0 * z * z2 * p;
 }
 
-static double
-softplus (double u)
-{
-  return u > 40.0 ? u : log1p (exp (u));
-}
-
 #define TRAP_STEP 0.6           /* in the softplus variable, where the bulk's sd is ≥ 1 */
 #define TRAP_STOP -38.0         /* ln of the last term kept, relative to the mode's */
 
@@ -137,26 +154,42 @@ softplus (double u)
  * line: the trapezoidal rule with step 0.6 then has an error near e^(−2π·2.5/0.6)
  * (Trefethen & Weideman 2014); measured within 2e-12 of QUADPACK (QAG at 1e-12) for
  * ν from 0.5 to 10^3, and within 1e-13 of mpmath's hypergeometric form at ν = 10^5
- * and 10^8. The exponent is ν (ln(1 + ε) − ε) − (y − y0)²/2 with
- * ε = (y − y0)/y0, free of the cancellation of its two terms of order ν. */
+ * and 10^8. The exponent is ν (ln(1 + ε) − ε) − (y − y0)²/2 + ln(dy/dv) with
+ * ε = (y − y0)/y0, free of the cancellation of its two terms of order ν; e^v is
+ * stepped by products along the nodes, so a node costs one log1p and one exp. */
 static double
 log_hermite_ratio (double nu, double y0, double sigma)
 {
   const double h = TRAP_STEP, q = y0 / sigma;
-  double u0 = q > 40.0 ? q : log (expm1 (q));
+  const gboolean linear = q > 40.0;           /* ln(1 + e^v) = v to double precision */
+  double u0 = linear ? q : log (expm1 (q));
   double sum = 0.0;
 
   for (int dir = -1; dir <= 1; dir += 2)
-    for (int k = dir == -1 ? 0 : 1; k < 100000; k++)
-      {
-        double v = u0 + dir * k * h;
-        double dy = v > 40.0 && u0 > 40.0 ? sigma * (v - u0) : sigma * (softplus (v) - q);
-        double l = nu * log1p_minus (dy / y0) - 0.5 * dy * dy
-                   - (v > 40.0 ? 0.0 : log1p (exp (-v)));      /* dy/dv = σ / (1 + e^−v) */
-        sum += exp (l);
-        if (!(l >= TRAP_STOP))
-          break;
-      }
+    {
+      double step = linear ? 1.0 : exp (dir * h), ev = linear ? 0.0 : exp (u0);
+      for (int k = dir == -1 ? 0 : 1; k < 100000; k++)
+        {
+          double v = u0 + dir * k * h, dy, ljac;
+          if (k > 0)
+            ev *= step;
+          if (linear && v > 40.0)
+            {
+              dy = sigma * (v - u0);
+              ljac = 0.0;
+            }
+          else
+            {
+              double sp = v > 40.0 ? v : log1p (linear ? exp (v) : ev);   /* softplus */
+              dy = sigma * (sp - q);
+              ljac = v - sp;                  /* ln of dy/dv = σ e^v / (1 + e^v), less ln σ */
+            }
+          double l = nu * log1p_minus (dy / y0) - 0.5 * dy * dy + ljac;
+          sum += exp (l);
+          if (!(l >= TRAP_STOP))
+            break;
+        }
+    }
   return log (sigma * h * sum);
 }
 
@@ -211,17 +244,29 @@ tf_nct_ncp_for_cdf (double t, double df, double p)
 {
   NcpParams par = { t, df, p };
   gsl_function f = { ncp_root, &par };
-  /* The cdf falls as λ grows. Bracket around t, widening by the spread of T. */
-  double spread = 1.0 + fabs (t) / sqrt (2.0 * df) + 1.0;
-  double lo = t - 10.0 * spread, hi = t + 10.0 * spread;
-  int tries = 0;
-
-  while (ncp_root (lo, &par) < 0.0 && tries++ < 60)
-    lo -= 10.0 * spread * (1 << MIN (tries, 20));
-  tries = 0;
-  while (ncp_root (hi, &par) > 0.0 && tries++ < 60)
-    hi += 10.0 * spread * (1 << MIN (tries, 20));
-  if (!(ncp_root (lo, &par) >= 0.0 && ncp_root (hi, &par) <= 0.0))
+  /* The cdf falls as λ grows. Bracket around the large-ν value λ ≈ t − z_p √(1 + t²/(2ν))
+   * (Johnson & Welch 1940), widening by the spread of T, doubling each time. */
+  double spread = sqrt (1.0 + t * t / (2.0 * df));
+  double guess = t - gsl_cdf_ugaussian_Pinv (p) * spread;
+  if (!isfinite (guess))
+    guess = t;
+  double lo = guess - spread, hi = guess + spread;
+  double flo = ncp_root (lo, &par), fhi = ncp_root (hi, &par);
+  for (int tries = 0; flo < 0.0 && tries < 80; tries++)
+    {
+      hi = lo;
+      fhi = flo;
+      lo -= spread * (1 << MIN (tries + 1, 40));
+      flo = ncp_root (lo, &par);
+    }
+  for (int tries = 0; fhi > 0.0 && tries < 80; tries++)
+    {
+      lo = hi;
+      flo = fhi;
+      hi += spread * (1 << MIN (tries + 1, 40));
+      fhi = ncp_root (hi, &par);
+    }
+  if (!(flo >= 0.0 && fhi <= 0.0))
     return NAN;
 
   /* Brent (1973) */

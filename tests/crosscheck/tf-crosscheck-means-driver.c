@@ -12,6 +12,10 @@
  *   side t n_eff df r         ln P(δ > 0 | data) under the Cauchy prior
  *   jzsside t n_eff df r s    ln BF±0, Cauchy prior truncated to the side s = 1 or −1
  *   normalside t n_eff df r s ln BF±0, normal prior truncated to the side
+ *   post t n_eff df r k       the posterior of δ under the prior k (0 Cauchy, 1 normal),
+ *     dir level                 truncated to the side dir (0 none, 1 δ > 0, 2 δ < 0): the
+ *                               equal-tailed and highest-density limits of mass level and
+ *                               P(δ > 0) of the untruncated posterior, five numbers
  */
 #include <stdio.h>
 #include <string.h>
@@ -27,13 +31,13 @@ int
 main (void)
 {
   char line[512], what[32];
-  double v[5] = { 0 };
+  double v[7] = { 0 };
 
   gsl_set_error_handler_off ();
   while (fgets (line, sizeof line, stdin) != NULL)
     {
-      int got = sscanf (line, "%31s %lf %lf %lf %lf %lf", what, &v[0], &v[1], &v[2], &v[3],
-                        &v[4]);
+      int got = sscanf (line, "%31s %lf %lf %lf %lf %lf %lf %lf", what, &v[0], &v[1], &v[2],
+                        &v[3], &v[4], &v[5], &v[6]);
       if (got < 4)
         {
           printf ("nan\n");
@@ -62,6 +66,18 @@ main (void)
           TfDeltaPrior prior = { .prior = TF_PRIOR_CAUCHY, .r = v[3] };
           g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&prior, v[0], v[1], v[2]);
           printf ("%.17g\n", tf_delta_posterior_log_mass (post, 0.0, INFINITY));
+        }
+      else if (strcmp (what, "post") == 0)
+        {
+          TfDeltaPrior prior = { .prior = v[4] == 1.0 ? TF_PRIOR_NORMAL : TF_PRIOR_CAUCHY,
+                                 .r = v[3] };
+          double a = v[5] == 1.0 ? 0.0 : -INFINITY, b = v[5] == 2.0 ? 0.0 : INFINITY;
+          double lo, hi, level = v[6];
+          g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&prior, v[0], v[1], v[2]);
+          printf ("%.17g %.17g ", tf_delta_posterior_quantile (post, 0.5 * (1.0 - level), a, b),
+                  tf_delta_posterior_quantile (post, 0.5 * (1.0 + level), a, b));
+          tf_delta_posterior_hdi (post, level, a, b, &lo, &hi);
+          printf ("%.17g %.17g %.17g\n", lo, hi, exp (tf_delta_posterior_log_mass (post, 0.0, INFINITY)));
         }
       else
         printf ("nan\n");
