@@ -471,6 +471,7 @@ double
 tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower)
 {
   double lo = -1.0, hi = 1.0, x, xp = NAN, ltp = NAN;
+  double f_lo = NAN, s_lo = NAN, f_hi = NAN, s_hi = NAN;
   gboolean ok;
 
   if (!(log_p < 0.0))
@@ -482,6 +483,11 @@ tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower)
   x = bd->mean + bd->sd * (z + (z * z - 1.0) * gamma / 6.0);
   if (!(x > lo && x < hi) || !(fabs (gamma) < 1.0))
     x = bd->mean + bd->sd * z;
+  /* an approximation beyond ±1: halfway from the mean to that end */
+  if (x >= hi)
+    x = bd->mean + 0.5 * (hi - bd->mean);
+  else if (x <= lo)
+    x = bd->mean - 0.5 * (bd->mean - lo);
   if (!(x > lo && x < hi))
     x = 0.5 * (lo + hi);
   for (int it = 0; it < 200; it++)
@@ -492,10 +498,6 @@ tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower)
       double f = lt - log_p;            /* decreasing in x for the upper tail */
       if (fabs (f) <= 1e-12)
         return x;
-      if ((f < 0.0) == lower)
-        lo = x;
-      else
-        hi = x;
       /* the density by the fixed rule only; where it does not settle, the secant
        * through the previous point stands in for it */
       double ld, slope;
@@ -507,9 +509,20 @@ tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower)
         slope = isfinite (xp) ? (lt - ltp) / (x - xp) : NAN;
       xp = x;
       ltp = lt;
+      if ((f < 0.0) == lower)
+        lo = x, f_lo = f, s_lo = slope;
+      else
+        hi = x, f_hi = f, s_hi = slope;
       double next = x - f / slope;
+      if (exact && fabs (next - x) <= 2.0 * DBL_EPSILON * fabs (x))
+        return x;               /* within the resolution of a double */
       gboolean newton = next > lo && next < hi;
-      if (!newton)
+      /* the log tail is concave: a Newton step from one side overshoots the root, and
+       * the step from the bracket's other end (where one was taken) does not */
+      double other = (f < 0.0) == lower ? hi - f_hi / s_hi : lo - f_lo / s_lo;
+      if (!newton && other > lo && other < hi)
+        next = other;
+      else if (!newton)
         next = 0.5 * (lo + hi);
       if (newton && exact && fabs (f) <= 1e-6)
         return next;
