@@ -43,16 +43,19 @@ tf_means_densities (const TfAnalysis *analysis, const TfMeansStats *s, TfDensity
   curves->posterior_narrow = w < 2.0 * step;
 
   /* likelihood scaled to integrate to 1: with a flat prior its mass is the posterior's
-   * normaliser; on the grid by Simpson's rule over the same range */
-  double lmax = tf_delta_posterior_log_likelihood (post, s->t_delta / sqrt (s->n_eff));
+   * normaliser; on the grid by Simpson's rule over the same range. It is the posterior
+   * over the prior, up to a constant. */
+  double d = s->t_delta / sqrt (s->n_eff);
+  double lmax = tf_delta_posterior_log_density (post, d) - tf_delta_log_prior (&prior, d);
   double lsum = 0.0;
   for (guint i = 0; i < np; i++)
     {
       double x = i + 1 == np ? hi : lo + i * step;
       curves->x[i] = x;
       curves->prior[i] = finite_or_max (exp (tf_delta_log_prior (&prior, x)));
-      curves->posterior[i] = finite_or_max (tf_delta_posterior_density (post, x));
-      double l = exp (tf_delta_posterior_log_likelihood (post, x) - lmax);
+      double ld = tf_delta_posterior_log_density (post, x);
+      curves->posterior[i] = finite_or_max (exp (ld));
+      double l = exp (ld - tf_delta_log_prior (&prior, x) - lmax);
       curves->likelihood[i] = isfinite (l) ? l : 0.0;
       lsum += curves->likelihood[i] * ((i == 0 || i + 1 == np) ? 0.5 : 1.0);
     }

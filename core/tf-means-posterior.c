@@ -7,13 +7,12 @@
  * of z when the SD is known. The density is evaluated once a node on panels laid out
  * from the mode (each a Chebyshev interpolant on 24 Chebyshev–Lobatto points, its
  * width set so that the log density falls by at most 8 across it, halved until the
- * last coefficients are below 1e-15 of the panel's largest value) down to 1e-17 of the
+ * last coefficients are below 1e-13 of the panel's largest value) down to 1e-17 of the
  * mode's density; masses, quantiles (Newton within a panel on the integrated series),
  * the HDI and the density all come from that one table. Masses the table cannot give
  * to 1e-9 are done by adaptive Gauss–Kronrod quadrature (QUADPACK QAG/QAGIU/QAGIL).
  */
 #include "tf-means.h"
-#include "tf-noncentral-t.h"
 #include "tf-logspace.h"
 #include "tf-chebyshev.h"
 
@@ -26,7 +25,9 @@
 #define MAX_DROP 8.0            /* largest fall of the log density across a panel */
 #define FLOOR -40.0             /* log density, relative to the mode, where the table ends */
 #define MAX_PANELS 300
-#define SCAN_POINTS 41
+#define TAIL_TOL 1e-13          /* last coefficients, relative to the panel's largest value,
+                                 * beyond the rounding of the density itself */
+#define SCAN_POINTS 25
 
 typedef struct {
   double a, b;
@@ -50,24 +51,6 @@ struct TfDeltaPosterior {
   TfDeltaPosterior *sub;        /* a table truncated to [sub_lo, sub_hi], built on demand */
 };
 
-double
-tf_delta_log_prior (const TfDeltaPrior *prior, double delta)
-{
-  double u = delta / prior->r;
-  if (prior->prior == TF_PRIOR_NORMAL)
-    return -0.5 * u * u - log (prior->r) - 0.5 * log (2.0 * G_PI);
-  return -log (G_PI * prior->r) - log1p (u * u);
-}
-
-double
-tf_delta_log_likelihood (double t, double n_eff, double df, double delta)
-{
-  double lambda = sqrt (n_eff) * delta;
-  if (isinf (df))
-    return -0.5 * (t - lambda) * (t - lambda);
-  return tf_nct_log_pdf (t, df, lambda);
-}
-
 /* ln posterior density minus the shift, −∞ where it is not a number */
 static double
 log_post (const TfDeltaPosterior *p, double delta)
@@ -85,45 +68,67 @@ post_integrand (double delta, void *data)
   return isfinite (v) ? v : 0.0;
 }
 
-/* ∫_a^b exp(lp − shift) on one piece, a < b, either end possibly infinite. */
+/* ∫_a^b exp(lp − shift) on one piece, a < b, either end possibly infinite, to the
+ * absolute error eps or 1e-11 relative. */
 static double
-piece (TfDeltaPosterior *p, double a, double b, gsl_integration_workspace *w)
+piece (TfDeltaPosterior *p, double a, double b, double eps, gsl_integration_workspace *w)
 {
   gsl_function f = { post_integrand, p };
   double res = 0.0, err = 0.0;
 
   if (!(a < b))
     return 0.0;
-  if (isinf (a) && isinf (b))
-    gsl_integration_qagi (&f, 0.0, 1e-11, 300, w, &res, &err);
-  else if (isinf (b))
-    gsl_integration_qagiu (&f, a, 0.0, 1e-11, 300, w, &res, &err);
+  if (isinf (b))
+    gsl_integration_qagiu (&f, a, eps, 1e-11, 300, w, &res, &err);
   else if (isinf (a))
-    gsl_integration_qagil (&f, b, 0.0, 1e-11, 300, w, &res, &err);
+    gsl_integration_qagil (&f, b, eps, 1e-11, 300, w, &res, &err);
   else
-    gsl_integration_qag (&f, a, b, 0.0, 1e-11, 300, GSL_INTEG_GAUSS21, w, &res, &err);
+    gsl_integration_qag (&f, a, b, eps, 1e-11, 300, GSL_INTEG_GAUSS21, w, &res, &err);
   return res;
 }
 
-/* The mass on [a, b] by adaptive quadrature of the density itself, split at the bulk. */
+static int
+compare_doubles (const void *a, const void *b)
+{
+  double x = *(const double *) a, y = *(const double *) b;
+  return (x > y) - (x < y);
+}
+
+/* ln of the mass on [a, b] by adaptive quadrature of the density itself, for masses the
+ * table does not hold: the integrand scaled by its value at the end nearer the mode (a
+ * mass far in a tail does not underflow), split at the bulk and at 1, 4, 16 and 64
+ * decay lengths from that end. */
 static double
-quadrature_mass (TfDeltaPosterior *p, double a, double b)
+quadrature_log_mass (TfDeltaPosterior *p, double a, double b)
 {
   double m = p->mode, s = p->width;
+  double near = a >= m ? a : (b <= m ? b : m), into = near == a ? 1.0 : -1.0;
+  double local = isfinite (near) ? log_post (p, near) : 0.0;
+  if (!isfinite (local))
+    local = 0.0;
+  double hh = 1e-7 * (fabs (near) + s);
+  double slope = isfinite (near) ? fabs (log_post (p, near + into * hh) - local) / hh : 0.0;
+  double len = slope > 0.0 && isfinite (slope) ? 1.0 / slope : s;
   double cuts[] = { m - 40.0 * s, m - 12.0 * s, m - 4.0 * s, m, m + 4.0 * s, m + 12.0 * s,
-                    m + 40.0 * s };
-  double sum = 0.0, left = a;
+                    m + 40.0 * s, near + into * len, near + into * 4.0 * len,
+                    near + into * 16.0 * len, near + into * 64.0 * len };
+  double sum = 0.0, left = a, keep = p->shift;
   gsl_integration_workspace *w = gsl_integration_workspace_alloc (300);
 
+  qsort (cuts, G_N_ELEMENTS (cuts), sizeof cuts[0], compare_doubles);
+  p->shift += local;
+  /* the scaled integrand is 1 at the near end, so its integral is about len or more */
+  double eps = 1e-13 * MIN (len, s);
   for (guint i = 0; i < G_N_ELEMENTS (cuts); i++)
     if (cuts[i] > left && cuts[i] < b)
       {
-        sum += piece (p, left, cuts[i], w);
+        sum += piece (p, left, cuts[i], eps, w);
         left = cuts[i];
       }
-  sum += piece (p, left, b, w);
+  sum += piece (p, left, b, eps, w);
+  p->shift = keep;
   gsl_integration_workspace_free (w);
-  return sum;
+  return log (sum) + local;
 }
 
 /* --- one panel --------------------------------------------------------------------- */
@@ -157,9 +162,9 @@ panel_density (const Panel *pn, double x)
 }
 
 /* Fits the panel [a, b] (values at the nodes, g the log values); the end value at
- * `known_end` (0: right, K − 1: left) is given in g[known_end] when it is finite. TRUE
- * when the interpolant's last coefficients are negligible. */
-static gboolean
+ * `known_end` (0: right, K − 1: left) is given in g[known_end] when it is finite.
+ * Returns the size of the interpolant's last two coefficients. */
+static double
 panel_build (TfDeltaPosterior *p, Panel *pn, double a, double b, double *g, guint known_end)
 {
   double v[CHEB_K];
@@ -175,8 +180,7 @@ panel_build (TfDeltaPosterior *p, Panel *pn, double a, double b, double *g, guin
       pn->fmax = MAX (pn->fmax, v[j]);
     }
   panel_fit (pn, v);
-  double tail = fabs (pn->c[CHEB_K - 1]) + fabs (pn->c[CHEB_K - 2]);
-  return tail <= (1e-15 + 4.0 * p->noise) * pn->fmax + 1e-19;
+  return fabs (pn->c[CHEB_K - 1]) + fabs (pn->c[CHEB_K - 2]);
 }
 
 /* --- the table ------------------------------------------------------------------- */
@@ -208,7 +212,7 @@ find_mode (TfDeltaPosterior *p, double wl)
   double x0 = MAX (best_x - step, lo), x1 = MIN (best_x + step, hi);
   double c = x1 - g * (x1 - x0), e = x0 + g * (x1 - x0);
   double fc = log_post (p, c), fe = log_post (p, e);
-  for (int it = 0; it < 100 && x1 - x0 > 1e-9 * wl; it++)
+  for (int it = 0; it < 100 && x1 - x0 > 1e-6 * wl; it++)
     if (fc > fe)
       {
         x1 = e; e = c; fe = fc;
@@ -241,18 +245,22 @@ lay_panels (TfDeltaPosterior *p, int dir, GArray *out)
   while (out->len < MAX_PANELS && x != end)
     {
       Panel pn;
-      double w = width;
-      gboolean ok = FALSE;
-      for (int tries = 0; tries < 40 && !ok; tries++)
+      double w = width, before = INFINITY;
+      /* halved until the last coefficients are negligible, or stop falling at the level
+       * of the density's own rounding (a halving should take them down ~2^23-fold) */
+      for (int tries = 0; tries < 40; tries++, w *= 0.5)
         {
           double far = dir > 0 ? MIN (x + w, end) : MAX (x - w, end);
           for (guint j = 0; j < CHEB_K; j++)
             g[j] = NAN;
           g[known] = g_start;
-          ok = dir > 0 ? panel_build (p, &pn, x, far, g, known)
-                       : panel_build (p, &pn, far, x, g, known);
-          if (!ok)
-            w *= 0.5;
+          double tail = dir > 0 ? panel_build (p, &pn, x, far, g, known)
+                                : panel_build (p, &pn, far, x, g, known);
+          double rel = tail / MAX (pn.fmax, 1e-300);
+          if (tail <= (TAIL_TOL + 4.0 * p->noise) * pn.fmax + 1e-19
+              || (rel < 1e-10 && rel > 0.01 * before))
+            break;
+          before = rel;
         }
       g_array_append_val (out, pn);
       x = dir > 0 ? pn.b : pn.a;
@@ -296,14 +304,14 @@ posterior_new_on (const TfDeltaPrior *prior, double t, double n_eff, double df, 
   p->df = df;
   p->dom_lo = lo;
   p->dom_hi = hi;
-  p->shift = 0.0;
   p->mode = find_mode (p, wl);
-  p->shift = log_post (p, p->mode) + p->shift;
+  p->shift = log_post (p, p->mode);
   if (!isfinite (p->shift))
     p->shift = 0.0;
   /* the log likelihood cancels terms of order t², λ² and ln f itself */
   double lam = sqrt (n_eff) * p->mode;
   p->noise = 2.2e-16 * (8.0 + fabs (p->shift) + t * t + lam * lam);
+
   /* width from the curvature at the mode */
   double hh = MIN (wl, prior->r) * 1e-3, m = p->mode;
   if (m - hh < lo || m + hh > hi)
@@ -322,14 +330,13 @@ posterior_new_on (const TfDeltaPrior *prior, double t, double n_eff, double df, 
   lay_panels (p, 1, right);
   p->n_panels = left->len + right->len;
   p->panels = g_new (Panel, MAX (p->n_panels, 1));
-  p->cum = g_new (double, p->n_panels + 1);
+  p->cum = g_new0 (double, p->n_panels + 1);
   for (guint i = 0; i < left->len; i++)
     p->panels[i] = g_array_index (left, Panel, left->len - 1 - i);
   for (guint i = 0; i < right->len; i++)
     p->panels[left->len + i] = g_array_index (right, Panel, i);
   g_array_free (left, TRUE);
   g_array_free (right, TRUE);
-  p->cum[0] = 0.0;
   for (guint i = 0; i < p->n_panels; i++)
     p->cum[i + 1] = p->cum[i] + p->panels[i].mass;
   p->total = p->cum[p->n_panels];
@@ -410,8 +417,18 @@ tf_delta_posterior_log_mass (TfDeltaPosterior *post, double a, double b)
   double m = table_mass (post, a, b);
   if (m >= 1e-9 * post->total)
     return log (m) - post->log_total;
-  return log (quadrature_mass (post, MAX (a, post->dom_lo), MIN (b, post->dom_hi)))
+  return quadrature_log_mass (post, MAX (a, post->dom_lo), MIN (b, post->dom_hi))
          - post->log_total;
+}
+
+double
+tf_delta_posterior_log_mass_outside (TfDeltaPosterior *post, double a, double b)
+{
+  double m = table_mass (post, -INFINITY, a) + table_mass (post, b, INFINITY);
+  if (m >= 1e-9 * post->total)
+    return log (m) - post->log_total;
+  return tf_log_add (tf_delta_posterior_log_mass (post, -INFINITY, a),
+                     tf_delta_posterior_log_mass (post, b, INFINITY));
 }
 
 /* ln of the unnormalised density (the table's interpolant of it inside the table) */
@@ -428,17 +445,17 @@ log_density_unnorm (TfDeltaPosterior *post, double delta)
 }
 
 double
-tf_delta_posterior_density (TfDeltaPosterior *post, double delta)
+tf_delta_posterior_log_density (TfDeltaPosterior *post, double delta)
 {
   if (delta < post->dom_lo || delta > post->dom_hi)
-    return 0.0;
-  return exp (log_density_unnorm (post, delta) - post->log_total);
+    return -INFINITY;
+  return log_density_unnorm (post, delta) - post->log_total;
 }
 
 double
-tf_delta_posterior_log_likelihood (TfDeltaPosterior *post, double delta)
+tf_delta_posterior_density (TfDeltaPosterior *post, double delta)
 {
-  return log_density_unnorm (post, delta) + post->shift - tf_delta_log_prior (&post->prior, delta);
+  return exp (tf_delta_posterior_log_density (post, delta));
 }
 
 double
@@ -481,6 +498,8 @@ table_quantile (const TfDeltaPosterior *p, double target)
   for (int it = 0; it < 100; it++)
     {
       double v = panel_integral (pn, x) - want, dens = panel_density (pn, x);
+      if (fabs (v) <= 1e-14 * pn->mass)          /* the rounding of the integral */
+        return x;
       if (v > 0.0)
         b = x;
       else
@@ -488,7 +507,8 @@ table_quantile (const TfDeltaPosterior *p, double target)
       double nx = dens > 0.0 ? x - v / dens : 0.5 * (a + b);
       if (!(nx > a && nx < b))
         nx = 0.5 * (a + b);
-      if (fabs (nx - x) <= 1e-15 * (fabs (x) + (pn->b - pn->a)) || b - a <= 1e-15 * fabs (x))
+      double tol = 4e-16 * fabs (x) + 1e-13 * (pn->b - pn->a);
+      if (fabs (nx - x) <= tol || b - a <= 2.0 * tol)
         return nx;
       x = nx;
     }
@@ -524,7 +544,7 @@ tf_delta_posterior_quantile (TfDeltaPosterior *post, double u, double a, double 
 
 /* Shortest interval of the given mass: the lower tail p where the density is the same
  * at both ends, f(Q(p)) = f(Q(p + level)) (Box & Tiao 1973, §2.8), found by Illinois
- * (Dowell & Jarratt 1971) near the shortest of 65 intervals on a grid of p (a
+ * (Dowell & Jarratt 1971) near the shortest of 17 intervals on a grid of p (a
  * bimodal posterior has several such p); p = 0 or 1 − level when the density falls or
  * rises throughout. */
 void
@@ -533,7 +553,7 @@ tf_delta_posterior_hdi (TfDeltaPosterior *post, double level, double a, double b
 {
   TfDeltaPosterior *p = truncated (post, a, b);
   double ca = table_cdf (p, a), cb = table_cdf (p, b), span = cb - ca;
-  const guint grid = 64;
+  const guint grid = 16;
   const double room = 1.0 - level;
 #define Q(q) table_quantile (p, ca + (q) * span)
 #define GAP(q) (log_density_unnorm (p, Q (q)) - log_density_unnorm (p, Q ((q) + level)))
@@ -557,7 +577,7 @@ tf_delta_posterior_hdi (TfDeltaPosterior *post, double level, double a, double b
   else
     {
       int side = 0;
-      for (int it = 0; it < 200 && x1 - x0 > 1e-16; it++)
+      for (int it = 0; it < 200 && x1 - x0 > 1e-14 * room; it++)
         {
           double xm = (x0 * g1 - x1 * g0) / (g1 - g0);
           if (!(xm > x0 && xm < x1) || it % 8 == 7)

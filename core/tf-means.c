@@ -92,6 +92,24 @@ tf_means_validate_common (const TfAnalysis *analysis, GPtrArray *problems)
     }
 }
 
+double
+tf_delta_log_prior (const TfDeltaPrior *prior, double delta)
+{
+  double u = delta / prior->r;
+  if (prior->prior == TF_PRIOR_NORMAL)
+    return -0.5 * u * u - log (prior->r) - 0.5 * log (2.0 * G_PI);
+  return -log (G_PI * prior->r) - log1p (u * u);
+}
+
+double
+tf_delta_log_likelihood (double t, double n_eff, double df, double delta)
+{
+  double lambda = sqrt (n_eff) * delta;
+  if (isinf (df))
+    return -0.5 * (t - lambda) * (t - lambda);
+  return tf_nct_log_pdf (t, df, lambda);
+}
+
 void
 tf_delta_prior_from_analysis (const TfAnalysis *analysis, TfDeltaPrior *prior)
 {
@@ -123,6 +141,13 @@ log_prior_mass (const TfDeltaPrior *prior, double a, double b)
 double
 tf_means_log_bf01 (const TfDeltaPrior *prior, double t, double n_eff, double df)
 {
+  return tf_means_log_bf01_with (prior, t, n_eff, df, NULL);
+}
+
+double
+tf_means_log_bf01_with (const TfDeltaPrior *prior, double t, double n_eff, double df,
+                        TfDeltaPosterior *post)
+{
   if (!prior->interval && prior->direction == TF_DIRECTION_TWO_SIDED)
     return prior->prior == TF_PRIOR_NORMAL ? -tf_normal_prior_log_bf10 (t, n_eff, df, prior->r)
                                            : -tf_jzs_log_bf10 (t, n_eff, df, prior->r);
@@ -135,10 +160,12 @@ tf_means_log_bf01 (const TfDeltaPrior *prior, double t, double n_eff, double df)
     }
   /* Interval null (Morey & Rouder 2011): both hypotheses truncate the same prior,
    * BF01 = [P(I | y) / P(I)] / [P(out | y) / P(out)]. */
-  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (prior, t, n_eff, df);
+  g_autoptr (TfDeltaPosterior) own = post == NULL ? tf_delta_posterior_new (prior, t, n_eff, df)
+                                                  : NULL;
+  if (post == NULL)
+    post = own;
   double in = tf_delta_posterior_log_mass (post, prior->low, prior->high);
-  double out = tf_log_add (tf_delta_posterior_log_mass (post, -INFINITY, prior->low),
-                           tf_delta_posterior_log_mass (post, prior->high, INFINITY));
+  double out = tf_delta_posterior_log_mass_outside (post, prior->low, prior->high);
   double pin = log_prior_mass (prior, prior->low, prior->high);
   double pout = tf_log1mexp (pin);
   return in - pin - out + pout;
@@ -264,8 +291,10 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
   tf_results_add (results, "effect_ci_high", _("Effect size interval, upper"),
                   TF_MEASURE_CONFIDENCE_LIMIT, lam_hi / sqrt (s->n_eff));
 
-  /* Bayes factors on δ */
-  double lbf01 = tf_means_log_bf01 (&prior, s->t_delta, s->n_eff, s->df_delta);
+  /* Bayes factors on δ; the posterior of δ under the alternative (untruncated prior) */
+  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&prior, s->t_delta, s->n_eff,
+                                                              s->df_delta);
+  double lbf01 = tf_means_log_bf01_with (&prior, s->t_delta, s->n_eff, s->df_delta, post);
   tf_results_add_bayes_factors (results, lbf01, analysis->prior_null, NULL);
   TfDeltaPrior other = prior;
   other.prior = prior.prior == TF_PRIOR_CAUCHY ? TF_PRIOR_NORMAL : TF_PRIOR_CAUCHY;
@@ -276,9 +305,7 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
     add_bf (results, "bf01_jzs", _("BF01 with the JZS (Cauchy) prior"),
             tf_means_log_bf01 (&other, s->t_delta, s->n_eff, s->df_delta));
 
-  /* Posterior of δ under the alternative, truncated to the side when one-sided. */
-  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&prior, s->t_delta, s->n_eff,
-                                                              s->df_delta);
+  /* its limits truncated to the side when one-sided */
   double a = dir == TF_DIRECTION_GREATER ? 0.0 : -INFINITY;
   double b = dir == TF_DIRECTION_LESS ? 0.0 : INFINITY;
   double cri_lo = tf_delta_posterior_quantile (post, alpha2, a, b);

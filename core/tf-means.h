@@ -40,8 +40,12 @@ typedef struct {
 
 void tf_delta_prior_from_analysis (const TfAnalysis *analysis, TfDeltaPrior *prior);
 
-/* ln BF01 of the analysis's hypotheses for the statistic t with n_eff and df. */
+/* ln BF01 of the analysis's hypotheses for the statistic t with n_eff and df; the
+ * second form takes the posterior under the same prior (an interval null uses it). */
 double tf_means_log_bf01 (const TfDeltaPrior *prior, double t, double n_eff, double df);
+typedef struct TfDeltaPosterior TfDeltaPosterior;
+double tf_means_log_bf01_with (const TfDeltaPrior *prior, double t, double n_eff, double df,
+                               TfDeltaPosterior *post);
 
 /* p-value of the statistic in the direction (Student t or normal when df is infinite). */
 double tf_means_p_value (double t, double df, TfDirection direction);
@@ -85,15 +89,16 @@ gboolean tf_means_sample_size (const TfAnalysis *analysis, const TfMeansStats *s
 gboolean tf_means_null_distribution (const TfAnalysis *analysis, const TfMeansStats *stats,
                                      TfNullDistribution *dist, char **why_not);
 
-/* The posterior of δ under the alternative (untruncated prior), for tests. */
-typedef struct TfDeltaPosterior TfDeltaPosterior;
+/* The posterior of δ under the alternative (untruncated prior). */
 TfDeltaPosterior *tf_delta_posterior_new (const TfDeltaPrior *prior, double t, double n_eff,
                                           double df);
 void tf_delta_posterior_free (TfDeltaPosterior *post);
-/* ln of the untruncated posterior mass on [a, b] (either may be infinite). */
+/* ln of the untruncated posterior mass on [a, b] (either may be infinite), and outside it. */
 double tf_delta_posterior_log_mass (TfDeltaPosterior *post, double a, double b);
-/* Posterior density at δ (normalised), and its mode. */
+double tf_delta_posterior_log_mass_outside (TfDeltaPosterior *post, double a, double b);
+/* Posterior density at δ (normalised; from the table inside it) and its ln, and its mode. */
 double tf_delta_posterior_density (TfDeltaPosterior *post, double delta);
+double tf_delta_posterior_log_density (TfDeltaPosterior *post, double delta);
 double tf_delta_posterior_mode (TfDeltaPosterior *post);
 double tf_delta_posterior_width (TfDeltaPosterior *post);
 /* Quantile u of the posterior truncated to [a, b] (bulk-tabulated, ~1e-9), and the
@@ -101,8 +106,6 @@ double tf_delta_posterior_width (TfDeltaPosterior *post);
 double tf_delta_posterior_quantile (TfDeltaPosterior *post, double u, double a, double b);
 void tf_delta_posterior_hdi (TfDeltaPosterior *post, double level, double a, double b,
                              double *lo, double *hi);
-/* ln likelihood of δ up to a constant, from the posterior's table where it holds. */
-double tf_delta_posterior_log_likelihood (TfDeltaPosterior *post, double delta);
 /* ln prior density of δ and ln likelihood of δ (up to a constant). */
 double tf_delta_log_prior (const TfDeltaPrior *prior, double delta);
 double tf_delta_log_likelihood (double t, double n_eff, double df, double delta);

@@ -193,6 +193,23 @@ log_hermite_ratio (double nu, double y0, double sigma)
   return log (sigma * h * sum);
 }
 
+/* ln ∫₀^∞ y^ν e^(−(y − a)²/2) dy for a whole ν ≤ 30 and a ≥ 0 in closed form: H_0 =
+ * √(2π) Φ(a), H_1 = e^(−a²/2) + a H_0 and H_(k+1) = a H_k + k H_(k−1) (integration by
+ * parts), every term positive. */
+static double
+log_hermite_whole (int nu, double a)
+{
+  double h0 = sqrt (2.0 * G_PI) * 0.5 * erfc (-a / G_SQRT2);
+  double h1 = exp (-0.5 * a * a) + a * h0;
+  for (int k = 1; k < nu; k++)
+    {
+      double h2 = a * h1 + k * h0;
+      h0 = h1;
+      h1 = h2;
+    }
+  return log (h1);
+}
+
 /* The density (Johnson, Kotz & Balakrishnan 1995, eq. 31.15) is
  *   ν^(ν/2) e^(−νλ²/(2s)) / (√π Γ(ν/2) 2^((ν−1)/2) s^((ν+1)/2)) ∫₀^∞ y^ν e^(−(y − a)²/2) dy
  * with s = t² + ν, a = λt/√s. The integrand's mode is y0 = √ν r0, r0 (r0 − α) = 1,
@@ -200,7 +217,8 @@ log_hermite_ratio (double nu, double y0, double sigma)
  *   ln f = ½ ln ν − ½ ln 2π − R(ν/2) − ½ ln π − ½ ln s − (ν/2) ln(1 + t²/ν)
  *          + ν (ln r0 + α/(2 r0)) − νλ²/(2s) + ln(integral / integrand at y0),
  * R the Stirling remainder; ν ln y0 − (y0 − a)²/2 became ν ln r0 + να/(2r0) + ν/2
- * through y0 − a = ν/y0 and r0 − 1/r0 = α. */
+ * through y0 − a = ν/y0 and r0 − 1/r0 = α. For a whole ν ≤ 30 and a ≥ 0 the integral
+ * is in closed form (about 0.1 µs), else by the trapezoidal rule (about 1 µs). */
 double
 tf_nct_log_pdf (double t, double df, double ncp)
 {
@@ -223,9 +241,13 @@ tf_nct_log_pdf (double t, double df, double ncp)
   double lead = nu < 20.0
                 ? 0.5 * nu * log (nu) - gsl_sf_lngamma (0.5 * nu) - 0.5 * (nu - 1.0) * M_LN2 - 0.5 * nu
                 : 0.5 * log (nu) - 0.5 * log (2.0 * G_PI) - tf_stirling_remainder (0.5 * nu);
+  double y0 = sqrt (nu) * r0, a = alpha * sqrt (nu), ratio;
+  if (nu <= 30.0 && nu == floor (nu) && a >= 0.0 && a < 1e8)
+    ratio = log_hermite_whole ((int) nu, a) - nu * log (y0) + 0.5 * (nu / y0) * (nu / y0);
+  else
+    ratio = log_hermite_ratio (nu, y0, r0 / sqrt (r0 * r0 + 1.0));
   return lead - 0.5 * log (G_PI) - 0.5 * log (s) - 0.5 * nu * log1p (t * t / nu)
-         + nu * (lr0 + 0.5 * alpha / r0) - 0.5 * nu * (ncp * ncp / s)
-         + log_hermite_ratio (nu, sqrt (nu) * r0, r0 / sqrt (r0 * r0 + 1.0));
+         + nu * (lr0 + 0.5 * alpha / r0) - 0.5 * nu * (ncp * ncp / s) + ratio;
 }
 
 typedef struct {
