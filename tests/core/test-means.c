@@ -136,6 +136,47 @@ test_one_sided_sleep (void)
   REL (exp (-tf_means_log_bf01 (&p, 4.062127683382037, 10.0, 9.0)), 0.10082456425110407, 1e-9);
 }
 
+#define NEAR(got, want, tol) g_assert_cmpfloat_with_epsilon ((got), (want), (tol))
+
+/* The posterior of δ: its equal-tailed and highest-density limits and P(δ > 0). */
+static void
+test_posterior (void)
+{
+  TfDeltaPrior p = { .prior = TF_PRIOR_CAUCHY, .r = M_SQRT1_2 };
+  double lo, hi;
+  /* The sleep data, t = 4.062127683382037, ν = 9, n = 10, r = √2/2, 95%: the numpy
+   * Gauss-Legendre reference of tf-crosscheck-means.py (itself checked against mpmath) */
+  g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&p, 4.062127683382037, 10.0, 9.0);
+  NEAR (tf_delta_posterior_quantile (post, 0.025, -INFINITY, INFINITY), 0.28272867423497217, 1e-9);
+  NEAR (tf_delta_posterior_quantile (post, 0.975, -INFINITY, INFINITY), 1.9750958462955199, 1e-9);
+  tf_delta_posterior_hdi (post, 0.95, -INFINITY, INFINITY, &lo, &hi);
+  NEAR (lo, 0.2590498086644123, 1e-9);
+  NEAR (hi, 1.9484980091934765, 1e-9);
+  NEAR (exp (tf_delta_posterior_log_mass (post, 0.0, INFINITY)), 0.99707905256057172, 1e-10);
+  /* truncated to δ > 0 */
+  NEAR (tf_delta_posterior_quantile (post, 0.025, 0.0, INFINITY), 0.29999859798418338, 1e-9);
+  tf_delta_posterior_hdi (post, 0.95, 0.0, INFINITY, &lo, &hi);
+  NEAR (lo, 0.26763276065736119, 1e-9);
+  NEAR (hi, 1.9377006238624221, 1e-9);
+
+  /* Known SD and a normal prior: the posterior is normal, precision n + 1/r², mean
+   * z √n / (n + 1/r²) (the conjugate update); z = 2, n = 30, r = ½. scipy 1.10.1:
+   * norm.ppf(0.025 and 0.975, μ, s) = −0.013941310569972165, 0.6583207899878145,
+   * norm.sf(0, μ, s) = 0.9698554130046989; truncated to δ > 0, norm.ppf(F(0) + 0.025 and
+   * 0.975 (1 − F(0)), μ, s) = 0.04715881863071408, 0.6605606505544122. The HDI of a
+   * normal is its equal-tailed interval. */
+  TfDeltaPrior q = { .prior = TF_PRIOR_NORMAL, .r = 0.5 };
+  g_autoptr (TfDeltaPosterior) z = tf_delta_posterior_new (&q, 2.0, 30.0, INFINITY);
+  NEAR (tf_delta_posterior_quantile (z, 0.025, -INFINITY, INFINITY), -0.013941310569972165, 1e-10);
+  NEAR (tf_delta_posterior_quantile (z, 0.975, -INFINITY, INFINITY), 0.6583207899878145, 1e-10);
+  tf_delta_posterior_hdi (z, 0.95, -INFINITY, INFINITY, &lo, &hi);
+  NEAR (lo, -0.013941310569972165, 1e-10);
+  NEAR (hi, 0.6583207899878145, 1e-10);
+  NEAR (exp (tf_delta_posterior_log_mass (z, 0.0, INFINITY)), 0.9698554130046989, 1e-12);
+  NEAR (tf_delta_posterior_quantile (z, 0.025, 0.0, INFINITY), 0.04715881863071408, 1e-10);
+  NEAR (tf_delta_posterior_quantile (z, 0.975, 0.0, INFINITY), 0.6605606505544122, 1e-10);
+}
+
 /* n = 10^8, t = ±10^3: finite, the two truncations add up (Morey & Wagenmakers 2014),
  * and the side the data point to carries all of the two-sided evidence. */
 static void
@@ -283,6 +324,7 @@ main (int argc, char **argv)
   g_test_add_func ("/means/known-sd", test_known_sd);
   g_test_add_func ("/means/one-sided-identity", test_one_sided_identity);
   g_test_add_func ("/means/one-sided-sleep", test_one_sided_sleep);
+  g_test_add_func ("/means/posterior", test_posterior);
   g_test_add_func ("/means/extreme", test_extreme);
   g_test_add_func ("/means/noncentral-t", test_noncentral_t);
   g_test_add_func ("/means/validation", test_validation);
