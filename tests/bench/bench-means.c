@@ -3,8 +3,9 @@
  * accuracy 1e-9 or better: the cross-check measures 1e-12), of a 256-point sensitivity
  * curve against r, and of scipy's quad on the same integrand in the same run (when
  * /usr/bin/python3 has scipy), and of one one-sided JZS Bayes factor at n = 10^8,
- * t = 10^3. Targets: JZS under 1.5 µs, 100× faster than scipy; the curve under 0.5 ms;
- * the one-sided extreme well under 1 ms.
+ * t = 10^3, and of the posterior of δ (its table, limits, HDI and P(δ > 0)) at the sleep
+ * data and at that extreme. Targets: JZS under 1.5 µs, 100× faster than scipy; the curve
+ * under 0.5 ms; the one-sided extreme well under 1 ms; the posterior under 1 ms.
  */
 #include <stdio.h>
 #include <stdlib.h>
@@ -14,6 +15,7 @@
 #include "tf-analysis.h"
 #include "tf-curves.h"
 #include "tf-jzs.h"
+#include "tf-means.h"
 
 static int
 cmp (const void *a, const void *b)
@@ -87,11 +89,35 @@ main (void)
       times[k] = (double) (g_get_monotonic_time () - t0);
     }
   double side_us = median (times, REPS);
+  /* the posterior of δ: the table, both limits, the HDI and P(δ > 0), at the sleep data
+   * and at n = 10^8, t = 10^3 */
+  const double post_cases[2][3] = { { 4.062127683382037, 10.0, 9.0 }, { 1e3, 1e8, 1e8 - 1.0 } };
+  double post_us[2];
+  for (guint c = 0; c < 2; c++)
+    {
+      TfDeltaPrior prior = { .prior = TF_PRIOR_CAUCHY, .r = M_SQRT1_2 };
+      for (guint k = 0; k < REPS; k++)
+        {
+          double lo, hi;
+          gint64 t0 = g_get_monotonic_time ();
+          TfDeltaPosterior *post = tf_delta_posterior_new (&prior, post_cases[c][0],
+                                                           post_cases[c][1], post_cases[c][2]);
+          sink += tf_delta_posterior_quantile (post, 0.025, -INFINITY, INFINITY)
+                  + tf_delta_posterior_quantile (post, 0.975, -INFINITY, INFINITY);
+          tf_delta_posterior_hdi (post, 0.95, -INFINITY, INFINITY, &lo, &hi);
+          sink += lo + hi + tf_delta_posterior_log_mass (post, 0.0, INFINITY);
+          tf_delta_posterior_free (post);
+          times[k] = (double) (g_get_monotonic_time () - t0);
+        }
+      post_us[c] = median (times, REPS);
+    }
   double scipy_us = scipy_quad_us ();
 
   printf ("JZS BF10, one value: median %.3f us (target < 1.5 us)\n", jzs_us);
   printf ("sensitivity curve, 256 points: median %.3f ms (target < 0.5 ms)\n", curve_ms);
   printf ("one-sided JZS BF, n = 1e8, t = 1e3: median %.1f us (target well under 1 ms)\n", side_us);
+  printf ("posterior of delta (table, limits, HDI, P(d > 0)), sleep data: median %.0f us; "
+          "n = 1e8, t = 1e3: median %.0f us (target < 1 ms)\n", post_us[0], post_us[1]);
   if (isfinite (scipy_us))
     printf ("scipy.integrate.quad, same integrand: median %.1f us; ratio %.0fx (target >= 100x)\n",
             scipy_us, scipy_us / jzs_us);
