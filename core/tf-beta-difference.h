@@ -37,4 +37,10 @@ double tf_beta_diff_log_density (TfBetaDiff *bd, double d);
 /* The d with ln P(Δ <= d) = log_p (lower) or ln P(Δ >= d) = log_p; NAN on failure. */
 double tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower);
 
+/* ln of the density of Δ at the n points d_i = (L + i) / S, S >= 1 (a figure grid),
+ * by one discrete convolution (tf-beta-difference-grid.c): out[i] NAN at the points it
+ * cannot do (left to tf_beta_diff_log_density); FALSE when it does none. */
+gboolean tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n,
+                                        double *out);
+
 G_END_DECLS

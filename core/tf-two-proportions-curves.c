@@ -12,6 +12,7 @@
 
 #include <math.h>
 #include <float.h>
+#include <string.h>
 #include <glib/gi18n-lib.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_sf_erf.h>
@@ -21,6 +22,16 @@ finite_exp (double l)
 {
   double v = exp (l);
   return isfinite (v) ? v : (isnan (l) ? 0.0 : DBL_MAX);
+}
+
+/* The density on the grid (L + i) / S: the convolution where it applies, the
+ * point-by-point integral at the points it leaves. */
+static void
+curve_of (TfBetaDiff *bd, gint64 S, gint64 L, const double *x, guint np, double *out)
+{
+  tf_beta_diff_log_density_grid (bd, S, L, np, out);
+  for (guint i = 0; i < np; i++)
+    out[i] = finite_exp (isnan (out[i]) ? tf_beta_diff_log_density (bd, x[i]) : out[i]);
 }
 
 /* x = Δ = θA − θB. Posterior: the density of the difference of the independent beta
@@ -67,23 +78,31 @@ tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curve
       lo = MAX (-1.0 + 1e-12, lo - 1e-9);
       hi = MIN (1.0 - 1e-12, hi + 1e-9);
     }
+  /* the grid d_i = (L + i) / S, covering [lo, hi], for the convolution of
+   * tf_beta_diff_log_density_grid() */
+  gint64 S = (gint64) floor ((np - 2) / (hi - lo));
+  gint64 L = (gint64) floor (lo * S);
+  if (L + (gint64) np - 1 > S)
+    L = MAX (-S, S - ((gint64) np - 1));
+  lo = (double) L / S;
+  hi = (double) (L + (gint64) np - 1) / S;
   curves->lo = lo;
   curves->hi = hi;
-  double step = (hi - lo) / (np - 1);
+  double step = 1.0 / S;
   curves->posterior_narrow = post.sd < 2.0 * step;
 
+  for (guint i = 0; i < np; i++)
+    curves->x[i] = (double) (L + (gint64) i) / S;
+  curve_of (&prior, S, L, curves->x, np, curves->prior);
+  if (curves->posterior_narrow)
+    memset (curves->posterior, 0, np * sizeof (double));
+  else
+    curve_of (&post, S, L, curves->x, np, curves->posterior);
+  curve_of (&lik, S, L, curves->x, np, curves->likelihood);
   guint top = 0;
   for (guint i = 0; i < np; i++)
-    {
-      double x = i + 1 == np ? hi : lo + i * step;
-      curves->x[i] = x;
-      curves->prior[i] = finite_exp (tf_beta_diff_log_density (&prior, x));
-      curves->posterior[i] = curves->posterior_narrow ? 0.0
-                             : finite_exp (tf_beta_diff_log_density (&post, x));
-      curves->likelihood[i] = finite_exp (tf_beta_diff_log_density (&lik, x));
-      if (curves->posterior[i] > curves->posterior[top])
-        top = i;
-    }
+    if (curves->posterior[i] > curves->posterior[top])
+      top = i;
   curves->null_value = curves->null_low = curves->null_high = 0.0;
   curves->prior_at_null = curves->posterior_at_null = 0.0;
   /* the mode: the grid's highest point, refined by the parabola through it and its
