@@ -8,6 +8,7 @@
 #include "tf-two-proportions-private.h"
 #include "tf-beta-difference.h"
 #include "tf-fisher.h"
+#include "tf-incbeta.h"
 #include "tf-logspace.h"
 
 #include <math.h>
@@ -34,6 +35,78 @@ curve_of (TfBetaDiff *bd, gint64 S, gint64 L, const double *x, guint np, double 
     out[i] = finite_exp (isnan (out[i]) ? tf_beta_diff_log_density (bd, x[i]) : out[i]);
 }
 
+/* The grid (L + i) / S of n points from lo on. */
+static gboolean
+aligned_grid (double lo, double hi, guint n, gint64 *S, gint64 *L)
+{
+  double s = floor ((n - 2) / (hi - lo));
+  if (!(s >= 1.0 && s < 1e15))
+    return FALSE;
+  *S = (gint64) s;
+  *L = (gint64) floor (lo * s);
+  if (*L + (gint64) n - 1 > *S)
+    *L = MAX (-*S, *S - ((gint64) n - 1));
+  return TRUE;
+}
+
+/* The lower and upper level quantiles of Δ, to a small fraction of the range: the
+ * density on a grid over a range that holds them (each beta's 0.1 level quantiles: by
+ * the union bound, P(Δ < a_lo − b_hi) <= 0.2 level), summed by the trapezoidal rule;
+ * by Newton's method on the tails where the grid cannot be used. */
+static void
+quantiles (TfBetaDiff *bd, double level, guint np, double *lo, double *hi)
+{
+  double e = log (0.1 * level);
+  double glo = tf_incbeta_inverse_log (e, bd->pa, bd->qa, TRUE)
+               - tf_incbeta_inverse_log (e, bd->pb, bd->qb, FALSE);
+  double ghi = tf_incbeta_inverse_log (e, bd->pa, bd->qa, FALSE)
+               - tf_incbeta_inverse_log (e, bd->pb, bd->qb, TRUE);
+  g_autofree double *f = g_new (double, np);
+  gint64 S, L;
+  guint good = 0;
+
+  glo = MAX (glo, -1.0);
+  ghi = MIN (ghi, 1.0);
+  if (ghi > glo && aligned_grid (glo, ghi, np, &S, &L)
+      && tf_beta_diff_log_density_grid (bd, S, L, np, f))
+    {
+      double top = -INFINITY;
+      for (guint i = 0; i < np; i++)
+        if (!isnan (f[i]))
+          top = MAX (top, f[i]), good++;
+      /* a point left out counts as its left neighbour */
+      for (guint i = 0; i < np; i++)
+        f[i] = isnan (f[i]) ? (i > 0 ? f[i - 1] : 0.0) : exp (f[i] - top);
+      double total = 0.0;
+      for (guint i = 1; i < np; i++)
+        total += 0.5 * (f[i - 1] + f[i]);
+      if (good > np / 2 && total > 0.0 && isfinite (total))
+        {
+          double c = 0.0, step = 1.0 / S;
+          *lo = *hi = NAN;
+          for (guint i = 1; i < np && isnan (*lo); i++)
+            {
+              double t = 0.5 * (f[i - 1] + f[i]);
+              if (c + t >= level * total)
+                *lo = (L + i - 1 + (level * total - c) / t) * step;
+              c += t;
+            }
+          c = 0.0;
+          for (guint i = np - 1; i > 0 && isnan (*hi); i--)
+            {
+              double t = 0.5 * (f[i - 1] + f[i]);
+              if (c + t >= level * total)
+                *hi = (L + i - (level * total - c) / t) * step;
+              c += t;
+            }
+          if (isfinite (*lo) && isfinite (*hi))
+            return;
+        }
+    }
+  *lo = tf_beta_diff_quantile_log (bd, log (level), TRUE);
+  *hi = tf_beta_diff_quantile_log (bd, log (level), FALSE);
+}
+
 /* x = Δ = θA − θB. Posterior: the density of the difference of the independent beta
  * posteriors, by convolution; prior: that of two independent Beta(a, b); "likelihood":
  * the density of the difference under uniform priors, Beta(k + 1, n − k + 1) in each
@@ -56,16 +129,17 @@ tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curve
   tf_beta_diff_init (&lik, ka + 1.0, na - ka + 1.0, kb + 1.0, nb - kb + 1.0);
   post.epsrel = prior.epsrel = lik.epsrel = 1e-6;
 
-  double qlo = tf_beta_diff_quantile_log (&post, log (0.5e-6), TRUE);
-  double qhi = tf_beta_diff_quantile_log (&post, log (0.5e-6), FALSE);
+  double qlo, qhi, plo, phi;
+  quantiles (&post, 0.5e-6, np, &qlo, &qhi);
   if (!isfinite (qlo) || !isfinite (qhi))
     {
       qlo = MAX (-1.0, post.mean - 5.0 * post.sd);
       qhi = MIN (1.0, post.mean + 5.0 * post.sd);
     }
   double lo = MIN (qlo, 0.0), hi = MAX (qhi, 0.0);
-  double plo = MIN (lo, tf_beta_diff_quantile_log (&prior, log (0.005), TRUE));
-  double phi = MAX (hi, tf_beta_diff_quantile_log (&prior, log (0.005), FALSE));
+  quantiles (&prior, 0.005, np, &plo, &phi);
+  plo = MIN (lo, plo);
+  phi = MAX (hi, phi);
   if (isfinite (plo) && isfinite (phi) && (qhi - qlo) * (np - 1) / (phi - plo) >= 3.0)
     {
       lo = plo;
@@ -80,10 +154,12 @@ tf_two_proportions_densities (const TfAnalysis *analysis, TfDensityCurves *curve
     }
   /* the grid d_i = (L + i) / S, covering [lo, hi], for the convolution of
    * tf_beta_diff_log_density_grid() */
-  gint64 S = (gint64) floor ((np - 2) / (hi - lo));
-  gint64 L = (gint64) floor (lo * S);
-  if (L + (gint64) np - 1 > S)
-    L = MAX (-S, S - ((gint64) np - 1));
+  gint64 S, L;
+  if (!aligned_grid (lo, hi, np, &S, &L))
+    {
+      S = (gint64) ceil ((np - 2) / (hi - lo));
+      L = (gint64) floor (lo * S);
+    }
   lo = (double) L / S;
   hi = (double) (L + (gint64) np - 1) / S;
   curves->lo = lo;
