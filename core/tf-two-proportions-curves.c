@@ -25,12 +25,64 @@ finite_exp (double l)
   return isfinite (v) ? v : (isnan (l) ? 0.0 : DBL_MAX);
 }
 
+/* A beta far wider than the figure's range (a prior about a narrow posterior) would
+ * need a grid as fine as the figure's over all of its mass. With whole-number shapes
+ * the density is smooth on each side of 0 (a polynomial in d there), so it is computed
+ * on a coarse grid of steps below a tenth of the narrower beta's standard deviation
+ * and interpolated through the 8 coarse points nearest each point on its side of 0
+ * (Lagrange; the coarse points' spacing makes the error of the order of 1e-8). FALSE
+ * where that does not apply. */
+#define COARSE 8
+
+static gboolean
+coarse_curve (TfBetaDiff *bd, const double *x, guint np, double *out)
+{
+  gboolean whole = bd->pa == floor (bd->pa) && bd->qa == floor (bd->qa)
+                   && bd->pb == floor (bd->pb) && bd->qb == floor (bd->qb);
+  double s = bd->pa + bd->qa, sa = sqrt (bd->pa / s * (bd->qa / s) / (s + 1.0));
+  double t = bd->pb + bd->qb, sb = sqrt (bd->pb / t * (bd->qb / t) / (t + 1.0));
+  double sd = MIN (sa, sb);
+
+  if (!whole || !(sd > 50.0 * (x[np - 1] - x[0])))
+    return FALSE;
+  gint64 S = (gint64) ceil (10.0 / sd);
+  gint64 k0 = MAX (-S + 1, (gint64) floor (x[0] * S) - COARSE);
+  gint64 k1 = MIN (S - 1, (gint64) ceil (x[np - 1] * S) + COARSE);
+  guint nc = (guint) (k1 - k0 + 1);
+  g_autofree double *c = g_new (double, nc);
+  if (nc < COARSE || !tf_beta_diff_log_density_grid (bd, S, k0, nc, c))
+    return FALSE;
+  for (guint k = 0; k < nc; k++)
+    c[k] = finite_exp (isnan (c[k]) ? tf_beta_diff_log_density (bd, (double) (k0 + k) / S) : c[k]);
+  for (guint i = 0; i < np; i++)
+    {
+      /* the coarse points on this point's side of 0 (0 itself on both) */
+      gint64 lo = x[i] >= 0.0 ? MAX (k0, 0) : k0, hi = x[i] >= 0.0 ? k1 : MIN (k1, 0);
+      gint64 first = (gint64) floor (x[i] * S) - COARSE / 2 + 1;
+      first = CLAMP (first, lo, hi - COARSE + 1);
+      if (hi - lo + 1 < COARSE)
+        return FALSE;
+      double sum = 0.0;
+      for (gint64 j = first; j < first + COARSE; j++)
+        {
+          double w = 1.0, xj = (double) j / S;
+          for (gint64 l = first; l < first + COARSE; l++)
+            if (l != j)
+              w *= (x[i] - (double) l / S) / (xj - (double) l / S);
+          sum += w * c[j - k0];
+        }
+      out[i] = MAX (sum, 0.0);
+    }
+  return TRUE;
+}
+
 /* The density on the grid (L + i) / S: the convolution where it applies, the
  * point-by-point integral at the points it leaves. */
 static void
 curve_of (TfBetaDiff *bd, gint64 S, gint64 L, const double *x, guint np, double *out)
 {
-  tf_beta_diff_log_density_grid (bd, S, L, np, out);
+  if (!tf_beta_diff_log_density_grid (bd, S, L, np, out) && coarse_curve (bd, x, np, out))
+    return;
   for (guint i = 0; i < np; i++)
     out[i] = finite_exp (isnan (out[i]) ? tf_beta_diff_log_density (bd, x[i]) : out[i]);
 }
