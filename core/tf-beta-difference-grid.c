@@ -13,12 +13,17 @@
  * rule's error (Navot 1961: the error is Σ_k ζ(−β − k) φ^(k)(0) h^(β+k+1) / k!, plus
  * nothing from an end where the integrand is negligible) is subtracted to k = 4, with
  * φ's derivatives from the logs of its linear factors. Inside, the rule converges
- * geometrically; h is at most a tenth of V's standard deviation and an eighth of the
- * output step where a shape is below 0.1. The expansion needs φ smooth on the
+ * geometrically; h is at most a tenth of V's standard deviation. The expansion needs φ smooth on the
  * scale of h: where another factor vanishes within a few nodes of an end (d within a
  * few nodes of 0 or ±1), or a factor's log changes by more than ½ over one node there,
  * the point is left to the caller (NAN), as are all points where V would need more
  * than MAX_V_NODES nodes or O more than MAX_O_NODES.
+ *
+ * At d = 0 the density is infinite where both lower (or both upper) shapes add up to
+ * 1 or less; that point is +inf.
+ *
+ * Where V is more than 1000 times narrower than O, f_O is expanded about V's mean
+ * instead (see spike()).
  *
  * Accuracy: 1e-6 relative wherever the density is above 1e-3 of its largest value on
  * the grid (measured in tests/core/test-beta-difference.c against the point-by-point
@@ -35,6 +40,7 @@
 #define MAX_O_NODES 60000       /* nodes of O's density */
 #define LOG_NEGLIGIBLE 34.0     /* e^−34 ≈ 2e-15 of a beta's largest value */
 #define END_TERMS 5             /* k = 0 .. 4 in Navot's expansion */
+#define SPIKE 1e-3              /* V this much narrower than O: Taylor's theorem instead */
 
 /* A beta's log density relative to the mean r (exact for huge shapes: the log density
  * at r by Loader's deviance, the rest by log1p of the relative distance). */
@@ -93,8 +99,10 @@ mass_nodes (const Dens *ds, gint64 K, gint64 lim0, gint64 lim1, guint cap,
   *vals = NULL;
   if (hi < lo)
     return 0.0;
-  /* more nodes in the window than allowed, and a mass wider than that: give up early */
-  if ((guint64) (hi - lo) > cap && 120.0 * beta_sd (p, q) * K > cap)
+  /* more nodes in the window than allowed, and a mass wider than that: give up early
+   * (a log-concave density falls by e^−34 within 36 standard deviations of its mode:
+   * the exponential is the slowest) */
+  if ((guint64) (hi - lo) > cap && p >= 1.0 && q >= 1.0 && 72.0 * beta_sd (p, q) * K > cap)
     return NAN;
   gint64 start = CLAMP ((gint64) llround (mode * K), lo, hi);
   gint64 a = start, b = start;
@@ -262,6 +270,50 @@ side (const Ends *en, const Dens *dv, const Dens *dn, double c, double e, gboole
   return TRUE;
 }
 
+/* V far narrower than O: E f_O(μ_V − c + (V − μ_V)) by Taylor's theorem about w0 = μ_V − c,
+ * f_O(w0) (1 + μ2 B2 / 2 + μ3 B3 / 6), B_k the complete Bell polynomials in the
+ * derivatives of ln f_O at w0 and μ_k V's central moments; the next term is below
+ * 1e-8 where |ψ'| σ_V < 0.01 and |ψ''| σ_V² < 1e-4 (checked), and f_O is smooth over
+ * V's mass (w0 at least 40 σ_V inside (0, 1), else the point is left to the caller). */
+static gboolean
+spike (double pv, double qv, double po, double qo, gint64 sign, gint64 S, gint64 L, guint n,
+       double *out)
+{
+  Dens dn;
+  double s = pv + qv, mean = pv / s, sd = beta_sd (pv, qv);
+  double mu3 = 2.0 * (qv - pv) * sqrt (s + 1.0) / ((s + 2.0) * sqrt (pv * qv)) * sd * sd * sd;
+
+  dens_init (&dn, po, qo);
+  double mode = po <= 1.0 ? 0.0 : qo <= 1.0 ? 1.0 : (po - 1.0) / (po + qo - 2.0);
+  double top = dens_log (&dn, CLAMP (mode, 1e-300, 1.0 - DBL_EPSILON));
+  for (guint i = 0; i < n; i++)
+    {
+      double c = (double) (sign * (L + (gint64) i)) / S, w = mean - c, y = 1.0 - w;
+      if (w <= 0.0 || y <= 0.0)
+        {
+          out[i] = -INFINITY;
+          continue;
+        }
+      if (w < 40.0 * sd || y < 40.0 * sd)
+        continue;
+      double a = po - 1.0, b = qo - 1.0;
+      double p1 = a / w - b / y, p2 = -a / (w * w) - b / (y * y);
+      double p3 = 2.0 * a / (w * w * w) - 2.0 * b / (y * y * y);
+      double l = dens_log (&dn, w);
+      if (!(fabs (p1) * sd < 0.01 && fabs (p2) * sd * sd < 1e-4))
+        {
+          /* far in O's tail (below e^−40 of its top) the figure needs no digits */
+          if (l < top - 40.0)
+            out[i] = l;
+          continue;
+        }
+      double b2 = p2 + p1 * p1, b3 = p3 + 3.0 * p2 * p1 + p1 * p1 * p1;
+      double corr = 1.0 + 0.5 * sd * sd * b2 + mu3 * b3 / 6.0;
+      out[i] = corr > 0.0 ? l + log (corr) : NAN;
+    }
+  return TRUE;
+}
+
 gboolean
 tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n,
                                double *out)
@@ -276,10 +328,9 @@ tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n
     out[i] = NAN;
   if (S < 1)
     return FALSE;
-  /* below a shape of 0.1 the point-by-point integral is not to be trusted: a finer
-   * grid keeps every point near 0 and ±1 here */
-  double tiny = MIN (MIN (pv, qv), MIN (po, qo)) < 0.1 ? 8.0 : 1.0;
-  double m_real = MAX (tiny, ceil (10.0 / ((double) S * beta_sd (pv, qv))));
+  if (beta_sd (pv, qv) < SPIKE * beta_sd (po, qo))
+    return spike (pv, qv, po, qo, sign, S, L, n, out);
+  double m_real = MAX (1.0, ceil (10.0 / ((double) S * beta_sd (pv, qv))));
   if (!(m_real * S < 1e15))
     return FALSE;
   const gint64 m = (gint64) m_real, K = S * m;
@@ -313,6 +364,16 @@ tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n
       gint64 a = MAX (Li, MAX (jv0, J + ko0)), b = MIN (Ui, MIN (jv1, J + ko1));
       gboolean true_a = a == Li, true_b = b == Ui;
       sums[i] = NAN;
+      if (J == 0 && lower.expo[0] + lower.expo[2] <= -1.0)
+        {
+          out[i] = INFINITY;      /* both lower shapes add up to 1 or less: f(0) = ∞ */
+          continue;
+        }
+      if (J == 0 && upper.expo[1] + upper.expo[3] <= -1.0)
+        {
+          out[i] = INFINITY;
+          continue;
+        }
       if (!(J > -K && J < K) || b < a)
         {
           out[i] = -INFINITY;     /* d outside (−1, 1), or no mass */

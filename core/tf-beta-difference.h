@@ -39,7 +39,9 @@ double tf_beta_diff_quantile_log (TfBetaDiff *bd, double log_p, gboolean lower);
 
 /* ln of the density of Δ at the n points d_i = (L + i) / S, S >= 1 (a figure grid),
  * by one discrete convolution (tf-beta-difference-grid.c): out[i] NAN at the points it
- * cannot do (left to tf_beta_diff_log_density); FALSE when it does none. */
+ * cannot do (left to tf_beta_diff_log_density), +inf where the density is infinite
+ * (d = 0 with both lower or both upper shapes adding up to 1 or less); FALSE when it
+ * does none. */
 gboolean tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n,
                                         double *out);
 

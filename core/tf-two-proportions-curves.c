@@ -27,7 +27,8 @@ finite_exp (double l)
 
 /* A beta far wider than the figure's range (a prior about a narrow posterior) would
  * need a grid as fine as the figure's over all of its mass. With whole-number shapes
- * the density is smooth on each side of 0 (a polynomial in d there), so it is computed
+ * at both ends, or shapes that add up to 11 or more there, the density is smooth on
+ * each side of 0 (a polynomial in d for whole numbers; |d|^γ terms of γ >= 10 else), so it is computed
  * on a coarse grid of steps below a tenth of the narrower beta's standard deviation
  * and interpolated through the 8 coarse points nearest each point on its side of 0
  * (Lagrange; the coarse points' spacing makes the error of the order of 1e-8). FALSE
@@ -35,22 +36,27 @@ finite_exp (double l)
 #define COARSE 8
 
 static gboolean
+smooth_end (double s, double t)
+{
+  return (s == floor (s) && t == floor (t)) || s + t >= 11.0;
+}
+
+static gboolean
 coarse_curve (TfBetaDiff *bd, const double *x, guint np, double *out)
 {
-  gboolean whole = bd->pa == floor (bd->pa) && bd->qa == floor (bd->qa)
-                   && bd->pb == floor (bd->pb) && bd->qb == floor (bd->qb);
+  gboolean whole = smooth_end (bd->pa, bd->pb) && smooth_end (bd->qa, bd->qb);
   double s = bd->pa + bd->qa, sa = sqrt (bd->pa / s * (bd->qa / s) / (s + 1.0));
   double t = bd->pb + bd->qb, sb = sqrt (bd->pb / t * (bd->qb / t) / (t + 1.0));
   double sd = MIN (sa, sb);
 
-  if (!whole || !(sd > 50.0 * (x[np - 1] - x[0])))
+  if (!whole || !(sd > 2.0 * (x[np - 1] - x[0]) / np))
     return FALSE;
   gint64 S = (gint64) ceil (10.0 / sd);
   gint64 k0 = MAX (-S + 1, (gint64) floor (x[0] * S) - COARSE);
   gint64 k1 = MIN (S - 1, (gint64) ceil (x[np - 1] * S) + COARSE);
   guint nc = (guint) (k1 - k0 + 1);
   g_autofree double *c = g_new (double, nc);
-  if (nc < COARSE || !tf_beta_diff_log_density_grid (bd, S, k0, nc, c))
+  if (nc < COARSE || nc > 4 * np || !tf_beta_diff_log_density_grid (bd, S, k0, nc, c))
     return FALSE;
   for (guint k = 0; k < nc; k++)
     c[k] = finite_exp (isnan (c[k]) ? tf_beta_diff_log_density (bd, (double) (k0 + k) / S) : c[k]);
@@ -76,15 +82,58 @@ coarse_curve (TfBetaDiff *bd, const double *x, guint np, double *out)
   return TRUE;
 }
 
-/* The density on the grid (L + i) / S: the convolution where it applies, the
- * point-by-point integral at the points it leaves. */
+/* The points the grid left out near 0 and ±1 (another factor's end within a few nodes
+ * of an end of the integral) once more on a grid 8 times finer, where that end is 8
+ * nodes away: a run of them at a time. */
+#define FINER 8
+
+static void
+refine (TfBetaDiff *bd, gint64 S, gint64 L, guint np, double *out)
+{
+  for (guint i = 0; i < np; i++)
+    {
+      guint j = i;
+      if (!isnan (out[i]))
+        continue;
+      while (j + 1 < np && (isnan (out[j + 1]) || (j + 2 < np && isnan (out[j + 2]))))
+        j++;
+      if (j - i > 40)
+        {
+          i = j;
+          continue;             /* not a few points near an end */
+        }
+      guint nf = FINER * (j - i) + 1;
+      g_autofree double *f = g_new (double, nf);
+      if (tf_beta_diff_log_density_grid (bd, FINER * S, FINER * (L + (gint64) i), nf, f))
+        for (guint k = i; k <= j; k++)
+          if (isnan (out[k]))
+            out[k] = f[FINER * (k - i)];
+      i = j;
+    }
+}
+
+/* The density on the grid (L + i) / S: the convolution where it applies (on a finer
+ * grid near 0 and ±1 where needed), the point-by-point integral at the points it
+ * leaves. */
 static void
 curve_of (TfBetaDiff *bd, gint64 S, gint64 L, const double *x, guint np, double *out)
 {
-  if (!tf_beta_diff_log_density_grid (bd, S, L, np, out) && coarse_curve (bd, x, np, out))
+  gboolean g = tf_beta_diff_log_density_grid (bd, S, L, np, out);
+  if (!g && coarse_curve (bd, x, np, out))
     return;
+  if (g)
+    refine (bd, S, L, np, out);
   for (guint i = 0; i < np; i++)
-    out[i] = finite_exp (isnan (out[i]) ? tf_beta_diff_log_density (bd, x[i]) : out[i]);
+    if (isnan (out[i]))
+      out[i] = tf_beta_diff_log_density (bd, x[i]);
+  /* an infinite density (at 0, both shapes at one end adding up to 1 or less) is drawn
+   * at the height of the higher of its neighbours */
+  for (guint i = 0; i < np; i++)
+    if (out[i] == INFINITY)
+      out[i] = MAX (i > 0 && isfinite (out[i - 1]) ? out[i - 1] : -INFINITY,
+                    i + 1 < np && isfinite (out[i + 1]) ? out[i + 1] : -INFINITY);
+  for (guint i = 0; i < np; i++)
+    out[i] = finite_exp (out[i]);
 }
 
 /* The grid (L + i) / S of n points from lo on. */
@@ -124,11 +173,11 @@ quantiles (TfBetaDiff *bd, double level, guint np, double *lo, double *hi)
     {
       double top = -INFINITY;
       for (guint i = 0; i < np; i++)
-        if (!isnan (f[i]))
+        if (!isnan (f[i]) && f[i] < INFINITY)
           top = MAX (top, f[i]), good++;
-      /* a point left out counts as its left neighbour */
+      /* a point left out, or infinite, counts as its left neighbour */
       for (guint i = 0; i < np; i++)
-        f[i] = isnan (f[i]) ? (i > 0 ? f[i - 1] : 0.0) : exp (f[i] - top);
+        f[i] = isnan (f[i]) || f[i] == INFINITY ? (i > 0 ? f[i - 1] : 0.0) : exp (f[i] - top);
       double total = 0.0;
       for (guint i = 1; i < np; i++)
         total += 0.5 * (f[i - 1] + f[i]);
