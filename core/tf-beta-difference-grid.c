@@ -13,8 +13,8 @@
  * rule's error (Navot 1961: the error is Σ_k ζ(−β − k) φ^(k)(0) h^(β+k+1) / k!, plus
  * nothing from an end where the integrand is negligible) is subtracted to k = 4, with
  * φ's derivatives from the logs of its linear factors. Inside, the rule converges
- * geometrically; h is at most a tenth of V's standard deviation. The expansion needs φ smooth on the
- * scale of h: where another factor vanishes within a few nodes of an end (d within a
+ * geometrically; h is at most a tenth of V's standard deviation. The expansion needs
+ * φ smooth on the scale of h: where another factor vanishes within a few nodes of an end (d within a
  * few nodes of 0 or ±1), or a factor's log changes by more than ½ over one node there,
  * the point is left to the caller (NAN), as are all points where V would need more
  * than MAX_V_NODES nodes or O more than MAX_O_NODES.
@@ -26,8 +26,9 @@
  * instead (see spike()).
  *
  * Accuracy: 1e-6 relative wherever the density is above 1e-3 of its largest value on
- * the grid (measured in tests/core/test-beta-difference.c against the point-by-point
- * integral and mpmath).
+ * the grid (the aim; measured in tests/core/test-beta-difference.c against the
+ * point-by-point integral, worst 7e-8 over 61 cases, and below a shape of 0.1 against
+ * mpmath).
  */
 #include "tf-beta-difference.h"
 #include "tf-logspace.h"
