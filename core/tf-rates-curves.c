@@ -2,6 +2,7 @@
  * tf-rates-curves.c: the checks and curves the one-rate and two-rates designs share.
  */
 #include "tf-rates-curves.h"
+#include "tf-two-rates.h"
 #include "tf-evidence.h"
 #include "tf-results.h"
 #include "tf-logspace.h"
@@ -242,10 +243,12 @@ set_chosen (const TfAnalysis *a, TfEvidenceCurve *curve, TfRatesLogBf01 log_bf01
 }
 
 gboolean
-tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
-                      char **why_not G_GNUC_UNUSED)
+tf_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
 {
   const TfAnalysis *a = analysis;
+
+  if (a->design == TF_DESIGN_TWO_RATES && !tf_two_rates_prior_in_range (a, why_not))
+    return FALSE;
   TfRatesLogBf01 log_bf01 = a->design == TF_DESIGN_ONE_RATE ? tf_one_rate_log_bf01_at
                                                             : tf_two_rates_log_bf01_at;
   double mean = a->prior_shape / a->prior_rate;

@@ -170,10 +170,29 @@ static const TfRatesFamily ratio_family = { ratio_log_tails, ratio_quantile_log 
 /* ln BF01 in the analysis's hypotheses, for prior (s, r) and counts (ka, kb) over
  * exposures (ea, eb); an interval null by the independent model's prior and posterior
  * masses, inside against the side(s) of the alternative. */
+/* ln BF01 is computed to 1e-9 while the prior's mean rate s / r stays within 10^12, the
+ * cross-check's range; beyond it the pooled deviance terms outgrow what a double keeps
+ * (errors up to 1e-4 at a prior mean of 10^18), so no factor is given there. */
+#define TF_TWO_RATES_MAX_PRIOR_MEAN 1e12
+#define TF_TWO_RATES_PRIOR_TOO_LARGE \
+  _("the prior's mean rate (PriorShape ÷ PriorRate) is above 10^12, beyond the range where this Bayes factor is computed to full accuracy")
+
+gboolean
+tf_two_rates_prior_in_range (const TfAnalysis *analysis, char **why_not)
+{
+  if (analysis->prior_shape / analysis->prior_rate <= TF_TWO_RATES_MAX_PRIOR_MEAN)
+    return TRUE;
+  if (why_not)
+    *why_not = g_strdup_printf (_("The Bayes factor is not defined: %s."), TF_TWO_RATES_PRIOR_TOO_LARGE);
+  return FALSE;
+}
+
 static double
 analysis_log_bf01 (const TfAnalysis *a, double s, double r, double ka, double ea, double kb,
                    double eb)
 {
+  if (!(s / r <= TF_TWO_RATES_MAX_PRIOR_MEAN))
+    return NAN;
   const double prior[] = { s, r, s, r }, post[] = { s + ka, r + ea, s + kb, r + eb };
   double rho0 = tf_two_rates_null_ratio (a);
   double point = a->null_kind == TF_NULL_POINT
@@ -270,7 +289,9 @@ tf_two_rates_compute (const TfAnalysis *analysis, TfResults *results)
 
   double lbf01 = analysis_log_bf01 (a, s, r, ka, ea, kb, eb);
   tf_results_add_bayes_factors (results, lbf01, a->prior_null,
-                                _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
+                                s / r > TF_TWO_RATES_MAX_PRIOR_MEAN
+                                ? TF_TWO_RATES_PRIOR_TOO_LARGE
+                                : _("the prior or posterior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
 
   tf_rates_add_posterior (results, a, &ratio_family, post, tf_two_rates_null_ratio (a),
                           _("Posterior probability that λA/λB > ρ0"),
@@ -405,7 +426,8 @@ tf_two_rates_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, ch
   double p0, q0;
   SplitTests t;
 
-  if (!tf_rates_point_null (a, _("The sample-size curve holds the p-value against a point null; this analysis has an interval null."), why_not))
+  if (!tf_rates_point_null (a, _("The sample-size curve holds the p-value against a point null; this analysis has an interval null."), why_not)
+      || !tf_two_rates_prior_in_range (a, why_not))
     return FALSE;
   if (n == 0.0)
     {

@@ -23,6 +23,9 @@ gboolean tf_two_rates_null_distribution (const TfAnalysis *analysis, TfNullDistr
 /* The null ratio of the analysis: [Null] Value, with 0 (the default) read as 1, "no
  * difference". */
 double tf_two_rates_null_ratio (const TfAnalysis *analysis);
+/* FALSE, with the reason in why_not, when the prior's mean rate is beyond the range in
+ * which the Bayes factor is computed to full accuracy (10^12). */
+gboolean tf_two_rates_prior_in_range (const TfAnalysis *analysis, char **why_not);
 
 /* ln BF01, two-sided: H0 λA = ρ0 λ, λB = λ, λ ~ Gamma(shape, rate), against λA, λB
  * independent Gamma(shape, rate). Closed form, as a change of heterogeneities of

@@ -264,6 +264,19 @@ tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
       cairo_restore (cr);
       return FALSE;
     }
+  {
+    guint finite = 0;
+
+    for (guint i = 0; i < curve->n; i++)
+      finite += isfinite (bf[i]) && isfinite (xs[i]);
+    if (finite < 2)
+      {
+        tf_fig_message (cr, &theme, width, height, NULL,
+                        _("The Bayes factor is not defined along this curve, so there is nothing to draw: the result list says why."));
+        cairo_restore (cr);
+        return FALSE;
+      }
+  }
   /* Past 10^±6, or 3 decades past the chosen value, a Bayes factor tells the reader
    * nothing the grades do not, and the range would flatten the curve where it matters:
    * the axis stops there, the curve leaves the panel and a note says how far it goes. */

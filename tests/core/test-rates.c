@@ -284,6 +284,37 @@ test_curves (void)
     }
 }
 
+/* Beyond a prior mean rate of 10^12 the two-rate Bayes factor is not given (the
+ * cross-check's range; its rounding grows past 1e-9 there): not defined, with the reason,
+ * and the curves built on it say so; the classical numbers stay. */
+static void
+test_two_rates_prior_range (void)
+{
+  g_autoptr (TfAnalysis) a = two_rates (30, 10, 18, 12);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  g_autoptr (TfResults) r = NULL;
+  g_autofree char *why = NULL;
+  const TfNumber *bf;
+
+  a->prior_shape = 1e12;
+  a->prior_rate = 1e-6;
+  r = tf_analysis_compute (a, problems);
+  g_assert_nonnull (r);
+  bf = tf_results_lookup (r, "bf01");
+  g_assert_nonnull (bf);
+  g_assert_cmpint (bf->status, !=, TF_STATUS_OK);
+  g_assert_nonnull (strstr (bf->reason, "10^12"));
+  g_assert_true (isfinite (get (r, "p_value")));
+  g_assert_null (tf_sensitivity_curve_new (a, 50, NULL, &why));
+  g_assert_nonnull (why);
+  g_assert_nonnull (strstr (why, "10^12"));
+  /* below, at a prior mean of 10^11, it is given */
+  a->prior_shape = 1e5;
+  g_clear_pointer (&r, tf_results_free);
+  r = tf_analysis_compute (a, problems);
+  g_assert_true (isfinite (get (r, "bf01")));
+}
+
 int
 main (int argc, char **argv)
 {
@@ -297,5 +328,6 @@ main (int argc, char **argv)
   g_test_add_func ("/rates/interval-null", test_interval_null);
   g_test_add_func ("/rates/validation", test_validation);
   g_test_add_func ("/rates/curves", test_curves);
+  g_test_add_func ("/rates/two-rates-prior-range", test_two_rates_prior_range);
   return g_test_run ();
 }
