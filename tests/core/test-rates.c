@@ -308,11 +308,17 @@ test_two_rates_prior_range (void)
   g_assert_null (tf_sensitivity_curve_new (a, 50, NULL, &why));
   g_assert_nonnull (why);
   g_assert_nonnull (strstr (why, "10^12"));
-  /* below, at a prior mean of 10^11, it is given */
-  a->prior_shape = 1e5;
-  g_clear_pointer (&r, tf_results_free);
-  r = tf_analysis_compute (a, problems);
-  g_assert_true (isfinite (get (r, "bf01")));
+  /* below, at a prior mean of 10^11 about counts of that size, it is given */
+  {
+    g_autoptr (TfAnalysis) b = two_rates (1e11, 1, 1.00001e11, 1);
+    g_autoptr (TfResults) rb = NULL;
+
+    b->prior_shape = 10;
+    b->prior_rate = 1e-10;
+    rb = tf_analysis_compute (b, problems);
+    g_assert_nonnull (rb);
+    g_assert_true (isfinite (get (rb, "bf01")));
+  }
 }
 
 int
