@@ -235,6 +235,28 @@ tf_analysis_set_title (TfAnalysis *analysis, const char *title)
   analysis->title = title && *title ? g_strdup (title) : NULL;
 }
 
+void
+tf_analysis_validate_beta_prior (const TfAnalysis *analysis, const char *design_words,
+                                 GPtrArray *problems)
+{
+  if (analysis->prior != TF_PRIOR_BETA)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "Prior",
+                                     /* TRANSLATORS: the first %s is a design, "one proportion" */
+                                     _("The prior for %s must be beta (it is %s)."),
+                                     design_words, tf_prior_family_to_string (analysis->prior)));
+  if (!(analysis->prior_a > 0.0 && analysis->prior_a <= TF_ANALYSIS_MAX_BETA_SHAPE))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorA",
+                                     _("The beta shape PriorA must be above 0 and at most 10^15 (it is %g)."),
+                                     analysis->prior_a));
+  if (!(analysis->prior_b > 0.0 && analysis->prior_b <= TF_ANALYSIS_MAX_BETA_SHAPE))
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Alternative", "PriorB",
+                                     _("The beta shape PriorB must be above 0 and at most 10^15 (it is %g)."),
+                                     analysis->prior_b));
+}
+
 /* Checks shared by every design: the prior model probability and the level. */
 static void
 validate_common (const TfAnalysis *analysis, GPtrArray *problems)

@@ -157,6 +157,13 @@ void tf_analysis_summarise_values (TfAnalysis *analysis);
  * freeing with tf_problem_free). Returns TRUE when nothing was wrong. */
 gboolean tf_analysis_validate (const TfAnalysis *analysis, GPtrArray *problems);
 
+/* The largest beta shape the proportions designs compute to full accuracy. */
+#define TF_ANALYSIS_MAX_BETA_SHAPE 1e15
+/* For the proportions designs: Prior is beta and PriorA, PriorB lie in (0, 10^15];
+ * design_words names the design in the message ("one proportion"). */
+void tf_analysis_validate_beta_prior (const TfAnalysis *analysis, const char *design_words,
+                                      GPtrArray *problems);
+
 const char *tf_design_to_string (TfDesign design);           /* file name: "one-proportion" */
 gboolean tf_design_from_string (const char *s, TfDesign *design);
 const char *tf_design_label (TfDesign design);              /* translated, for people */

@@ -16,7 +16,6 @@
 #include <glib/gi18n-lib.h>
 
 #define TF_MAX_TRIALS 1e15
-#define TF_MAX_SHAPE 1e15
 
 static gboolean
 is_whole (double v)
@@ -116,21 +115,7 @@ tf_one_proportion_validate (const TfAnalysis *analysis, GPtrArray *problems)
                                      _("The null proportion (Value) must lie strictly between 0 and 1 (it is %g)."),
                                      analysis->null_value));
 
-  if (analysis->prior != TF_PRIOR_BETA)
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "Prior",
-                                     _("The prior for one proportion must be beta (it is %s)."),
-                                     tf_prior_family_to_string (analysis->prior)));
-  if (!(analysis->prior_a > 0.0 && analysis->prior_a <= TF_MAX_SHAPE))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorA",
-                                     _("The beta shape PriorA must be above 0 and at most 10^15 (it is %g)."),
-                                     analysis->prior_a));
-  if (!(analysis->prior_b > 0.0 && analysis->prior_b <= TF_MAX_SHAPE))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorB",
-                                     _("The beta shape PriorB must be above 0 and at most 10^15 (it is %g)."),
-                                     analysis->prior_b));
+  tf_analysis_validate_beta_prior (analysis, _("one proportion"), problems);
   validate_models (analysis, problems);
 }
 

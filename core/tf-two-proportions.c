@@ -27,7 +27,6 @@
 #include <gsl/gsl_sf_erf.h>
 
 #define TF_MAX_TRIALS 1e15
-#define TF_MAX_SHAPE 1e15
 
 static gboolean
 is_whole (double v)
@@ -75,21 +74,7 @@ tf_two_proportions_validate (const TfAnalysis *analysis, GPtrArray *problems)
                      tf_problem_new ("Null", "Value",
                                      _("Two proportions are tested against no difference only: the null Value must be 0 (it is %g)."),
                                      a->null_value));
-  if (a->prior != TF_PRIOR_BETA)
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "Prior",
-                                     _("The prior for two proportions must be beta (it is %s)."),
-                                     tf_prior_family_to_string (a->prior)));
-  if (!(a->prior_a > 0.0 && a->prior_a <= TF_MAX_SHAPE))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorA",
-                                     _("The beta shape PriorA must be above 0 and at most 10^15 (it is %g)."),
-                                     a->prior_a));
-  if (!(a->prior_b > 0.0 && a->prior_b <= TF_MAX_SHAPE))
-    g_ptr_array_add (problems,
-                     tf_problem_new ("Alternative", "PriorB",
-                                     _("The beta shape PriorB must be above 0 and at most 10^15 (it is %g)."),
-                                     a->prior_b));
+  tf_analysis_validate_beta_prior (a, _("two proportions"), problems);
 }
 
 /* x1 y1 − x2 y2 with both products' rounding errors recovered by fma (Ogita, Rump &
