@@ -12,24 +12,12 @@ import subprocess
 import sys
 import tempfile
 
-cli, source_dir = sys.argv[1], sys.argv[2]
+from cli_check import check, cli, finish, run
+
+source_dir = sys.argv[2]
 demo = os.path.join(source_dir, "data", "demo", "seed-germination.twofold")
-passed = failed = 0
 
 
-def check(name, condition, detail=""):
-    global passed, failed
-    if condition:
-        passed += 1
-    else:
-        failed += 1
-        print(f"FAIL {name} {detail}")
-
-
-def run(*args):
-    r = subprocess.run([cli, *args], capture_output=True, text=True,
-                       env=dict(os.environ, LC_ALL="C.UTF-8"))
-    return r.returncode, r.stdout, r.stderr
 
 
 def close(a, b, rel):
@@ -263,5 +251,4 @@ for args in [(), ("frobnicate",), ("analyse",), ("analyse", demo, "--colour")]:
     check(f"usage {args}: exit 2", code == 2, f"{code} {err}")
     check(f"usage {args}: says usage", "Usage" in err or "usage" in err, err)
 
-print(f"{passed} passed, {failed} failed")
-sys.exit(1 if failed else 0)
+finish()

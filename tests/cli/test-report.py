@@ -21,24 +21,12 @@ import tempfile
 import urllib.parse
 import xml.etree.ElementTree as ET
 
-cli, source_dir = sys.argv[1], sys.argv[2]
-passed = failed = 0
+from cli_check import check, cli, finish, run
+
+source_dir = sys.argv[2]
 KINDS = ["densities", "sensitivity", "sample-size", "null-distribution", "model-probabilities"]
 
 
-def check(name, condition, detail=""):
-    global passed, failed
-    if condition:
-        passed += 1
-    else:
-        failed += 1
-        print(f"FAIL {name} {str(detail)[:400]}")
-
-
-def run(*args):
-    r = subprocess.run([cli, *args], capture_output=True, text=True,
-                       env=dict(os.environ, LC_ALL="C.UTF-8"))
-    return r.returncode, r.stdout, r.stderr
 
 
 def analysis(design, title, data, null="", alternative="", models="PriorNull=0.5\n"):
@@ -314,5 +302,4 @@ with tempfile.TemporaryDirectory() as tmp:
     code, out, err = run("report", "--help")
     check("report --help names the files written", code == 0 and "OUT-KIND.svg" in out, out)
 
-print(f"{passed} passed, {failed} failed")
-sys.exit(1 if failed else 0)
+finish()
