@@ -120,6 +120,8 @@ recompute (TfWindow *self)
   g_autofree char *description = NULL;
   gboolean parsed;
 
+  /* the plot view borrows the results: it lets go of them first */
+  tf_plot_view_set_analysis (self->plot_view, NULL, NULL);
   g_clear_pointer (&self->results, tf_results_free);
   parsed = tf_analysis_form_apply (self->form, self->analysis, problems);
   if (parsed)
@@ -142,7 +144,7 @@ recompute (TfWindow *self)
   if (self->results)
     {
       tf_result_list_set_results (self->result_list, self->analysis, self->results);
-      tf_plot_view_set_analysis (self->plot_view, self->analysis);
+      tf_plot_view_set_analysis (self->plot_view, self->analysis, self->results);
       tf_explanation_pane_set_results (self->explanation_pane, self->analysis, self->results);
       gtk_stack_set_visible_child_name (self->center_stack, "analysis");
       tf_window_actions_update (self);
@@ -168,7 +170,7 @@ recompute (TfWindow *self)
                                  _("Fix the field marked in the form: the explanations come back with the results."));
     }
   adw_status_page_set_description (self->invalid_page, description);
-  tf_plot_view_set_analysis (self->plot_view, NULL);
+  tf_plot_view_set_analysis (self->plot_view, NULL, NULL);
   gtk_stack_set_visible_child_name (self->center_stack, "invalid");
   tf_window_actions_update (self);
 }

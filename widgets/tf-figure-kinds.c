@@ -115,6 +115,13 @@ set_reason (char **why_not, char *reason)
 TfFigure *
 tf_figure_new (const TfAnalysis *analysis, TfFigureKind kind, char **why_not)
 {
+  return tf_figure_new_with_results (analysis, NULL, kind, why_not);
+}
+
+TfFigure *
+tf_figure_new_with_results (const TfAnalysis *analysis, const TfResults *results,
+                            TfFigureKind kind, char **why_not)
+{
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
   g_autoptr (TfFigure) figure = NULL;
   char *reason = NULL;
@@ -134,10 +141,11 @@ tf_figure_new (const TfAnalysis *analysis, TfFigureKind kind, char **why_not)
       figure->densities = tf_density_curves_new (analysis, DENSITY_POINTS, problems);
       if (figure->densities && analysis->null_kind == TF_NULL_POINT)
         {
-          g_autoptr (TfResults) results = tf_analysis_compute (analysis, NULL);
+          g_autoptr (TfResults) computed = results ? NULL : tf_analysis_compute (analysis, NULL);
+          const TfResults *r = results ? results : computed;
           double p;
 
-          if (results && tf_results_get (results, "posterior_null", &p) && isfinite (p))
+          if (r && tf_results_get (r, "posterior_null", &p) && isfinite (p))
             figure->null_mass = p;
         }
       if (figure->densities == NULL && problems->len == 0)

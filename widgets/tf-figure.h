@@ -62,6 +62,10 @@ gboolean tf_evidence_scale_from_string (const char *name, TfEvidenceScale *scale
 typedef struct _TfFigure TfFigure;
 
 TfFigure *tf_figure_new (const TfAnalysis *analysis, TfFigureKind kind, char **why_not);
+/* The same, reusing results already computed for this analysis (NULL: computed where
+ * the figure needs them, as tf_figure_new() does). */
+TfFigure *tf_figure_new_with_results (const TfAnalysis *analysis, const TfResults *results,
+                                      TfFigureKind kind, char **why_not);
 void tf_figure_free (TfFigure *figure);
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfFigure, tf_figure_free)
 TfFigureKind tf_figure_get_kind (const TfFigure *figure);

@@ -44,6 +44,7 @@ struct _TfPlotView
 
   TfAnalysis *analysis;
   TfFigureKind kind;
+  const TfResults *results;     /* the analysis's, borrowed until the next set_analysis, or NULL */
   TfFigure *figure;             /* NULL without an analysis or when the kind does not apply */
   char *why_not;                /* why the kind does not apply, or NULL */
   guint n_computed;
@@ -156,7 +157,8 @@ recompute (TfPlotView *self)
   g_clear_pointer (&self->why_not, g_free);
   if (self->analysis)
     {
-      self->figure = tf_figure_new (self->analysis, self->kind, &self->why_not);
+      self->figure = tf_figure_new_with_results (self->analysis, self->results, self->kind,
+                                                 &self->why_not);
       self->n_computed++;
     }
   self->area_valid = FALSE;
@@ -475,7 +477,8 @@ tf_plot_view_new (void)
 }
 
 void
-tf_plot_view_set_analysis (TfPlotView *self, const TfAnalysis *analysis)
+tf_plot_view_set_analysis (TfPlotView *self, const TfAnalysis *analysis,
+                           const TfResults *results)
 {
   TfAnalysis *copy;
 
@@ -485,6 +488,7 @@ tf_plot_view_set_analysis (TfPlotView *self, const TfAnalysis *analysis)
   copy = analysis ? tf_analysis_copy (analysis) : NULL;
   g_clear_pointer (&self->analysis, tf_analysis_free);
   self->analysis = copy;
+  self->results = copy ? results : NULL;
   recompute (self);
 }
 

@@ -16,8 +16,11 @@ G_DECLARE_FINAL_TYPE (TfPlotView, tf_plot_view, TF, PLOT_VIEW, GtkWidget)
 GtkWidget *tf_plot_view_new (void);
 
 /* Draws this analysis (copied), or nothing when analysis is NULL. The figure's curves are
- * computed here, once: redraws (a resize, the dark style) reuse them. */
-void tf_plot_view_set_analysis (TfPlotView *self, const TfAnalysis *analysis);
+ * computed here, once: redraws (a resize, the dark style) reuse them. results, when not
+ * NULL, are the analysis's, computed already: the figures read them rather than compute
+ * them again. They are borrowed: the caller keeps them until the next call. */
+void tf_plot_view_set_analysis (TfPlotView *self, const TfAnalysis *analysis,
+                                const TfResults *results);
 const TfAnalysis *tf_plot_view_get_analysis (TfPlotView *self);
 
 /* The figure kind shown (the "kind" property, a TfFigureKind); setting it recomputes the

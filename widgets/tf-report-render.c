@@ -42,11 +42,12 @@ typedef struct {
 } TfReportFigures;
 
 static void
-figures_init (TfReportFigures *f, const TfAnalysis *analysis)
+figures_init (TfReportFigures *f, const TfAnalysis *analysis, const TfResults *results)
 {
   for (guint k = 0; k < TF_N_FIGURE_KINDS; k++)
     {
-      f->figures[k] = tf_figure_new (analysis, (TfFigureKind) k, &f->why_not[k]);
+      f->figures[k] = tf_figure_new_with_results (analysis, results, (TfFigureKind) k,
+                                                 &f->why_not[k]);
       f->entries[k].kind = tf_figure_kind_to_string ((TfFigureKind) k);
       f->entries[k].label = tf_figure_kind_label ((TfFigureKind) k);
       f->entries[k].why_not = f->figures[k] ? NULL : f->why_not[k];
@@ -263,7 +264,7 @@ tf_report_export (const TfAnalysis *analysis, const char *filename, const char *
       return FALSE;
     }
 
-  figures_init (&figures, analysis);
+  figures_init (&figures, analysis, results);
   report = tf_report_new (analysis, results, figures.entries, TF_N_FIGURE_KINDS, date);
   switch (format)
     {
