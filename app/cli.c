@@ -4,6 +4,7 @@
  * Exit codes: 0 done; 1 the analysis could not be computed; 2 bad usage or a bad file
  * (the message on stderr names the file, group and key; nothing is written to stdout).
  */
+#include "tf-design.h"
 #include "tf-analysis-file.h"
 #include "tf-explain.h"
 #include "tf-results.h"
@@ -145,7 +146,8 @@ command_analyse (int argc, char **argv)
     }
   if (json)
     {
-      g_autofree char *text = tf_results_to_json (analysis, results, problems);
+      g_autofree char *text = tf_results_to_json (tf_design_to_string (analysis->design), analysis->title,
+                                                  results, problems);
       fputs (text, stdout);
     }
   else

@@ -4,6 +4,7 @@
  * design stays there while another is shown.
  */
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-analysis-form.h"
 #include "tf-form-page.h"
 

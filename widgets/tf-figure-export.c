@@ -1,6 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-figure-export.c: figures to PNG, SVG and PDF files.
  */
+#include "tf-design.h"
 #include "tf-figure-export.h"
 #include "tf-figure.h"
 

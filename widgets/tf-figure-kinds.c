@@ -5,6 +5,7 @@
 #include <math.h>
 #include <string.h>
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-figure-private.h"
 
 #define DENSITY_POINTS 401

@@ -6,6 +6,7 @@
  */
 #include <math.h>
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-form-page.h"
 #include "tf-analysis-file.h"
 

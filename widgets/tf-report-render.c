@@ -1,6 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-report-render.c: a report with its figures to PDF, HTML or Markdown files.
  */
+#include "tf-design.h"
 #include "tf-report-render.h"
 #include "tf-results.h"
 #include "tf-figure-export.h"

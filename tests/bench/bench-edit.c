@@ -6,6 +6,7 @@
  * 16.7 ms. A benchmark, not a test: run it with
  * `meson test -C _build --benchmark edit` (or directly) and read the figures.
  */
+#include "tf-design.h"
 #include "tf-analysis-file.h"
 #include "tf-curves.h"
 #include "tf-figure.h"

@@ -5,6 +5,7 @@
  * whose curve the design does not provide yet is timed on a known curve built here and
  * says so. Prints medians; a benchmark, not a test: `meson test -C _build --benchmark`.
  */
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-curves.h"
 #include "tf-figure.h"

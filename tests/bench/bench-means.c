@@ -12,6 +12,7 @@
 #include <math.h>
 #include <gsl/gsl_errno.h>
 
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-curves.h"
 #include "tf-jzs.h"

@@ -5,6 +5,7 @@
  * medians. A benchmark, not a test: `meson test -C _build --benchmark`. Targets: a full
  * analysis under 20 µs, n = 10^12 at most twice n = 10^3, the curve under 1 ms.
  */
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-results.h"
 #include "tf-curves.h"

@@ -3,6 +3,7 @@
  * and for two rates, at small and at huge counts. Prints medians over many
  * repetitions. A benchmark, not a test: `meson test -C _build --benchmark`.
  */
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-results.h"
 #include "tf-one-rate.h"

@@ -5,6 +5,7 @@
  * over repetitions. A benchmark, not a test:
  * `meson test -C _build --benchmark`.
  */
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-results.h"
 

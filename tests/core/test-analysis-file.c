@@ -2,6 +2,7 @@
  * The analysis file: reading, writing, keeping unknown keys, atomic saves, and a
  * problem naming group and key for every kind of bad value.
  */
+#include "tf-design.h"
 #include "tf-analysis-file.h"
 #include "tf-results.h"
 

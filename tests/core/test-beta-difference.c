@@ -17,6 +17,7 @@
  * mp.dps 30, tanh-sinh over each half of (max(0, d), min(1, 1 + d)), the factor t^(s−1)
  * at each end removed by t = u^(1/s).
  */
+#include "tf-design.h"
 #include "tf-beta-difference.h"
 #include "tf-analysis-file.h"
 #include "tf-curves.h"

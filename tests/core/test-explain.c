@@ -2,6 +2,7 @@
  * The explanations: every design's text carries its live numbers, names its own
  * parameter, and never shows "nan" or "inf".
  */
+#include "tf-design.h"
 #include "tf-analysis-file.h"
 #include "tf-explain.h"
 #include "tf-results.h"

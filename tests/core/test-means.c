@@ -5,6 +5,7 @@
 #include <math.h>
 #include <gsl/gsl_errno.h>
 
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-results.h"
 #include "tf-curves.h"

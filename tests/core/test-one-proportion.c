@@ -9,6 +9,7 @@
 #include <glib.h>
 #include <gsl/gsl_errno.h>
 
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-results.h"
 #include "tf-curves.h"

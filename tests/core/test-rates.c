@@ -2,6 +2,7 @@
  * test-rates.c: the one-rate and two-rates designs and the Poisson numerics under them.
  * Every check value names its source; tolerances are relative unless stated.
  */
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-curves.h"
 #include "tf-poisson.h"

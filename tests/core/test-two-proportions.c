@@ -4,6 +4,7 @@
  * posterior of θA − θB). Every check value names its source; tolerances are relative
  * unless stated.
  */
+#include "tf-design.h"
 #include "tf-analysis.h"
 #include "tf-curves.h"
 #include "tf-results.h"

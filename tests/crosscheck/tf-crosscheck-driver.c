@@ -24,6 +24,7 @@
 #include <string.h>
 #include <gsl/gsl_errno.h>
 
+#include "tf-design.h"
 #include "tf-logspace.h"
 #include "tf-incbeta.h"
 #include "tf-binomial.h"

@@ -17,6 +17,7 @@
 #include <math.h>
 #include <gsl/gsl_errno.h>
 
+#include "tf-design.h"
 #include "tf-fisher.h"
 #include "tf-beta-difference.h"
 #include "tf-two-proportions.h"

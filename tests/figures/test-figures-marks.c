@@ -8,6 +8,7 @@
  */
 #include <math.h>
 #include <string.h>
+#include "tf-design.h"
 #include "tf-figure.h"
 #include "tf-figure-theme.h"
 #include "tf-axis.h"

@@ -7,6 +7,7 @@
 #include <string.h>
 #include <stdio.h>
 #include <glib/gstdio.h>
+#include "tf-design.h"
 #include "tf-figure.h"
 #include "tf-figure-export.h"
 #include "tf-figure-theme.h"

@@ -1,0 +1,72 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-design-class.h: what a design is. Each design fills one TfDesignClass in its own
+ * file (core/designs/<family>/); the registry (tf-design.c) lists them. Everything that
+ * differs between designs is here: its names, its [Data] keys, its defaults, its
+ * checks, its numbers and its curves. Nothing outside core/designs switches on a design.
+ *
+ * A NULL hook means "this design does not provide it"; callers say so.
+ */
+#pragma once
+
+#include "tf-analysis.h"
+#include "tf-curves.h"
+#include "tf-results.h"
+
+G_BEGIN_DECLS
+
+/* A required number of [Data], held in the double at offset in TfAnalysis. */
+typedef struct {
+  const char *key;
+  glong offset;
+} TfDataNumber;
+
+/* A sample of [Data] given by its values (values_key), or by its size, mean and SD.
+ * Paired lists that belong together name a partner: both or neither. */
+typedef struct {
+  const char *values_key;
+  glong values_offset;
+  const char *partner_key;
+  glong partner_offset;
+  const char *summary_keys[3];
+  glong summary_offsets[3];
+} TfDataSample;
+
+typedef struct {
+  TfDesign design;
+  const char *name;             /* the file's word: "one-proportion" */
+  const char *label;            /* for people, untranslated (N_): "One proportion" */
+
+  /* [Data] */
+  const TfDataNumber *numbers;
+  guint n_numbers;
+  const TfDataSample *samples;
+  guint n_samples;
+  gboolean known_sd;            /* takes [Data] KnownSD */
+  gboolean equal_variances;     /* takes [Data] EqualVariances */
+  /* [Null] Value is required (one-sample designs); else the default is "no difference" */
+  gboolean null_value_required;
+  gboolean model_set;           /* takes [Models] Set and Priors */
+  gboolean beta_with_scale;     /* a beta prior also writes PriorScale (a second prior) */
+
+  /* Sets the design's own defaults on an analysis that has the shared ones. */
+  void (*defaults) (TfAnalysis *analysis);
+  /* When raw values are present, computes the summaries from them; may be NULL. */
+  void (*summarise) (TfAnalysis *analysis);
+  /* Appends a problem per field that is wrong (design fields only; the fields every
+   * design shares are checked by tf_analysis_validate_shared()). */
+  void (*validate) (const TfAnalysis *analysis, GPtrArray *problems);
+  /* The analysis is valid. Adds every number, in reporting order. */
+  void (*compute) (const TfAnalysis *analysis, TfResults *results);
+  /* The analysis is valid; the arrays are allocated with curves->n points. */
+  void (*densities) (const TfAnalysis *analysis, TfDensityCurves *curves);
+  /* The analysis is valid; the arrays are allocated with curve->n points. Return FALSE
+   * and set *why_not (translated, one sentence) when the curve does not apply. */
+  gboolean (*sensitivity) (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not);
+  gboolean (*sample_size) (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not);
+  gboolean (*null_distribution) (const TfAnalysis *analysis, TfNullDistribution *dist,
+                                 char **why_not);
+  gboolean (*model_probabilities) (const TfAnalysis *analysis, TfModelProbabilities *models,
+                                   char **why_not);
+} TfDesignClass;
+
+G_END_DECLS

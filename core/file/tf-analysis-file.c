@@ -1,0 +1,500 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-analysis-file.c: reading and writing *.twofold analysis files (DESIGN.md).
+ */
+#include "tf-analysis-file-private.h"
+
+#include <errno.h>
+#include <glib/gi18n-lib.h>
+#include <math.h>
+#include <stdlib.h>
+
+/* Every key Twofold reads, in every design: these are rewritten on save, and all other
+ * keys in the source file are kept as they were. */
+static const char *const known_keys[][2] = {
+  { "Analysis", "Format" }, { "Analysis", "Design" }, { "Analysis", "Title" },
+  { "Data", "Successes" }, { "Data", "Trials" },
+  { "Data", "SuccessesA" }, { "Data", "TrialsA" }, { "Data", "SuccessesB" }, { "Data", "TrialsB" },
+  { "Data", "N" }, { "Data", "Mean" }, { "Data", "SD" }, { "Data", "Values" }, { "Data", "KnownSD" },
+  { "Data", "MeanDiff" }, { "Data", "SDDiff" }, { "Data", "ValuesA" }, { "Data", "ValuesB" },
+  { "Data", "NA" }, { "Data", "MeanA" }, { "Data", "SDA" }, { "Data", "NB" }, { "Data", "MeanB" },
+  { "Data", "SDB" }, { "Data", "EqualVariances" },
+  { "Data", "Events" }, { "Data", "Exposure" }, { "Data", "EventsA" }, { "Data", "ExposureA" },
+  { "Data", "EventsB" }, { "Data", "ExposureB" },
+  { "Null", "Kind" }, { "Null", "Value" }, { "Null", "Low" }, { "Null", "High" },
+  { "Alternative", "Direction" }, { "Alternative", "Prior" }, { "Alternative", "PriorA" },
+  { "Alternative", "PriorB" }, { "Alternative", "PriorScale" }, { "Alternative", "PriorShape" },
+  { "Alternative", "PriorRate" },
+  { "Models", "PriorNull" }, { "Models", "Set" }, { "Models", "Priors" },
+  { "Options", "Level" },
+};
+
+gboolean
+tf_reader_has (TfReader *r, const char *group, const char *key)
+{
+  return g_key_file_has_key (r->key_file, group, key, NULL);
+}
+
+char *
+tf_reader_string (TfReader *r, const char *group, const char *key)
+{
+  g_autofree char *raw = g_key_file_get_value (r->key_file, group, key, NULL);
+
+  return raw ? g_strstrip (g_strdup (raw)) : NULL;
+}
+
+/* A number in C notation; missing keys take the default when optional. */
+double
+tf_reader_number (TfReader *r, const char *group, const char *key, gboolean required,
+               double fallback)
+{
+  g_autofree char *text = tf_reader_string (r, group, key);
+  char *end = NULL;
+  double value;
+
+  if (text == NULL)
+    {
+      if (required)
+        g_ptr_array_add (r->problems,
+                         tf_problem_new (group, key, _("This key is required and missing.")));
+      return fallback;
+    }
+  if (*text == '\0')
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key, _("The value is empty; a number is needed.")));
+      return fallback;
+    }
+  errno = 0;
+  value = g_ascii_strtod (text, &end);
+  if (end == text || *end != '\0' || g_ascii_strncasecmp (text, "0x", 2) == 0
+      || g_ascii_strncasecmp (text, "-0x", 3) == 0)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key,
+                                       _("“%s” is not a number (write numbers like 0.5 or 1e-3, with a point as decimal mark)."),
+                                       text));
+      return fallback;
+    }
+  if (!isfinite (value) || (errno == ERANGE && fabs (value) > 1.0))
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key,
+                                       _("“%s” is not a finite number Twofold can use."), text));
+      return fallback;
+    }
+  return value;
+}
+
+/* A list of numbers separated by ';' (DESIGN.md), each item checked like a number. */
+GArray *
+tf_reader_list (TfReader *r, const char *group, const char *key)
+{
+  g_autofree char *text = tf_reader_string (r, group, key);
+  g_auto (GStrv) items = NULL;
+  g_autoptr (GArray) values = NULL;
+  guint count = 0;
+
+  if (text == NULL)
+    return NULL;
+  items = g_strsplit (text, ";", -1);
+  values = g_array_new (FALSE, FALSE, sizeof (double));
+  for (guint i = 0; items[i]; i++)
+    {
+      char *item = g_strstrip (items[i]);
+      char *end = NULL;
+      double v;
+
+      if (*item == '\0' && items[i + 1] == NULL && i > 0)
+        break;  /* a trailing ';' */
+      errno = 0;
+      v = g_ascii_strtod (item, &end);
+      if (*item == '\0' || end == item || *end != '\0' || !isfinite (v)
+          || (errno == ERANGE && fabs (v) > 1.0) || g_ascii_strncasecmp (item, "0x", 2) == 0)
+        {
+          g_ptr_array_add (r->problems,
+                           tf_problem_new (group, key,
+                                           _("Item %u of the list, “%s”, is not a finite number (separate values with ';' and write decimals with a point)."),
+                                           i + 1, item));
+          return NULL;
+        }
+      g_array_append_val (values, v);
+      count++;
+    }
+  if (count == 0)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new (group, key, _("The list is empty; give the values separated by ';'.")));
+      return NULL;
+    }
+  return g_steal_pointer (&values);
+}
+
+gboolean
+tf_reader_boolean (TfReader *r, const char *group, const char *key, gboolean fallback)
+{
+  g_autofree char *text = tf_reader_string (r, group, key);
+
+  if (text == NULL)
+    return fallback;
+  if (g_str_equal (text, "true"))
+    return TRUE;
+  if (g_str_equal (text, "false"))
+    return FALSE;
+  g_ptr_array_add (r->problems,
+                   tf_problem_new (group, key, _("“%s” is not allowed here; use true or false."), text));
+  return fallback;
+}
+
+/* One of a list of words. */
+static void
+reader_word (TfReader *r, const char *group, const char *key, gboolean required,
+             gboolean (*parse) (const char *, int *), int *out, const char *allowed)
+{
+  g_autofree char *text = tf_reader_string (r, group, key);
+
+  if (text == NULL)
+    {
+      if (required)
+        g_ptr_array_add (r->problems,
+                         tf_problem_new (group, key, _("This key is required and missing.")));
+      return;
+    }
+  if (!parse (text, out))
+    g_ptr_array_add (r->problems,
+                     tf_problem_new (group, key, _("“%s” is not allowed here; use one of: %s."),
+                                     text, allowed));
+}
+
+#define WORD_PARSER(name, type, fn) \
+  static gboolean name (const char *s, int *out) { type v; if (!fn (s, &v)) return FALSE; *out = (int) v; return TRUE; }
+WORD_PARSER (parse_design, TfDesign, tf_design_from_string)
+WORD_PARSER (parse_direction, TfDirection, tf_direction_from_string)
+WORD_PARSER (parse_prior, TfPriorFamily, tf_prior_family_from_string)
+WORD_PARSER (parse_null_kind, TfNullKind, tf_null_kind_from_string)
+
+/* [Models] Set (words separated by ';') and Priors (one prior probability per model;
+ * equal priors when absent). The ranges and the sum are checked by the design's
+ * validation, so that an analysis made in code is held to them too. */
+static void
+read_models (TfReader *r, TfAnalysis *a)
+{
+  g_autofree char *text = tf_reader_string (r, "Models", "Set");
+  g_auto (GStrv) words = NULL;
+  g_autoptr (GArray) priors = NULL;
+  guint n = 0;
+
+  if (text == NULL)
+    {
+      if (tf_reader_has (r, "Models", "Priors"))
+        g_ptr_array_add (r->problems,
+                         tf_problem_new ("Models", "Priors",
+                                         _("Priors gives the prior probabilities of a model set; name the models in Set.")));
+      return;
+    }
+  if (!tf_design_class (a->design)->model_set)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new ("Models", "Set",
+                                       _("A model set is available for one proportion only in this version.")));
+      return;
+    }
+  words = g_strsplit (text, ";", -1);
+  for (guint i = 0; words[i]; i++)
+    {
+      char *word = g_strstrip (words[i]);
+      TfModel model;
+
+      if (*word == '\0' && words[i + 1] == NULL && i > 0)
+        break;  /* a trailing ';' */
+      if (!tf_model_from_string (word, &model))
+        {
+          g_ptr_array_add (r->problems,
+                           tf_problem_new ("Models", "Set",
+                                           _("“%s” is not a model; use null, less, greater or two-sided, separated by ';'."),
+                                           word));
+          return;
+        }
+      if (n == TF_N_MODELS)
+        {
+          g_ptr_array_add (r->problems,
+                           tf_problem_new ("Models", "Set",
+                                           _("Set lists more than the %d models there are (null, less, greater, two-sided)."),
+                                           TF_N_MODELS));
+          return;
+        }
+      a->models[n++] = model;
+    }
+  priors = tf_reader_list (r, "Models", "Priors");
+  if (priors == NULL && tf_reader_has (r, "Models", "Priors"))
+    return;  /* the list's problem is already reported */
+  if (priors != NULL && priors->len != n)
+    {
+      g_ptr_array_add (r->problems,
+                       tf_problem_new ("Models", "Priors",
+                                       _("Priors has %u values for the %u models in Set."),
+                                       priors->len, n));
+      return;
+    }
+  for (guint i = 0; i < n; i++)
+    a->model_priors[i] = priors ? g_array_index (priors, double, i) : 1.0 / n;
+  a->n_models = n;
+}
+
+static void
+write_models (GKeyFile *key_file, const TfAnalysis *a)
+{
+  g_autoptr (GString) set = g_string_new (NULL);
+  g_autoptr (GString) priors = g_string_new (NULL);
+
+  if (a->n_models == 0)
+    return;
+  for (guint i = 0; i < a->n_models; i++)
+    {
+      g_autofree char *p = tf_format_double (a->model_priors[i]);
+      g_string_append_printf (set, "%s%s", i ? ";" : "", tf_model_to_string (a->models[i]));
+      g_string_append_printf (priors, "%s%s", i ? ";" : "", p);
+    }
+  g_key_file_set_value (key_file, "Models", "Set", set->str);
+  g_key_file_set_value (key_file, "Models", "Priors", priors->str);
+}
+
+TfAnalysis *
+tf_analysis_from_key_file (GKeyFile *key_file, GPtrArray *problems)
+{
+  TfReader r = { key_file, problems, problems->len };
+  g_autoptr (TfAnalysis) a = NULL;
+  int design = 0, word;
+  double format;
+  g_autofree char *design_words = tf_design_names_joined ();
+
+  format = tf_reader_number (&r, "Analysis", "Format", TRUE, TF_ANALYSIS_FORMAT);
+  if (problems->len == r.n_before && format != TF_ANALYSIS_FORMAT)
+    g_ptr_array_add (problems,
+                     tf_problem_new ("Analysis", "Format",
+                                     _("Format %g is not known to this version of Twofold, which reads format %d."),
+                                     format, TF_ANALYSIS_FORMAT));
+  reader_word (&r, "Analysis", "Design", TRUE, parse_design, &design, design_words);
+  if (problems->len != r.n_before)
+    return NULL;  /* without a design, the rest cannot be read */
+
+  a = tf_analysis_new ((TfDesign) design);
+  {
+    g_autofree char *title = g_key_file_get_string (key_file, "Analysis", "Title", NULL);
+    tf_analysis_set_title (a, title ? g_strstrip (title) : NULL);
+  }
+
+  tf_analysis_read_data (&r, a);
+
+  word = a->null_kind;
+  reader_word (&r, "Null", "Kind", FALSE, parse_null_kind, &word, "point, interval");
+  a->null_kind = (TfNullKind) word;
+  if (a->null_kind == TF_NULL_POINT)
+    a->null_value = tf_reader_number (&r, "Null", "Value",
+                                   tf_design_class (a->design)->null_value_required,
+                                   a->null_value);
+  else
+    {
+      a->null_low = tf_reader_number (&r, "Null", "Low", TRUE, a->null_low);
+      a->null_high = tf_reader_number (&r, "Null", "High", TRUE, a->null_high);
+    }
+
+  word = a->direction;
+  reader_word (&r, "Alternative", "Direction", FALSE, parse_direction, &word,
+               "two-sided, greater, less");
+  a->direction = (TfDirection) word;
+  word = a->prior;
+  reader_word (&r, "Alternative", "Prior", FALSE, parse_prior, &word,
+               "beta, normal, cauchy, gamma");
+  a->prior = (TfPriorFamily) word;
+  a->prior_a = tf_reader_number (&r, "Alternative", "PriorA", FALSE, a->prior_a);
+  a->prior_b = tf_reader_number (&r, "Alternative", "PriorB", FALSE, a->prior_b);
+  a->prior_scale = tf_reader_number (&r, "Alternative", "PriorScale", FALSE, a->prior_scale);
+  a->prior_shape = tf_reader_number (&r, "Alternative", "PriorShape", FALSE, a->prior_shape);
+  a->prior_rate = tf_reader_number (&r, "Alternative", "PriorRate", FALSE, a->prior_rate);
+
+  a->prior_null = tf_reader_number (&r, "Models", "PriorNull", FALSE, a->prior_null);
+  read_models (&r, a);
+  a->level = tf_reader_number (&r, "Options", "Level", FALSE, a->level);
+
+  if (problems->len != r.n_before)
+    return NULL;
+  a->source = g_key_file_ref (key_file);
+  return g_steal_pointer (&a);
+}
+
+static TfAnalysis *
+load_key_file (GKeyFile *key_file, const char *data, gsize length, GPtrArray *problems)
+{
+  g_autoptr (GError) error = NULL;
+  TfAnalysis *analysis;
+
+  if (!g_utf8_validate (data, (gssize) length, NULL))
+    {
+      g_ptr_array_add (problems, tf_problem_new ("", "", _("The file is not UTF-8 text.")));
+      return NULL;
+    }
+  if (!g_key_file_load_from_data (key_file, data, length, G_KEY_FILE_KEEP_COMMENTS, &error))
+    {
+      g_ptr_array_add (problems,
+                       tf_problem_new ("", "", _("The file is not a Twofold analysis (a key file): %s."),
+                                       error->message));
+      return NULL;
+    }
+  if (!g_key_file_has_group (key_file, "Analysis"))
+    {
+      g_ptr_array_add (problems,
+                       tf_problem_new ("Analysis", "",
+                                       _("The group [Analysis] is missing: this is not a Twofold analysis.")));
+      return NULL;
+    }
+  analysis = tf_analysis_from_key_file (key_file, problems);
+  if (analysis && !tf_analysis_validate (analysis, problems))
+    g_clear_pointer (&analysis, tf_analysis_free);
+  return analysis;
+}
+
+TfAnalysis *
+tf_analysis_load_from_data (const char *data, gsize length, GPtrArray *problems)
+{
+  g_autoptr (GKeyFile) key_file = g_key_file_new ();
+
+  return load_key_file (key_file, data, length, problems);
+}
+
+TfAnalysis *
+tf_analysis_load (const char *filename, GPtrArray *problems)
+{
+  g_autoptr (GError) error = NULL;
+  g_autofree char *data = NULL;
+  gsize length = 0;
+
+  if (!g_file_get_contents (filename, &data, &length, &error))
+    {
+      g_ptr_array_add (problems, tf_problem_new ("", "", _("The file cannot be read: %s."),
+                                                 error->message));
+      return NULL;
+    }
+  return tf_analysis_load_from_data (data, length, problems);
+}
+
+void
+tf_key_file_set_number (GKeyFile *key_file, const char *group, const char *key, double value)
+{
+  g_autofree char *text = tf_format_double (value);
+
+  g_key_file_set_value (key_file, group, key, text);
+}
+
+void
+tf_key_file_set_list (GKeyFile *key_file, const char *group, const char *key, const GArray *values)
+{
+  g_autoptr (GString) text = g_string_new (NULL);
+
+  for (guint i = 0; i < values->len; i++)
+    {
+      g_autofree char *item = tf_format_double (g_array_index (values, double, i));
+
+      if (i > 0)
+        g_string_append_c (text, ';');
+      g_string_append (text, item);
+    }
+  g_key_file_set_value (key_file, group, key, text->str);
+}
+
+GKeyFile *
+tf_analysis_to_key_file (const TfAnalysis *a)
+{
+  GKeyFile *key_file = g_key_file_new ();
+
+  /* The groups come first in the order of DESIGN.md, then whatever else the source had. */
+  g_key_file_set_integer (key_file, "Analysis", "Format", TF_ANALYSIS_FORMAT);
+  g_key_file_set_value (key_file, "Analysis", "Design", tf_design_to_string (a->design));
+  if (a->title)
+    g_key_file_set_string (key_file, "Analysis", "Title", a->title);
+
+  tf_analysis_write_data (key_file, a);
+
+  g_key_file_set_value (key_file, "Null", "Kind", tf_null_kind_to_string (a->null_kind));
+  if (a->null_kind == TF_NULL_POINT)
+    tf_key_file_set_number (key_file, "Null", "Value", a->null_value);
+  else
+    {
+      tf_key_file_set_number (key_file, "Null", "Low", a->null_low);
+      tf_key_file_set_number (key_file, "Null", "High", a->null_high);
+    }
+
+  g_key_file_set_value (key_file, "Alternative", "Direction", tf_direction_to_string (a->direction));
+  g_key_file_set_value (key_file, "Alternative", "Prior", tf_prior_family_to_string (a->prior));
+  switch (a->prior)
+    {
+    case TF_PRIOR_BETA:
+      tf_key_file_set_number (key_file, "Alternative", "PriorA", a->prior_a);
+      tf_key_file_set_number (key_file, "Alternative", "PriorB", a->prior_b);
+      /* two proportions' second Bayes factor: a normal prior on the log odds ratio */
+      if (tf_design_class (a->design)->beta_with_scale)
+        tf_key_file_set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
+      break;
+    case TF_PRIOR_NORMAL:
+    case TF_PRIOR_CAUCHY:
+      tf_key_file_set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
+      break;
+    case TF_PRIOR_GAMMA:
+      tf_key_file_set_number (key_file, "Alternative", "PriorShape", a->prior_shape);
+      tf_key_file_set_number (key_file, "Alternative", "PriorRate", a->prior_rate);
+      break;
+    }
+  tf_key_file_set_number (key_file, "Models", "PriorNull", a->prior_null);
+  write_models (key_file, a);
+  tf_key_file_set_number (key_file, "Options", "Level", a->level);
+
+  /* Keep what Twofold does not know. */
+  if (a->source)
+    {
+      g_auto (GStrv) groups = g_key_file_get_groups (a->source, NULL);
+
+      for (guint g = 0; groups[g]; g++)
+        {
+          g_auto (GStrv) keys = g_key_file_get_keys (a->source, groups[g], NULL, NULL);
+
+          for (guint k = 0; keys && keys[k]; k++)
+            {
+              gboolean known = FALSE;
+
+              for (guint i = 0; i < G_N_ELEMENTS (known_keys) && !known; i++)
+                known = g_str_equal (known_keys[i][0], groups[g])
+                        && g_str_equal (known_keys[i][1], keys[k]);
+              if (!known)
+                {
+                  g_autofree char *value = g_key_file_get_value (a->source, groups[g], keys[k], NULL);
+                  g_autofree char *comment = g_key_file_get_comment (a->source, groups[g], keys[k], NULL);
+
+                  g_key_file_set_value (key_file, groups[g], keys[k], value);
+                  if (comment)
+                    g_key_file_set_comment (key_file, groups[g], keys[k], comment, NULL);
+                }
+            }
+        }
+    }
+  return key_file;
+}
+
+char *
+tf_analysis_to_data (const TfAnalysis *analysis, gsize *length)
+{
+  g_autoptr (GKeyFile) key_file = tf_analysis_to_key_file (analysis);
+
+  return g_key_file_to_data (key_file, length, NULL);
+}
+
+gboolean
+tf_analysis_save (const TfAnalysis *analysis, const char *filename, GError **error)
+{
+  gsize length = 0;
+  g_autofree char *data = tf_analysis_to_data (analysis, &length);
+
+  /* CONSISTENT: written to a temporary file in the same folder and renamed over the
+   * target, so a crash leaves either the old file or the new one, never half of one. */
+  return g_file_set_contents_full (filename, data, (gssize) length,
+                                   G_FILE_SET_CONTENTS_CONSISTENT | G_FILE_SET_CONTENTS_DURABLE,
+                                   0666, error);
+}
