@@ -1,6 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-analysis-file-private.h: the key readers and writers that tf-analysis-file.c and
- * tf-analysis-data.c share. Each reader appends a problem naming the group and key.
+ * tf-analysis-file-private.h: the key readers and writers (tf-key-file.c) that
+ * tf-analysis-file.c and tf-analysis-data.c share. Each reader appends a problem naming the group and key.
  */
 #pragma once
 
