@@ -274,26 +274,3 @@ tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistribution *d
   dist->p_value = exp (t.lp_exact);
   return TRUE;
 }
-
-#define OFF(field) G_STRUCT_OFFSET (TfAnalysis, field)
-
-static const TfDataNumber numbers[] = {
-  { "Events", OFF (events) },
-  { "Exposure", OFF (exposure) },
-};
-
-const TfDesignClass tf_one_rate_class = {
-  .design = TF_DESIGN_ONE_RATE,
-  .name = "one-rate",
-  .label = N_("One rate"),
-  .numbers = numbers,
-  .n_numbers = G_N_ELEMENTS (numbers),
-  .null_value_required = TRUE,
-  .defaults = tf_rates_defaults,
-  .validate = tf_one_rate_validate,
-  .compute = tf_one_rate_compute,
-  .densities = tf_one_rate_densities,
-  .sensitivity = tf_rates_sensitivity,
-  .sample_size = tf_one_rate_sample_size,
-  .null_distribution = tf_one_rate_null_distribution,
-};

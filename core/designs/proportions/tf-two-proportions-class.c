@@ -1,0 +1,40 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-two-proportions-class.c: the class of two proportions: successes in trials in groups A and B, against no difference (or θA − θB = d).
+ */
+#include "tf-two-proportions.h"
+
+#include <glib/gi18n-lib.h>
+
+#define OFF(field) G_STRUCT_OFFSET (TfAnalysis, field)
+
+static const TfDataNumber numbers[] = {
+  { "SuccessesA", OFF (successes_a) },
+  { "TrialsA", OFF (trials_a) },
+  { "SuccessesB", OFF (successes_b) },
+  { "TrialsB", OFF (trials_b) },
+};
+
+/* No difference under the null; uniform Beta(1, 1) priors. */
+static void
+defaults (TfAnalysis *analysis)
+{
+  analysis->null_value = 0.0;
+  analysis->prior = TF_PRIOR_BETA;
+}
+
+const TfDesignClass tf_two_proportions_class = {
+  .design = TF_DESIGN_TWO_PROPORTIONS,
+  .name = "two-proportions",
+  .label = N_("Two proportions"),
+  .numbers = numbers,
+  .n_numbers = G_N_ELEMENTS (numbers),
+  .beta_with_scale = TRUE,
+  .defaults = defaults,
+  .validate = tf_two_proportions_validate,
+  .compute = tf_two_proportions_compute,
+  .densities = tf_two_proportions_densities,
+  .sensitivity = tf_two_proportions_sensitivity,
+  .sample_size = tf_two_proportions_sample_size,
+  .null_distribution = tf_two_proportions_null_distribution,
+  .model_probabilities = tf_two_proportions_model_probabilities,
+};

@@ -1,0 +1,30 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later
+ * tf-one-rate-class.c: the class of one Poisson rate: events over an exposure against λ = λ0.
+ */
+#include "tf-one-rate.h"
+#include "tf-rates-curves.h"
+
+#include <glib/gi18n-lib.h>
+
+#define OFF(field) G_STRUCT_OFFSET (TfAnalysis, field)
+
+static const TfDataNumber numbers[] = {
+  { "Events", OFF (events) },
+  { "Exposure", OFF (exposure) },
+};
+
+const TfDesignClass tf_one_rate_class = {
+  .design = TF_DESIGN_ONE_RATE,
+  .name = "one-rate",
+  .label = N_("One rate"),
+  .numbers = numbers,
+  .n_numbers = G_N_ELEMENTS (numbers),
+  .null_value_required = TRUE,
+  .defaults = tf_rates_defaults,
+  .validate = tf_one_rate_validate,
+  .compute = tf_one_rate_compute,
+  .densities = tf_one_rate_densities,
+  .sensitivity = tf_rates_sensitivity,
+  .sample_size = tf_one_rate_sample_size,
+  .null_distribution = tf_one_rate_null_distribution,
+};
