@@ -100,3 +100,37 @@ tf_analysis_write_data (GKeyFile *k, const TfAnalysis *a)
   if (klass->equal_variances)
     g_key_file_set_value (k, "Data", "EqualVariances", a->equal_variances ? "true" : "false");
 }
+
+/* Whether any design reads this [Data] key. */
+static gboolean
+class_reads (const TfDesignClass *klass, const char *key)
+{
+  for (guint i = 0; i < klass->n_numbers; i++)
+    if (g_str_equal (klass->numbers[i].key, key))
+      return TRUE;
+  for (guint i = 0; i < klass->n_samples; i++)
+    {
+      const TfDataSample *s = &klass->samples[i];
+
+      if (g_strcmp0 (s->values_key, key) == 0 || g_strcmp0 (s->partner_key, key) == 0)
+        return TRUE;
+      for (guint j = 0; j < G_N_ELEMENTS (s->summary_keys); j++)
+        if (g_strcmp0 (s->summary_keys[j], key) == 0)
+          return TRUE;
+    }
+  return (klass->known_sd && g_str_equal (key, "KnownSD"))
+         || (klass->equal_variances && g_str_equal (key, "EqualVariances"));
+}
+
+gboolean
+tf_analysis_data_key_known (const char *key)
+{
+  for (guint d = 0; d < TF_N_DESIGNS; d++)
+    {
+      const TfDesignClass *klass = tf_design_class ((TfDesign) d);
+
+      if (klass && class_reads (klass, key))
+        return TRUE;
+    }
+  return FALSE;
+}

@@ -31,5 +31,7 @@ void tf_key_file_set_list (GKeyFile *key_file, const char *group, const char *ke
 /* The [Data] keys of the analysis's design (tf-analysis-data.c). */
 void tf_analysis_read_data (TfReader *r, TfAnalysis *analysis);
 void tf_analysis_write_data (GKeyFile *key_file, const TfAnalysis *analysis);
+/* Whether some design reads this [Data] key (a key no design reads is kept on save). */
+gboolean tf_analysis_data_key_known (const char *key);
 
 G_END_DECLS

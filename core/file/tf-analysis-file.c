@@ -8,18 +8,11 @@
 #include <math.h>
 #include <stdlib.h>
 
-/* Every key Twofold reads, in every design: these are rewritten on save, and all other
- * keys in the source file are kept as they were. */
+/* Every key Twofold reads outside [Data] (whose keys come from the designs' classes):
+ * these are rewritten on save, and all other keys in the source file are kept as they
+ * were. */
 static const char *const known_keys[][2] = {
   { "Analysis", "Format" }, { "Analysis", "Design" }, { "Analysis", "Title" },
-  { "Data", "Successes" }, { "Data", "Trials" },
-  { "Data", "SuccessesA" }, { "Data", "TrialsA" }, { "Data", "SuccessesB" }, { "Data", "TrialsB" },
-  { "Data", "N" }, { "Data", "Mean" }, { "Data", "SD" }, { "Data", "Values" }, { "Data", "KnownSD" },
-  { "Data", "MeanDiff" }, { "Data", "SDDiff" }, { "Data", "ValuesA" }, { "Data", "ValuesB" },
-  { "Data", "NA" }, { "Data", "MeanA" }, { "Data", "SDA" }, { "Data", "NB" }, { "Data", "MeanB" },
-  { "Data", "SDB" }, { "Data", "EqualVariances" },
-  { "Data", "Events" }, { "Data", "Exposure" }, { "Data", "EventsA" }, { "Data", "ExposureA" },
-  { "Data", "EventsB" }, { "Data", "ExposureB" },
   { "Null", "Kind" }, { "Null", "Value" }, { "Null", "Low" }, { "Null", "High" },
   { "Alternative", "Direction" }, { "Alternative", "Prior" }, { "Alternative", "PriorA" },
   { "Alternative", "PriorB" }, { "Alternative", "PriorScale" }, { "Alternative", "PriorShape" },
@@ -78,7 +71,9 @@ read_models (TfReader *r, TfAnalysis *a)
     {
       g_ptr_array_add (r->problems,
                        tf_problem_new ("Models", "Set",
-                                       _("A model set is available for one proportion only in this version.")));
+                                       /* TRANSLATORS: %s is a design, "One proportion" */
+                                       _("A model set is not available for the design “%s” in this version."),
+                                       tf_design_label (a->design)));
       return;
     }
   words = g_strsplit (text, ";", -1);
@@ -317,7 +312,8 @@ tf_analysis_to_key_file (const TfAnalysis *a)
 
           for (guint k = 0; keys && keys[k]; k++)
             {
-              gboolean known = FALSE;
+              gboolean known = g_str_equal (groups[g], "Data")
+                               && tf_analysis_data_key_known (keys[k]);
 
               for (guint i = 0; i < G_N_ELEMENTS (known_keys) && !known; i++)
                 known = g_str_equal (known_keys[i][0], groups[g])
