@@ -36,6 +36,36 @@ typedef struct {
   const char *name;             /* the file's word: "one-proportion" */
   const char *label;            /* for people, untranslated (N_): "One proportion" */
 
+  /* Words (core/text reads them; nothing there names a design) */
+  /* What the estimate and the confidence interval are about (N_): "the proportion θ". */
+  const char *estimand;
+  /* What the prior and the credible interval are about when that is not the estimand
+   * (N_): "the standardised effect δ"; NULL: the estimand. */
+  const char *parameter;
+  /* What the credible interval is of when that is not the estimand's symbol: "δ"; NULL. */
+  const char *credible_of;
+  /* The parameter in the null "%s = 0.5": a symbol ("θ", "μA − μB", "λA/λB") or words
+   * marked N_ ("the mean difference"); read through gettext. */
+  const char *symbol;
+  /* The parameter an interval null is on, when not symbol ("δ"); NULL: symbol. */
+  const char *interval_symbol;
+  /* The point null 0 ("no difference") in words of its own: "θA = θB"; NULL: "symbol = 0". */
+  const char *no_difference;
+  /* One prior on each group's parameter, not on their difference or ratio: "θA and θB". */
+  const char *group_parameters;
+  /* The data in one sentence, translated: "The data: 9700 successes in 12000 trials." */
+  char *(*data_words) (const TfAnalysis *analysis);
+  /* The published name of the main confidence interval's method, which also names the
+   * main test where they are one ("t", "Welch"); translated. */
+  const char *(*interval_method) (const TfAnalysis *analysis);
+  /* A sentence added to what the Bayes factor does not say, translated; NULL: none. */
+  const char *(*bayes_factor_note) (const TfAnalysis *analysis);
+  /* When the readings disagree: appends the design's own conditions that make them (each
+   * sentence after a space) and returns how many hold. NULL: the design names none. */
+  guint (*disagreement_conditions) (const TfAnalysis *analysis, GString *text);
+  /* Said last when none of those conditions holds (N_); NULL: nothing. */
+  const char *no_condition_words;
+
   /* [Data] */
   const TfDataNumber *numbers;
   guint n_numbers;

@@ -3,6 +3,7 @@
  * the live numbers. The side pane and the reports read the same text.
  */
 #include "tf-explain.h"
+#include "tf-design.h"
 #include "tf-diagnostic.h"
 
 #include <glib/gi18n-lib.h>
@@ -58,71 +59,39 @@ direction_words (TfDirection direction)
   return _("data no more probable under it than those observed");
 }
 
-/* The quantity the confidence interval is about, in words. */
+/* The quantity the estimate and the confidence interval are about, in words. */
 static const char *
-estimand_words (TfDesign design)
+estimand_words (const TfAnalysis *a)
 {
-  switch (design)
-    {
-    case TF_DESIGN_ONE_PROPORTION: return _("the proportion θ");
-    case TF_DESIGN_TWO_PROPORTIONS: return _("the difference θA − θB");
-    case TF_DESIGN_ONE_MEAN: return _("the mean μ");
-    case TF_DESIGN_PAIRED_MEANS: return _("the mean difference within pairs");
-    case TF_DESIGN_TWO_MEANS: return _("the difference of means μA − μB");
-    case TF_DESIGN_ONE_RATE: return _("the rate λ");
-    case TF_DESIGN_TWO_RATES: return _("the rate ratio λA/λB");
-    case TF_N_DESIGNS: break;
-    }
-  return "";
+  return _(tf_design_class (a->design)->estimand);
 }
 
-/* The parameter the Bayesian numbers are about: the means designs put their prior on
- * the standardised effect δ. */
+/* The parameter the Bayesian numbers are about, when the design puts its prior on
+ * another (the standardised effect δ). */
 static const char *
-parameter_words (TfDesign design)
+parameter_words (const TfAnalysis *a)
 {
-  switch (design)
-    {
-    case TF_DESIGN_ONE_MEAN:
-    case TF_DESIGN_PAIRED_MEANS:
-    case TF_DESIGN_TWO_MEANS:
-      return _("the standardised effect δ");
-    default:
-      return estimand_words (design);
-    }
+  const TfDesignClass *klass = tf_design_class (a->design);
+
+  return klass->parameter ? _(klass->parameter) : _(klass->estimand);
 }
 
-/* The null model in words, e.g. "θ = 0.5". */
+/* The null model in words, e.g. "θ = 0.5", "δ between -0.1 and 0.1", "θA = θB". */
 static char *
 null_words (const TfAnalysis *a)
 {
+  const TfDesignClass *klass = tf_design_class (a->design);
   g_autofree char *value = tf_format_value (a->null_value, TF_MEASURE_ESTIMATE);
   g_autofree char *low = tf_format_value (a->null_low, TF_MEASURE_ESTIMATE);
   g_autofree char *high = tf_format_value (a->null_high, TF_MEASURE_ESTIMATE);
-  const char *name;
 
-  switch (a->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION: name = "θ"; break;
-    case TF_DESIGN_TWO_PROPORTIONS: return g_strdup ("θA = θB");
-    case TF_DESIGN_ONE_MEAN: name = "μ"; break;
-    case TF_DESIGN_PAIRED_MEANS: name = _("the mean difference"); break;
-    case TF_DESIGN_TWO_MEANS: name = "μA − μB"; break;
-    case TF_DESIGN_ONE_RATE: name = "λ"; break;
-    case TF_DESIGN_TWO_RATES: name = "λA/λB"; break;
-    case TF_N_DESIGNS:
-    default: name = "?"; break;
-    }
   if (a->null_kind == TF_NULL_INTERVAL)
-    {
-      if (a->design == TF_DESIGN_ONE_MEAN || a->design == TF_DESIGN_PAIRED_MEANS
-          || a->design == TF_DESIGN_TWO_MEANS)
-        name = "δ";
-      return g_strdup_printf (_("%s between %s and %s"), name, low, high);
-    }
-  if (a->design == TF_DESIGN_TWO_RATES && a->null_value == 0.0)
-    return g_strdup ("λA = λB");
-  return g_strdup_printf ("%s = %s", name, value);
+    return g_strdup_printf (_("%s between %s and %s"),
+                            _(klass->interval_symbol ? klass->interval_symbol : klass->symbol),
+                            low, high);
+  if (klass->no_difference && a->null_value == 0.0)
+    return g_strdup (klass->no_difference);
+  return g_strdup_printf ("%s = %s", _(klass->symbol), value);
 }
 
 /* The prior under the alternative, e.g. "Beta(1, 1)" or "Cauchy(0, 0.7071)". */
@@ -151,28 +120,14 @@ prior_words (const TfAnalysis *a)
   return g_strdup ("?");
 }
 
-/* The two-sample count designs put one prior on each group's parameter, not on the
- * difference or ratio: "θA and θB each spread as Beta(1, 1), independently". */
-static const char *
-group_parameters (TfDesign design)
-{
-  switch (design)
-    {
-    case TF_DESIGN_TWO_PROPORTIONS:
-      return "θA and θB";
-    case TF_DESIGN_TWO_RATES:
-      return "λA and λB";
-    default:
-      return NULL;
-    }
-}
-
 static char *
 alternative_words (const TfAnalysis *a)
 {
   g_autofree char *prior = prior_words (a);
-  const char *what = parameter_words (a->design);
-  const char *groups = group_parameters (a->design);
+  const char *what = parameter_words (a);
+  /* A design may put one prior on each group's parameter, not on the difference or
+   * ratio: "θA and θB each spread as Beta(1, 1), independently". */
+  const char *groups = tf_design_class (a->design)->group_parameters;
 
   if (groups)
     {
@@ -233,26 +188,24 @@ explain_confidence (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
                           "to %s. It holds the values that a test at that level would not "
                           "reject; the procedure covers the true value in %g%% of repeated "
                           "samples."),
-                        estimand_words (a->design), est, percent, lo, hi, percent),
+                        estimand_words (a), est, percent, lo, hi, percent),
        g_strdup_printf (_("It does not say that the true value lies in this interval with probability %g%%: "
                           "that reading belongs to the credible interval, under a prior. Nor does "
                           "it weigh the null against an alternative."),
                         percent));
 }
 
-/* Under Welch's test the classical numbers do not assume equal SDs, but the Bayes
- * factors, δ and its intervals come from Student's pooled t: the reader is told. */
+/* What the Bayes factor does not say, and the design's note on it when it has one. */
 static char *
-welch_bayes_note (const TfAnalysis *a, const char *text)
+bayes_factor_does_not (const TfAnalysis *a)
 {
-  if (a->design != TF_DESIGN_TWO_MEANS || a->equal_variances)
-    return g_strdup (text);
-  return g_strdup_printf ("%s %s", text,
-                          _("Here the Bayes factor and the standardised effect δ assume that the "
-                            "two groups share one SD: they use Student's pooled t, while the "
-                            "p-value and the confidence interval are Welch's and do not assume "
-                            "it. When the SDs differ much, the two readings can disagree for "
-                            "that reason alone."));
+  const TfDesignClass *klass = tf_design_class (a->design);
+  const char *text = _("It is not a probability of either model, and it depends on the prior under "
+                       "the alternative: a wider prior spreads its predictions thinner and so favours "
+                       "the null more. It says nothing of models that were not compared.");
+  const char *note = klass->bayes_factor_note ? klass->bayes_factor_note (a) : NULL;
+
+  return note ? g_strdup_printf ("%s %s", text, note) : g_strdup (text);
 }
 
 static void
@@ -275,9 +228,7 @@ explain_bayes_factor (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
                           "data: the null, %s, and the alternative, %s. The data were BF₀₁ times "
                           "as probable under the null as under the alternative. %s"),
                         bf01, bf10, h0, h1, leaning),
-       welch_bayes_note (a, _("It is not a probability of either model, and it depends on the prior under "
-                              "the alternative: a wider prior spreads its predictions thinner and so favours "
-                              "the null more. It says nothing of models that were not compared.")));
+       bayes_factor_does_not (a));
 }
 
 static void
@@ -307,7 +258,7 @@ explain_credible (GPtrArray *list, const TfAnalysis *a, const TfResults *r)
   add (list, _("The credible interval"),
        g_strdup_printf (_("If the alternative model holds, %s lies between %s and %s with "
                           "probability %g%%, given its prior and the data (equal tails)."),
-                        parameter_words (a->design), lo, hi, percent),
+                        parameter_words (a), lo, hi, percent),
        g_strdup (_("It is conditional on the alternative: it gives the null value no special "
                    "weight and is no test of it. Whether the null value falls inside says "
                    "little about the null model; the Bayes factor speaks to that.")));

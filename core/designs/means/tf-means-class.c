@@ -96,10 +96,98 @@ means_defaults (TfAnalysis *analysis)
   .sample_size = class_sample_size,                  \
   .null_distribution = class_null_distribution
 
+/* "group A: n = 12, mean 3.1, SD 0.8 (from the 12 values given)"; inputs as the file
+ * holds them (shortest round-trip digits). */
+static char *
+sample_words (const char *name, double n, double mean, double sd, const GArray *values)
+{
+  g_autofree char *sn = tf_format_double (n), *sm = tf_format_double (mean);
+  g_autofree char *ss = tf_format_double (sd);
+  g_autofree char *from = values ? g_strdup_printf (_(" (from the %u values given)"), values->len)
+                                 : g_strdup ("");
+
+  /* TRANSLATORS: "group A: n = 12, mean 3.1, SD 0.8 (from the 12 values given)" */
+  return g_strdup_printf (_("%s: n = %s, mean %s, SD %s%s"), name, sn, sm, ss, from);
+}
+
+/* One sample (of values or of differences within pairs), its SD estimated or known. */
+static char *
+one_sample_data_words (const TfAnalysis *a, const char *name, const GArray *values)
+{
+  g_autofree char *sample = sample_words (name, a->n, a->mean, a->sd, values);
+  g_autofree char *sd = NULL;
+
+  if (!a->has_known_sd)
+    return g_strdup_printf (_("The data: %s."), sample);
+  sd = tf_format_double (a->known_sd);
+  return g_strdup_printf (_("The data: %s; the SD is taken as known, %s (a z test)."), sample, sd);
+}
+
+static char *
+one_mean_data_words (const TfAnalysis *a)
+{
+  return one_sample_data_words (a, _("one sample"), a->values);
+}
+
+static char *
+paired_means_data_words (const TfAnalysis *a)
+{
+  return one_sample_data_words (a, _("differences A − B within pairs"), a->values_a);
+}
+
+static char *
+two_means_data_words (const TfAnalysis *a)
+{
+  g_autofree char *ga = sample_words (_("group A"), a->n_a, a->mean_a, a->sd_a, a->values_a);
+  g_autofree char *gb = sample_words (_("group B"), a->n_b, a->mean_b, a->sd_b, a->values_b);
+
+  return g_strdup_printf (a->equal_variances
+                          ? _("The data: %s; %s. The variances are taken as equal (Student).")
+                          : _("The data: %s; %s. The variances are not taken as equal (Welch)."),
+                          ga, gb);
+}
+
+static const char *
+one_sample_interval_method (const TfAnalysis *analysis)
+{
+  return analysis->has_known_sd ? _("z") : _("t");
+}
+
+static const char *
+two_means_interval_method (const TfAnalysis *analysis)
+{
+  return analysis->equal_variances ? _("Student") : _("Welch");
+}
+
+/* Under Welch's test the classical numbers do not assume equal SDs, but the Bayes
+ * factors, δ and its intervals come from Student's pooled t: the reader is told. */
+static const char *
+two_means_bayes_factor_note (const TfAnalysis *analysis)
+{
+  if (analysis->equal_variances)
+    return NULL;
+  return _("Here the Bayes factor and the standardised effect δ assume that the "
+           "two groups share one SD: they use Student's pooled t, while the "
+           "p-value and the confidence interval are Welch's and do not assume "
+           "it. When the SDs differ much, the two readings can disagree for "
+           "that reason alone.");
+}
+
+/* The prior, the credible interval and an interval null are on the standardised effect. */
+#define MEANS_WORDS                                  \
+  .parameter = N_("the standardised effect δ"),      \
+  .credible_of = "δ",                                \
+  .interval_symbol = "δ"
+
 const TfDesignClass tf_one_mean_class = {
   .design = TF_DESIGN_ONE_MEAN,
   .name = "one-mean",
   .label = N_("One mean"),
+  .estimand = N_("the mean μ"),
+  .symbol = "μ",
+  .data_words = one_mean_data_words,
+  .interval_method = one_sample_interval_method,
+  MEANS_WORDS,
   .samples = one_mean_samples,
   .n_samples = G_N_ELEMENTS (one_mean_samples),
   .known_sd = TRUE,
@@ -113,6 +201,11 @@ const TfDesignClass tf_paired_means_class = {
   .design = TF_DESIGN_PAIRED_MEANS,
   .name = "paired-means",
   .label = N_("Paired means"),
+  .estimand = N_("the mean difference within pairs"),
+  .symbol = N_("the mean difference"),
+  .data_words = paired_means_data_words,
+  .interval_method = one_sample_interval_method,
+  MEANS_WORDS,
   .samples = paired_means_samples,
   .n_samples = G_N_ELEMENTS (paired_means_samples),
   .summarise = tf_paired_means_summarise,
@@ -124,6 +217,12 @@ const TfDesignClass tf_two_means_class = {
   .design = TF_DESIGN_TWO_MEANS,
   .name = "two-means",
   .label = N_("Two means"),
+  .estimand = N_("the difference of means μA − μB"),
+  .symbol = "μA − μB",
+  .data_words = two_means_data_words,
+  .interval_method = two_means_interval_method,
+  .bayes_factor_note = two_means_bayes_factor_note,
+  MEANS_WORDS,
   .samples = two_means_samples,
   .n_samples = G_N_ELEMENTS (two_means_samples),
   .equal_variances = TRUE,

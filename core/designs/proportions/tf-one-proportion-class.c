@@ -6,6 +6,7 @@
 #include "tf-one-proportion-private.h"
 
 #include <glib/gi18n-lib.h>
+#include <math.h>
 
 #define OFF(field) G_STRUCT_OFFSET (TfAnalysis, field)
 
@@ -24,10 +25,91 @@ defaults (TfAnalysis *analysis)
   analysis->trials = 20;
 }
 
+static char *
+data_words (const TfAnalysis *a)
+{
+  g_autofree char *k = tf_format_double (a->successes), *n = tf_format_double (a->trials);
+
+  return g_strdup_printf (_("The data: %s successes in %s trials."), k, n);
+}
+
+static const char *
+interval_method (const TfAnalysis *analysis)
+{
+  return _("Clopper–Pearson");
+}
+
+/* Thresholds of the disagreement's conditions, common practice: a sample is large from
+ * 10^4, an effect is small when it is under half the prior's SD, a null is precise when
+ * it is a point or narrower than a tenth of the prior's SD, and a prior is diffuse when
+ * its SD exceeds ten posterior SDs. */
+#define LARGE_N 1e4
+#define SMALL_EFFECT 0.5
+#define PRECISE_NULL 0.1
+#define DIFFUSE_PRIOR 10.0
+
+static double
+beta_sd (double a, double b)
+{
+  double s = a + b;
+  return sqrt (a * b / (s * s * (s + 1.0)));
+}
+
+/* Lindley's paradox (Lindley 1957) and its kin: large n, small effect, precise null,
+ * diffuse prior. */
+static guint
+disagreement_conditions (const TfAnalysis *an, GString *text)
+{
+  const double k = an->successes, n = an->trials;
+  double L = an->null_kind == TF_NULL_POINT ? an->null_value : an->null_low;
+  double H = an->null_kind == TF_NULL_POINT ? an->null_value : an->null_high;
+  double est = k / n;
+  double effect = est < L ? L - est : est > H ? est - H : 0.0;
+  double prior_sd = beta_sd (an->prior_a, an->prior_b);
+  double post_sd = beta_sd (k + an->prior_a, n - k + an->prior_b);
+  guint held = 0;
+
+  if (n >= LARGE_N)
+    {
+      g_string_append_printf (text,
+                              _(" The sample is large (n = %.0f): at a fixed p-value the Bayes factor for a point null grows like √n."),
+                              n);
+      held++;
+    }
+  if (effect < SMALL_EFFECT * prior_sd)
+    {
+      g_string_append_printf (text,
+                              _(" The effect is small: the estimate lies %.3g from the null, under half the prior's SD (%.3g), so the alternative spent most of its prior on values the data rule out."),
+                              effect, prior_sd);
+      held++;
+    }
+  if (H - L < PRECISE_NULL * prior_sd)
+    {
+      g_string_append (text, an->null_kind == TF_NULL_POINT
+                       ? _(" The null is precise: a single value, which takes all its prior probability to one point.")
+                       : _(" The null is precise: its interval is narrower than a tenth of the prior's SD."));
+      held++;
+    }
+  if (prior_sd > DIFFUSE_PRIOR * post_sd)
+    {
+      g_string_append_printf (text,
+                              _(" The prior is diffuse: its SD (%.3g) is more than ten times the posterior's (%.3g), which penalises the alternative for its spread."),
+                              prior_sd, post_sd);
+      held++;
+    }
+  return held;
+}
+
 const TfDesignClass tf_one_proportion_class = {
   .design = TF_DESIGN_ONE_PROPORTION,
   .name = "one-proportion",
   .label = N_("One proportion"),
+  .estimand = N_("the proportion θ"),
+  .symbol = "θ",
+  .data_words = data_words,
+  .interval_method = interval_method,
+  .disagreement_conditions = disagreement_conditions,
+  .no_condition_words = N_(" None of large n, small effect, precise null or diffuse prior holds here."),
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
   .null_value_required = TRUE,

@@ -22,10 +22,32 @@ defaults (TfAnalysis *analysis)
   analysis->prior = TF_PRIOR_BETA;
 }
 
+static char *
+data_words (const TfAnalysis *a)
+{
+  g_autofree char *ka = tf_format_double (a->successes_a), *na = tf_format_double (a->trials_a);
+  g_autofree char *kb = tf_format_double (a->successes_b), *nb = tf_format_double (a->trials_b);
+
+  return g_strdup_printf (_("The data: %s successes in %s trials in group A, %s in %s in group B."),
+                          ka, na, kb, nb);
+}
+
+static const char *
+interval_method (const TfAnalysis *analysis)
+{
+  return _("Newcombe");
+}
+
 const TfDesignClass tf_two_proportions_class = {
   .design = TF_DESIGN_TWO_PROPORTIONS,
   .name = "two-proportions",
   .label = N_("Two proportions"),
+  .estimand = N_("the difference θA − θB"),
+  .symbol = "θA − θB",
+  .no_difference = "θA = θB",
+  .group_parameters = "θA and θB",
+  .data_words = data_words,
+  .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
   .beta_with_scale = TRUE,

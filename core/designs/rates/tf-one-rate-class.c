@@ -13,10 +13,28 @@ static const TfDataNumber numbers[] = {
   { "Exposure", OFF (exposure) },
 };
 
+static char *
+data_words (const TfAnalysis *a)
+{
+  g_autofree char *events = tf_format_double (a->events), *exposure = tf_format_double (a->exposure);
+
+  return g_strdup_printf (_("The data: %s events over an exposure of %s."), events, exposure);
+}
+
+static const char *
+interval_method (const TfAnalysis *analysis)
+{
+  return _("Garwood");
+}
+
 const TfDesignClass tf_one_rate_class = {
   .design = TF_DESIGN_ONE_RATE,
   .name = "one-rate",
   .label = N_("One rate"),
+  .estimand = N_("the rate λ"),
+  .symbol = "λ",
+  .data_words = data_words,
+  .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
   .null_value_required = TRUE,
