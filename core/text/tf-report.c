@@ -5,6 +5,7 @@
  */
 #include "tf-report.h"
 #include "tf-analysis-file.h"
+#include "tf-design.h"
 #include "tf-diagnostic.h"
 #include "tf-explain.h"
 
@@ -128,61 +129,6 @@ tf_report_section_of (const TfNumber *number)
 
 /* Inputs are shown exactly as the file holds them: shortest round-trip digits. */
 #define NUM(x) tf_format_double (x)
-
-static char *
-sample_words (const char *name, double n, double mean, double sd, const GArray *values)
-{
-  g_autofree char *sn = NUM (n), *sm = NUM (mean), *ss = NUM (sd);
-  g_autofree char *from = values ? g_strdup_printf (_(" (from the %u values given)"), values->len)
-                                 : g_strdup ("");
-
-  /* TRANSLATORS: "group A: n = 12, mean 3.1, SD 0.8 (from the 12 values given)" */
-  return g_strdup_printf (_("%s: n = %s, mean %s, SD %s%s"), name, sn, sm, ss, from);
-}
-
-/* The data in one sentence, e.g. "9700 successes in 12000 trials." */
-static char *
-data_words (const TfAnalysis *a)
-{
-  g_autofree char *w = NULL, *x = NULL, *y = NULL, *z = NULL;
-
-  switch (a->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      w = NUM (a->successes), x = NUM (a->trials);
-      return g_strdup_printf (_("The data: %s successes in %s trials."), w, x);
-    case TF_DESIGN_TWO_PROPORTIONS:
-      w = NUM (a->successes_a), x = NUM (a->trials_a), y = NUM (a->successes_b), z = NUM (a->trials_b);
-      return g_strdup_printf (_("The data: %s successes in %s trials in group A, %s in %s in group B."),
-                              w, x, y, z);
-    case TF_DESIGN_ONE_MEAN:
-    case TF_DESIGN_PAIRED_MEANS:
-      w = a->design == TF_DESIGN_ONE_MEAN
-          ? sample_words (_("one sample"), a->n, a->mean, a->sd, a->values)
-          : sample_words (_("differences A − B within pairs"), a->n, a->mean, a->sd, a->values_a);
-      if (!a->has_known_sd)
-        return g_strdup_printf (_("The data: %s."), w);
-      x = NUM (a->known_sd);
-      return g_strdup_printf (_("The data: %s; the SD is taken as known, %s (a z test)."), w, x);
-    case TF_DESIGN_TWO_MEANS:
-      w = sample_words (_("group A"), a->n_a, a->mean_a, a->sd_a, a->values_a);
-      x = sample_words (_("group B"), a->n_b, a->mean_b, a->sd_b, a->values_b);
-      return g_strdup_printf (a->equal_variances
-                              ? _("The data: %s; %s. The variances are taken as equal (Student).")
-                              : _("The data: %s; %s. The variances are not taken as equal (Welch)."),
-                              w, x);
-    case TF_DESIGN_ONE_RATE:
-      w = NUM (a->events), x = NUM (a->exposure);
-      return g_strdup_printf (_("The data: %s events over an exposure of %s."), w, x);
-    case TF_DESIGN_TWO_RATES:
-      w = NUM (a->events_a), x = NUM (a->exposure_a), y = NUM (a->events_b), z = NUM (a->exposure_b);
-      return g_strdup_printf (_("The data: %s events over an exposure of %s in group A, %s over %s in group B."),
-                              w, x, y, z);
-    case TF_N_DESIGNS:
-      break;
-    }
-  return g_strdup ("");
-}
 
 static char *
 hypotheses_words (const TfAnalysis *a)
@@ -391,7 +337,7 @@ tf_report_new (const TfAnalysis *analysis, const TfResults *results,
   add_text (report, TF_REPORT_CAUTION, tf_caution_text ());
 
   add_text (report, TF_REPORT_HEADING, _("The design"));
-  add_block (report, TF_REPORT_PARAGRAPH, NULL, data_words (analysis));
+  add_block (report, TF_REPORT_PARAGRAPH, NULL, tf_design_class (analysis->design)->data_words (analysis));
   add_block (report, TF_REPORT_PARAGRAPH, NULL, hypotheses_words (analysis));
   add_block (report, TF_REPORT_PARAGRAPH, NULL, models_words (analysis));
   add_text (report, TF_REPORT_SUBHEADING, _("Inputs, as in the analysis file"));
