@@ -72,6 +72,32 @@ test_every_design (void)
     }
 }
 
+/* core/text reads every design's words from its class and names no design: each class
+ * gives those the text cannot do without, and its data sentence for its defaults. */
+static void
+test_class_words (void)
+{
+  for (int d = 0; d < TF_N_DESIGNS; d++)
+    {
+      const TfDesignClass *klass = tf_design_class (d);
+      g_autoptr (TfAnalysis) a = NULL;
+      g_autofree char *data = NULL;
+
+      if (klass == NULL)
+        continue;
+      g_assert_nonnull (klass->estimand);
+      g_assert_nonnull (klass->symbol);
+      g_assert_nonnull (klass->data_words);
+      g_assert_nonnull (klass->interval_method);
+      g_assert_true (klass->no_condition_words == NULL || klass->disagreement_conditions != NULL);
+      a = tf_analysis_new (d);
+      data = klass->data_words (a);
+      g_assert_true (g_str_has_prefix (data, "The data: "));
+      g_assert_null (strstr (data, "(null)"));
+      g_assert_nonnull (klass->interval_method (a));
+    }
+}
+
 /* The caution every report and the About window carry. */
 static void
 test_caution (void)
@@ -87,6 +113,7 @@ main (int argc, char **argv)
   gsl_set_error_handler_off ();
   g_test_init (&argc, &argv, NULL);
   g_test_add_func ("/explain/every-design", test_every_design);
+  g_test_add_func ("/explain/class-words", test_class_words);
   g_test_add_func ("/explain/caution", test_caution);
   return g_test_run ();
 }
