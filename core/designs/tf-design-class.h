@@ -1,8 +1,9 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-design-class.h: what a design is. Each design fills one TfDesignClass in its own
  * file (core/designs/<family>/); the registry (tf-design.c) lists them. Everything that
- * differs between designs is here: its names, its [Data] keys, its defaults, its
- * checks, its numbers and its curves. Nothing outside core/designs switches on a design.
+ * differs between designs is here: its names, its words, its [Data] keys, its defaults,
+ * its checks, its numbers and its curves. Nothing outside core/designs switches on a
+ * design.
  *
  * A NULL hook means "this design does not provide it"; callers say so.
  */
