@@ -25,6 +25,16 @@ G_DEFINE_FINAL_TYPE (TfAnalysisForm, tf_analysis_form, GTK_TYPE_WIDGET)
 enum { SIGNAL_CHANGED, N_SIGNALS };
 static guint signals[N_SIGNALS];
 
+/* The design a new form shows: the registry's first. */
+static TfDesign
+first_design (void)
+{
+  for (guint d = 0; d < TF_N_DESIGNS; d++)
+    if (tf_design_class ((TfDesign) d))
+      return (TfDesign) d;
+  g_return_val_if_reached ((TfDesign) 0);
+}
+
 static TfFormPage *
 current_page (TfAnalysisForm *self)
 {
@@ -58,9 +68,9 @@ tf_analysis_form_get_design (TfAnalysisForm *self)
 {
   guint selected;
 
-  g_return_val_if_fail (TF_IS_ANALYSIS_FORM (self), TF_DESIGN_ONE_PROPORTION);
+  g_return_val_if_fail (TF_IS_ANALYSIS_FORM (self), first_design ());
   selected = gtk_drop_down_get_selected (self->design_dropdown);
-  return selected < TF_N_DESIGNS ? (TfDesign) selected : TF_DESIGN_ONE_PROPORTION;
+  return selected < TF_N_DESIGNS ? (TfDesign) selected : first_design ();
 }
 
 void
@@ -148,7 +158,7 @@ tf_analysis_form_show_problems (TfAnalysisForm *self, GPtrArray *problems)
       TfFormPage *page = &self->page[d];
       gboolean current = page == current_page (self);
 
-      for (guint i = 0; i < page->info->n_fields; i++)
+      for (guint i = 0; i < page->klass->n_fields; i++)
         {
           TfFormFieldWidgets *field = &page->fields[i];
           const TfProblem *problem = NULL;
@@ -318,7 +328,7 @@ tf_analysis_form_init (TfAnalysisForm *self)
       tf_form_page_fill (&self->page[d], defaults);
     }
   gtk_drop_down_set_model (self->design_dropdown, G_LIST_MODEL (designs));
-  gtk_drop_down_set_selected (self->design_dropdown, TF_DESIGN_ONE_PROPORTION);
+  gtk_drop_down_set_selected (self->design_dropdown, (guint) first_design ());
   show_page (self);
   self->updating = FALSE;
   g_signal_connect_swapped (self->design_dropdown, "notify::selected",

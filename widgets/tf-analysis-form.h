@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-analysis-form.h: the form of every design: a design chooser, then the fields of the
  * chosen design (its data, null value, direction, prior, prior probability of the null
- * and level), built from the table in tf-form-fields.c. Each design keeps its own fields,
+ * and level), built from the fields of its class in the registry (TfDesignClass.fields);
+ * the chooser lists the registry's designs. Each design keeps its own fields,
  * so switching to another design and back finds what was typed there.
  */
 #pragma once

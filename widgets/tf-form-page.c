@@ -1,6 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-form-page.c: the page of one design in TfAnalysisForm. Every field of the design's
- * table gets the same kind of row: label, input, hint, and the problem's message under
+ * class (TfDesignClass.fields) gets the same kind of row: label, input, hint, and the problem's message under
  * it; two fields marked as a pair share a row. Numbers parse with g_ascii_strtod, so the
  * decimal mark is '.' as in the analysis file, whatever the locale.
  */
@@ -44,7 +44,7 @@ tf_form_page_field_shown (const TfFormPage *page, const TfFormFieldWidgets *fiel
 TfFormFieldWidgets *
 tf_form_page_find (TfFormPage *page, const char *group, const char *key)
 {
-  for (guint i = 0; i < page->info->n_fields; i++)
+  for (guint i = 0; i < page->klass->n_fields; i++)
     if (g_strcmp0 (page->fields[i].info->group, group) == 0
         && g_strcmp0 (page->fields[i].info->key, key) == 0)
       return &page->fields[i];
@@ -54,7 +54,7 @@ tf_form_page_find (TfFormPage *page, const char *group, const char *key)
 static void
 update_visibility (TfFormPage *page)
 {
-  for (guint i = 0; i < page->info->n_fields; i++)
+  for (guint i = 0; i < page->klass->n_fields; i++)
     {
       TfFormFieldWidgets *field = &page->fields[i];
 
@@ -256,21 +256,21 @@ tf_form_page_build (TfFormPage *page, TfDesign design, void (*changed) (gpointer
   page->changed = changed;
   page->data = data;
 
-  page->info = tf_form_design (design);
-  page->fields = g_new0 (TfFormFieldWidgets, page->info->n_fields);
+  page->klass = tf_design_class (design);
+  page->fields = g_new0 (TfFormFieldWidgets, page->klass->n_fields);
   page->box = gtk_box_new (GTK_ORIENTATION_VERTICAL, 8);
-  for (guint i = 0; i < page->info->n_fields; i++)
+  for (guint i = 0; i < page->klass->n_fields; i++)
     {
-      const TfFormField *info = &page->info->fields[i];
+      const TfFormField *info = &page->klass->fields[i];
       GtkGrid *grid = GTK_GRID (gtk_grid_new ());
-      gboolean pair = info->pair && i + 1 < page->info->n_fields;
+      gboolean pair = info->pair && i + 1 < page->klass->n_fields;
 
       if ((int) info->section != section)
         {
           section = (int) info->section;
           gtk_box_append (GTK_BOX (page->box), heading_new (_(section_titles[section]),
                                                             section == 0));
-          if (section == TF_SECTION_DATA && page->info->has_modes)
+          if (section == TF_SECTION_DATA && page->klass->n_samples > 0)
             gtk_box_append (GTK_BOX (page->box), modes_new (page));
         }
       gtk_grid_set_column_spacing (grid, 12);
@@ -280,7 +280,7 @@ tf_form_page_build (TfFormPage *page, TfDesign design, void (*changed) (gpointer
       field_build (page, &page->fields[i], grid, 0, pair ? 1 : 2, 3);
       if (pair)
         {
-          page->fields[i + 1].info = &page->info->fields[i + 1];
+          page->fields[i + 1].info = &page->klass->fields[i + 1];
           field_build (page, &page->fields[i + 1], grid, 1, 1, 4);
           i++;
         }
@@ -346,7 +346,7 @@ tf_form_page_fill (TfFormPage *page, const TfAnalysis *analysis)
   TfAnalysis *a = (TfAnalysis *) analysis;    /* read only */
   gboolean raw = FALSE;
 
-  for (guint i = 0; i < page->info->n_fields; i++)
+  for (guint i = 0; i < page->klass->n_fields; i++)
     {
       TfFormFieldWidgets *field = &page->fields[i];
       const TfFormField *info = field->info;
@@ -399,6 +399,19 @@ tf_form_page_fill (TfFormPage *page, const TfAnalysis *analysis)
   update_visibility (page);
 }
 
+/* The field's label without its mnemonic mark, translated: "Successes". */
+static char *
+form_field_name (const TfFormField *field)
+{
+  const char *label = _(field->label);
+  GString *name = g_string_new (NULL);
+
+  for (const char *p = label; *p; p++)
+    if (*p != '_')
+      g_string_append_c (name, *p);
+  return g_string_free (name, FALSE);
+}
+
 /* Numbers as the file writes them: the whole text, finite, '.' as decimal mark. */
 static gboolean
 parse_number (const char *text, double *value)
@@ -417,7 +430,7 @@ parse_field_number (TfFormFieldWidgets *field, double *value, GPtrArray *problem
 {
   g_autofree char *raw = tf_form_field_get_text (field);
   char *text = g_strstrip (raw);
-  g_autofree char *name = tf_form_field_name (field->info);
+  g_autofree char *name = form_field_name (field->info);
 
   if (*text == '\0')
     {
@@ -444,7 +457,7 @@ parse_field_list (TfFormFieldWidgets *field, GPtrArray *problems)
   g_autofree char *text = tf_form_field_get_text (field);
   g_auto (GStrv) items = g_strsplit_set (text, "; \t\r\n", -1);
   g_autoptr (GArray) values = g_array_new (FALSE, FALSE, sizeof (double));
-  g_autofree char *name = tf_form_field_name (field->info);
+  g_autofree char *name = form_field_name (field->info);
 
   for (guint i = 0; items[i]; i++)
     {
@@ -478,16 +491,17 @@ gboolean
 tf_form_page_apply (TfFormPage *page, TfAnalysis *analysis, GPtrArray *problems)
 {
   gboolean ok = TRUE, raw = tf_form_page_get_raw (page);
+  g_autoptr (TfAnalysis) defaults = tf_analysis_new (page->klass->design);
 
-  analysis->design = page->info->design;
+  analysis->design = page->klass->design;
   analysis->null_kind = TF_NULL_POINT;
-  analysis->prior = page->info->prior;
+  analysis->prior = defaults->prior;    /* the design's family, when no field chooses it */
   /* only the chosen design's lists, and only when its raw values are shown */
   tf_analysis_set_values (&analysis->values, NULL);
   tf_analysis_set_values (&analysis->values_a, NULL);
   tf_analysis_set_values (&analysis->values_b, NULL);
 
-  for (guint i = 0; i < page->info->n_fields; i++)
+  for (guint i = 0; i < page->klass->n_fields; i++)
     {
       TfFormFieldWidgets *field = &page->fields[i];
       const TfFormField *info = field->info;

@@ -1,12 +1,12 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-form-page.h: inside TfAnalysisForm: the page of one design, built from its field
- * table (tf-form-fields.c), filled from an analysis and read back into one.
+ * tf-form-page.h: inside TfAnalysisForm: the page of one design, built from the fields
+ * of its class (TfDesignClass.fields), filled from an analysis and read back into one.
  */
 #pragma once
 
 #include <gtk/gtk.h>
 #include "tf-analysis.h"
-#include "tf-form-fields.h"
+#include "tf-design.h"
 
 G_BEGIN_DECLS
 
@@ -22,11 +22,11 @@ typedef struct {
 } TfFormFieldWidgets;
 
 typedef struct {
-  const TfFormDesign *info;
+  const TfDesignClass *klass;
   GtkWidget *box;
-  GtkToggleButton *values_button;       /* NULL when the design has no modes */
+  GtkToggleButton *values_button;       /* NULL when the design has no samples */
   GtkToggleButton *summaries_button;
-  TfFormFieldWidgets *fields;           /* info->n_fields */
+  TfFormFieldWidgets *fields;           /* klass->n_fields */
   void (*changed) (gpointer data);      /* any edit of the page */
   gpointer data;
 } TfFormPage;

@@ -11,6 +11,7 @@
 
 #include "tf-analysis.h"
 #include "tf-curves.h"
+#include "tf-form-field.h"
 #include "tf-results.h"
 
 G_BEGIN_DECLS
@@ -78,6 +79,11 @@ typedef struct {
   gboolean null_value_required;
   gboolean model_set;           /* takes [Models] Set and Priors */
   gboolean beta_with_scale;     /* a beta prior also writes PriorScale (a second prior) */
+
+  /* The form and the numbers' methods (widgets read them; none names a design) */
+  const TfFormField *fields;    /* the form's fields in order; with samples, each field
+                                 * shows with the summaries, the raw values or both */
+  guint n_fields;
 
   /* Sets the design's own defaults on an analysis that has the shared ones. */
   void (*defaults) (TfAnalysis *analysis);

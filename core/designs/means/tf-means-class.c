@@ -7,6 +7,7 @@
 #include "tf-means.h"
 #include "tf-one-mean.h"
 #include "tf-two-means.h"
+#include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
 
@@ -87,6 +88,81 @@ means_defaults (TfAnalysis *analysis)
   analysis->prior = TF_PRIOR_CAUCHY;
   analysis->null_value = 0.0;
 }
+
+static const char *const one_mean_directions[] = {
+  N_("Two-sided: μ ≠ μ₀"), N_("Greater: μ > μ₀"), N_("Less: μ < μ₀"), NULL,
+};
+
+static const TfFormField one_mean_fields[] = {
+  FORM_DATA ("N", N_("Sample size _n"), N_("Number of observations"), TF_FIELD_COUNT,
+             TF_SHOWN_SUMMARIES, TRUE, n),
+  FORM_DATA ("Mean", N_("_Mean"), N_("Sample mean"), TF_FIELD_NUMBER, TF_SHOWN_SUMMARIES,
+             FALSE, mean),
+  FORM_DATA ("SD", N_("_SD"), N_("Sample standard deviation s"), TF_FIELD_POSITIVE,
+             TF_SHOWN_SUMMARIES, FALSE, sd),
+  FORM_DATA ("Values", N_("_Values"), N_("Separated by ‘;’, spaces or new lines"),
+             TF_FIELD_LIST, TF_SHOWN_VALUES, FALSE, values),
+  { .group = "Data", .key = "KnownSD", .label = N_("_Known SD σ"),
+    .hint = N_("On when σ is known: a z test in place of t"), .kind = TF_FIELD_OPTIONAL_NUMBER,
+    .section = TF_SECTION_DATA, .offset = OFF (known_sd), .flag_offset = OFF (has_known_sd) },
+  FORM_NULL_VALUE (N_("_Null mean μ₀"), N_("The mean the null model states"), TF_FIELD_NUMBER),
+  FORM_DIRECTION (one_mean_directions),
+  FORM_EFFECT_PRIOR,
+  FORM_MODELS_AND_OPTIONS,
+};
+
+static const char *const paired_means_directions[] = {
+  N_("Two-sided: μ of A − B ≠ Δ₀"), N_("Greater: μ of A − B > Δ₀"),
+  N_("Less: μ of A − B < Δ₀"), NULL,
+};
+
+static const TfFormField paired_means_fields[] = {
+  FORM_DATA ("N", N_("_Pairs n"), N_("Number of pairs"), TF_FIELD_COUNT, TF_SHOWN_SUMMARIES,
+             TRUE, n),
+  FORM_DATA ("MeanDiff", N_("_Mean difference"), N_("Mean of A − B"), TF_FIELD_NUMBER,
+             TF_SHOWN_SUMMARIES, FALSE, mean),
+  FORM_DATA ("SDDiff", N_("_SD of the differences"), N_("Standard deviation of A − B"),
+             TF_FIELD_POSITIVE, TF_SHOWN_SUMMARIES, FALSE, sd),
+  FORM_DATA ("ValuesA", N_("Values _A"), N_("One per pair"), TF_FIELD_LIST, TF_SHOWN_VALUES,
+             TRUE, values_a),
+  FORM_DATA ("ValuesB", N_("Values _B"), N_("In the same order as A"), TF_FIELD_LIST,
+             TF_SHOWN_VALUES, FALSE, values_b),
+  FORM_NULL_VALUE (N_("_Null difference Δ₀"),
+                   N_("Mean of A − B under the null; 0 is no difference"), TF_FIELD_NUMBER),
+  FORM_DIRECTION (paired_means_directions),
+  FORM_EFFECT_PRIOR,
+  FORM_MODELS_AND_OPTIONS,
+};
+
+static const char *const two_means_directions[] = {
+  N_("Two-sided: μA − μB ≠ Δ₀"), N_("Greater: μA − μB > Δ₀"), N_("Less: μA − μB < Δ₀"), NULL,
+};
+
+static const TfFormField two_means_fields[] = {
+  FORM_DATA ("NA", N_("Size of _A"), N_("Observations in A"), TF_FIELD_COUNT,
+             TF_SHOWN_SUMMARIES, TRUE, n_a),
+  FORM_DATA ("NB", N_("Size of _B"), N_("Observations in B"), TF_FIELD_COUNT,
+             TF_SHOWN_SUMMARIES, FALSE, n_b),
+  FORM_DATA ("MeanA", N_("_Mean of A"), N_("Sample mean of A"), TF_FIELD_NUMBER,
+             TF_SHOWN_SUMMARIES, TRUE, mean_a),
+  FORM_DATA ("MeanB", N_("M_ean of B"), N_("Sample mean of B"), TF_FIELD_NUMBER,
+             TF_SHOWN_SUMMARIES, FALSE, mean_b),
+  FORM_DATA ("SDA", N_("_SD of A"), N_("Sample SD of A"), TF_FIELD_POSITIVE,
+             TF_SHOWN_SUMMARIES, TRUE, sd_a),
+  FORM_DATA ("SDB", N_("S_D of B"), N_("Sample SD of B"), TF_FIELD_POSITIVE,
+             TF_SHOWN_SUMMARIES, FALSE, sd_b),
+  FORM_DATA ("ValuesA", N_("Values of _A"), N_("Separated by ‘;’, spaces or new lines"),
+             TF_FIELD_LIST, TF_SHOWN_VALUES, TRUE, values_a),
+  FORM_DATA ("ValuesB", N_("Values of _B"), N_("Group B, the same way"), TF_FIELD_LIST,
+             TF_SHOWN_VALUES, FALSE, values_b),
+  FORM_DATA ("EqualVariances", N_("E_qual variances"), N_("On: Student’s t; off: Welch’s t"),
+             TF_FIELD_SWITCH, TF_SHOWN_ALWAYS, FALSE, equal_variances),
+  FORM_NULL_VALUE (N_("_Null difference Δ₀"), N_("μA − μB under the null; 0 is no difference"),
+                   TF_FIELD_NUMBER),
+  FORM_DIRECTION (two_means_directions),
+  FORM_EFFECT_PRIOR,
+  FORM_MODELS_AND_OPTIONS,
+};
 
 #define MEANS_HOOKS                                  \
   .defaults = means_defaults,                        \
@@ -190,6 +266,8 @@ const TfDesignClass tf_one_mean_class = {
   MEANS_WORDS,
   .samples = one_mean_samples,
   .n_samples = G_N_ELEMENTS (one_mean_samples),
+  .fields = one_mean_fields,
+  .n_fields = G_N_ELEMENTS (one_mean_fields),
   .known_sd = TRUE,
   .null_value_required = TRUE,
   .summarise = tf_one_mean_summarise,
@@ -208,6 +286,8 @@ const TfDesignClass tf_paired_means_class = {
   MEANS_WORDS,
   .samples = paired_means_samples,
   .n_samples = G_N_ELEMENTS (paired_means_samples),
+  .fields = paired_means_fields,
+  .n_fields = G_N_ELEMENTS (paired_means_fields),
   .summarise = tf_paired_means_summarise,
   .validate = tf_one_mean_validate,
   MEANS_HOOKS,
@@ -225,6 +305,8 @@ const TfDesignClass tf_two_means_class = {
   MEANS_WORDS,
   .samples = two_means_samples,
   .n_samples = G_N_ELEMENTS (two_means_samples),
+  .fields = two_means_fields,
+  .n_fields = G_N_ELEMENTS (two_means_fields),
   .equal_variances = TRUE,
   .summarise = tf_two_means_summarise,
   .validate = tf_two_means_validate,

@@ -4,6 +4,7 @@
  */
 #include "tf-one-proportion.h"
 #include "tf-one-proportion-private.h"
+#include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
@@ -99,6 +100,21 @@ disagreement_conditions (const TfAnalysis *an, GString *text)
     }
   return held;
 }
+static const char *const directions[] = {
+  N_("Two-sided: θ ≠ θ₀"), N_("Greater: θ > θ₀"), N_("Less: θ < θ₀"), NULL,
+};
+
+static const TfFormField fields[] = {
+  FORM_DATA ("Successes", N_("_Successes"), N_("Trials with the outcome"), TF_FIELD_COUNT,
+             TF_SHOWN_ALWAYS, TRUE, successes),
+  FORM_DATA ("Trials", N_("_Trials"), N_("All trials, n"), TF_FIELD_COUNT, TF_SHOWN_ALWAYS,
+             FALSE, trials),
+  FORM_NULL_VALUE (N_("_Null value θ₀"), N_("The proportion the null model states"),
+                   TF_FIELD_PROBABILITY),
+  FORM_DIRECTION (directions),
+  FORM_BETA_PRIOR (N_("Beta prior of θ")),
+  FORM_MODELS_AND_OPTIONS,
+};
 
 const TfDesignClass tf_one_proportion_class = {
   .design = TF_DESIGN_ONE_PROPORTION,
@@ -112,6 +128,8 @@ const TfDesignClass tf_one_proportion_class = {
   .no_condition_words = N_(" None of large n, small effect, precise null or diffuse prior holds here."),
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
+  .fields = fields,
+  .n_fields = G_N_ELEMENTS (fields),
   .null_value_required = TRUE,
   .model_set = TRUE,
   .defaults = defaults,

@@ -2,6 +2,7 @@
  * tf-two-proportions-class.c: the class of two proportions: successes in trials in groups A and B, against no difference (or θA − θB = d).
  */
 #include "tf-two-proportions.h"
+#include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
 
@@ -37,6 +38,27 @@ interval_method (const TfAnalysis *analysis)
 {
   return _("Newcombe");
 }
+static const char *const directions[] = {
+  N_("Two-sided: θA − θB ≠ Δ₀"), N_("Greater: θA − θB > Δ₀"), N_("Less: θA − θB < Δ₀"), NULL,
+};
+
+static const TfFormField fields[] = {
+  FORM_DATA ("SuccessesA", N_("_Successes in A"), N_("With the outcome"),
+             TF_FIELD_COUNT, TF_SHOWN_ALWAYS, TRUE, successes_a),
+  FORM_DATA ("TrialsA", N_("_Trials in A"), N_("All of group A"), TF_FIELD_COUNT,
+             TF_SHOWN_ALWAYS, FALSE, trials_a),
+  FORM_DATA ("SuccessesB", N_("S_uccesses in B"), N_("With the outcome"),
+             TF_FIELD_COUNT, TF_SHOWN_ALWAYS, TRUE, successes_b),
+  FORM_DATA ("TrialsB", N_("T_rials in B"), N_("All of group B"), TF_FIELD_COUNT,
+             TF_SHOWN_ALWAYS, FALSE, trials_b),
+  FORM_NULL_VALUE (N_("_Null difference Δ₀"), N_("θA − θB under the null; 0 is no difference"),
+                   TF_FIELD_NUMBER),
+  FORM_DIRECTION (directions),
+  FORM_BETA_PRIOR (N_("Beta prior of each group’s θ")),
+  FORM_ALT ("PriorScale", N_("SD of the log odds ratio _prior"),
+            N_("Normal prior on ln OR, for the second Bayes factor"), FALSE, prior_scale),
+  FORM_MODELS_AND_OPTIONS,
+};
 
 const TfDesignClass tf_two_proportions_class = {
   .design = TF_DESIGN_TWO_PROPORTIONS,
@@ -50,6 +72,8 @@ const TfDesignClass tf_two_proportions_class = {
   .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
+  .fields = fields,
+  .n_fields = G_N_ELEMENTS (fields),
   .beta_with_scale = TRUE,
   .defaults = defaults,
   .validate = tf_two_proportions_validate,

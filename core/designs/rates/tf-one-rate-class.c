@@ -3,6 +3,7 @@
  */
 #include "tf-one-rate.h"
 #include "tf-rates-curves.h"
+#include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
 
@@ -26,6 +27,21 @@ interval_method (const TfAnalysis *analysis)
 {
   return _("Garwood");
 }
+static const char *const directions[] = {
+  N_("Two-sided: λ ≠ λ₀"), N_("Greater: λ > λ₀"), N_("Less: λ < λ₀"), NULL,
+};
+
+static const TfFormField fields[] = {
+  FORM_DATA ("Events", N_("_Events"), N_("Events counted"), TF_FIELD_COUNT, TF_SHOWN_ALWAYS,
+             TRUE, events),
+  FORM_DATA ("Exposure", N_("E_xposure"), N_("Time, area or volume observed"),
+             TF_FIELD_POSITIVE, TF_SHOWN_ALWAYS, FALSE, exposure),
+  FORM_NULL_VALUE (N_("_Null rate λ₀"), N_("Events per unit of exposure under the null"),
+                   TF_FIELD_POSITIVE),
+  FORM_DIRECTION (directions),
+  FORM_GAMMA_PRIOR (N_("Gamma prior of λ")),
+  FORM_MODELS_AND_OPTIONS,
+};
 
 const TfDesignClass tf_one_rate_class = {
   .design = TF_DESIGN_ONE_RATE,
@@ -37,6 +53,8 @@ const TfDesignClass tf_one_rate_class = {
   .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
+  .fields = fields,
+  .n_fields = G_N_ELEMENTS (fields),
   .null_value_required = TRUE,
   .defaults = tf_rates_defaults,
   .validate = tf_one_rate_validate,

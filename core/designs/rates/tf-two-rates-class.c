@@ -3,6 +3,7 @@
  */
 #include "tf-two-rates.h"
 #include "tf-rates-curves.h"
+#include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
 
@@ -30,6 +31,25 @@ interval_method (const TfAnalysis *analysis)
 {
   return _("conditional Clopper–Pearson");
 }
+static const char *const directions[] = {
+  N_("Two-sided: λA ÷ λB ≠ ρ₀"), N_("Greater: λA ÷ λB > ρ₀"), N_("Less: λA ÷ λB < ρ₀"), NULL,
+};
+
+static const TfFormField fields[] = {
+  FORM_DATA ("EventsA", N_("_Events in A"), N_("Counted in group A"), TF_FIELD_COUNT,
+             TF_SHOWN_ALWAYS, TRUE, events_a),
+  FORM_DATA ("ExposureA", N_("E_xposure of A"), N_("Observed in group A"), TF_FIELD_POSITIVE,
+             TF_SHOWN_ALWAYS, FALSE, exposure_a),
+  FORM_DATA ("EventsB", N_("E_vents in B"), N_("Counted in group B"), TF_FIELD_COUNT,
+             TF_SHOWN_ALWAYS, TRUE, events_b),
+  FORM_DATA ("ExposureB", N_("Ex_posure of B"), N_("Observed in group B"), TF_FIELD_POSITIVE,
+             TF_SHOWN_ALWAYS, FALSE, exposure_b),
+  FORM_NULL_VALUE (N_("_Null rate ratio ρ₀"), N_("λA ÷ λB under the null; 1 is no difference"),
+                   TF_FIELD_POSITIVE),
+  FORM_DIRECTION (directions),
+  FORM_GAMMA_PRIOR (N_("Gamma prior of each group’s λ")),
+  FORM_MODELS_AND_OPTIONS,
+};
 
 const TfDesignClass tf_two_rates_class = {
   .design = TF_DESIGN_TWO_RATES,
@@ -43,6 +63,8 @@ const TfDesignClass tf_two_rates_class = {
   .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
+  .fields = fields,
+  .n_fields = G_N_ELEMENTS (fields),
   .defaults = tf_rates_defaults,
   .validate = tf_two_rates_validate,
   .compute = tf_two_rates_compute,

@@ -1,12 +1,12 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-form-fields.h: the fields of every design's form, as a table that one form widget
- * (TfAnalysisForm) reads. Each field is named by its group and key in the analysis file
- * (DESIGN.md), so that a TfProblem finds the field it is about.
+ * tf-form-field.h: a field of a design's form. Each design's class lists its fields
+ * (TfDesignClass.fields); the form widget builds the same kind of row for each. A field
+ * is named by its group and key in the analysis file (DESIGN.md), so that a TfProblem
+ * finds the field it is about.
  */
 #pragma once
 
 #include <glib.h>
-#include "tf-analysis.h"
 
 G_BEGIN_DECLS
 
@@ -51,18 +51,5 @@ typedef struct {
   const char *const *choices;   /* CHOICE: N_() labels, NULL-terminated */
   const int *choice_values;     /* CHOICE: the enum value of each label */
 } TfFormField;
-
-typedef struct {
-  TfDesign design;
-  gboolean has_modes;           /* summaries or raw values */
-  const TfFormField *fields;
-  guint n_fields;
-  TfPriorFamily prior;          /* the prior family when no field chooses it */
-} TfFormDesign;
-
-const TfFormDesign *tf_form_design (TfDesign design);
-
-/* The field's label without its mnemonic mark, translated: "Successes". */
-char *tf_form_field_name (const TfFormField *field);
 
 G_END_DECLS
