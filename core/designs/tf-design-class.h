@@ -33,6 +33,14 @@ typedef struct {
   glong summary_offsets[3];
 } TfDataSample;
 
+/* An interval a design reports, as the limits "<stem>_low" and "<stem>_high": its
+ * published method and what it is of, when that is not the design's own parameter. */
+typedef struct {
+  const char *stem;
+  const char *method;           /* N_(): "Wilson"; NULL: none, or method_of gives it */
+  const char *of;               /* N_(): "the odds ratio"; NULL: the design's parameter */
+} TfIntervalMethod;
+
 typedef struct {
   TfDesign design;
   const char *name;             /* the file's word: "one-proportion" */
@@ -84,6 +92,12 @@ typedef struct {
   const TfFormField *fields;    /* the form's fields in order; with samples, each field
                                  * shows with the summaries, the raw values or both */
   guint n_fields;
+  const TfIntervalMethod *intervals;    /* its own intervals; cri and hdi are everyone's */
+  guint n_intervals;
+  const char *credible_of;      /* N_(): what cri and hdi are of, when not the parameter */
+  /* The translated method of number id when it depends on the analysis ("t" or "z"),
+   * else NULL (then the intervals' table says); may be NULL. */
+  const char *(*method_of) (const TfAnalysis *analysis, const char *id);
 
   /* Sets the design's own defaults on an analysis that has the shared ones. */
   void (*defaults) (TfAnalysis *analysis);

@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-design.c: the designs this version of Twofold computes, and the analysis's life
- * through them: defaults, raw values, validation and computation. Adding a design is
- * one class in its own file and one line in the table below.
+ * through them: defaults, raw values, validation, computation and the methods of its
+ * intervals. Adding a design is one class in its own file and one line in the table
+ * below.
  */
 #include "tf-design.h"
 #include "tf-one-proportion.h"
@@ -11,6 +12,7 @@
 #include "tf-two-rates.h"
 
 #include <glib/gi18n-lib.h>
+#include <string.h>
 
 static const TfDesignClass *const designs[TF_N_DESIGNS] = {
   [TF_DESIGN_ONE_PROPORTION] = &tf_one_proportion_class,
@@ -113,6 +115,56 @@ tf_analysis_validate (const TfAnalysis *analysis, GPtrArray *problems)
   return problems->len == before;
 }
 
+/* The intervals of every design that has a prior: equal-tailed and highest density. */
+static const TfIntervalMethod credible_intervals[] = {
+  { "cri", N_("equal-tailed"), NULL },
+  { "hdi", N_("highest density"), NULL },
+};
+
+static const TfIntervalMethod *
+interval_find (const TfIntervalMethod *table, guint n, const char *stem)
+{
+  for (guint i = 0; i < n; i++)
+    if (strcmp (table[i].stem, stem) == 0)
+      return &table[i];
+  return NULL;
+}
+
+static const char *
+translated (const char *text)
+{
+  return text ? _(text) : NULL;
+}
+
+void
+tf_analysis_describe_numbers (const TfAnalysis *analysis, TfResults *results)
+{
+  const TfDesignClass *klass = tf_design_class (analysis->design);
+
+  for (guint i = 0; klass && i < results->numbers->len; i++)
+    {
+      TfNumber *number = g_ptr_array_index (results->numbers, i);
+      const char *suffix = strrchr (number->id, '_');
+      g_autofree char *stem = NULL;
+      const TfIntervalMethod *entry;
+      const char *method = NULL, *of = NULL;
+
+      if (!suffix || (strcmp (suffix, "_low") != 0 && strcmp (suffix, "_high") != 0))
+        continue;
+      stem = g_strndup (number->id, suffix - number->id);
+      if ((entry = interval_find (klass->intervals, klass->n_intervals, stem)))
+        of = translated (entry->of);
+      else if ((entry = interval_find (credible_intervals, G_N_ELEMENTS (credible_intervals),
+                                       stem)))
+        of = translated (klass->credible_of);
+      if (klass->method_of)
+        method = klass->method_of (analysis, number->id);
+      if (!method && entry)
+        method = translated (entry->method);
+      tf_number_set_method (number, method, of);
+    }
+}
+
 TfResults *
 tf_analysis_compute (const TfAnalysis *analysis, GPtrArray *problems)
 {
@@ -126,5 +178,6 @@ tf_analysis_compute (const TfAnalysis *analysis, GPtrArray *problems)
 
   results = tf_results_new (analysis->design);
   tf_design_class (analysis->design)->compute (analysis, results);
+  tf_analysis_describe_numbers (analysis, results);
   return results;
 }

@@ -37,6 +37,11 @@ gboolean tf_analysis_validate (const TfAnalysis *analysis, GPtrArray *problems);
  * valid. A valid analysis always gives results, some numbers possibly undefined. */
 TfResults *tf_analysis_compute (const TfAnalysis *analysis, GPtrArray *problems);
 
+/* Sets the method of each interval's limits in results, and what the interval is of,
+ * from the design's class (TfNumber.method, .of). tf_analysis_compute() calls it; call
+ * it for results made by hand. */
+void tf_analysis_describe_numbers (const TfAnalysis *analysis, TfResults *results);
+
 /* Each returns NULL when the analysis is not valid (problems filled) or the curve does
  * not apply to it (*why_not set, translated, when why_not is not NULL). */
 TfDensityCurves *tf_density_curves_new (const TfAnalysis *analysis, guint n_points,

@@ -12,6 +12,8 @@ tf_number_free (TfNumber *number)
   g_free (number->id);
   g_free (number->label);
   g_free (number->reason);
+  g_free (number->method);
+  g_free (number->of);
   g_free (number);
 }
 
@@ -71,6 +73,15 @@ tf_results_add_undefined (TfResults *results, const char *id, const char *label,
   number->status = TF_STATUS_UNDEFINED;
   number->reason = g_strdup (reason);
   g_ptr_array_add (results->numbers, number);
+}
+
+void
+tf_number_set_method (TfNumber *number, const char *method, const char *of)
+{
+  g_free (number->method);
+  g_free (number->of);
+  number->method = g_strdup (method);
+  number->of = g_strdup (of);
 }
 
 const TfNumber *

@@ -1,5 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-results.h: the numbers an analysis reports, each {id, value, status, measure}.
+ * tf-results.h: the numbers an analysis reports, each {id, value, status, measure}, an
+ * interval's limits also with their method.
  */
 #pragma once
 
@@ -33,6 +34,11 @@ typedef struct {
   TfStatus status;
   char *reason;                 /* why undefined; NULL when OK */
   TfMeasure measure;
+  /* An interval's limit: its published method and, when it is not of the design's own
+   * parameter, what it is of; translated, NULL when none. Set by the design's class
+   * (tf_analysis_describe_numbers()); not in the JSON. */
+  char *method;                 /* "Clopper–Pearson", "Woolf", "equal-tailed" */
+  char *of;                     /* "the odds ratio", "δ" */
 } TfNumber;
 
 typedef struct {
@@ -50,6 +56,9 @@ void tf_results_add (TfResults *results, const char *id, const char *label,
                      TfMeasure measure, double value);
 void tf_results_add_undefined (TfResults *results, const char *id, const char *label,
                                TfMeasure measure, const char *reason);
+
+/* Sets a number's method and what it is of (copied; either may be NULL). */
+void tf_number_set_method (TfNumber *number, const char *method, const char *of);
 
 const TfNumber *tf_results_lookup (const TfResults *results, const char *id);
 /* TRUE and the value when the number exists and is defined. */

@@ -1,6 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * The analysis file: reading, writing, keeping unknown keys, atomic saves, and a
- * problem naming group and key for every kind of bad value.
+ * problem naming group and key for every kind of bad value; what the design classes
+ * give the widgets (form fields, interval methods).
  */
 #include "tf-design.h"
 #include "tf-analysis-file.h"
@@ -349,6 +350,118 @@ test_format_value (void)
     }
 }
 
+static gboolean
+is_limit (const char *id)
+{
+  return g_str_has_suffix (id, "_low") || g_str_has_suffix (id, "_high");
+}
+
+/* One analysis of each design (invented data, for the display only). */
+static const char *const design_files[] = {
+  "[Analysis]\nFormat=1\nDesign=one-proportion\n[Data]\nSuccesses=7\nTrials=19\n"
+  "[Null]\nValue=0.25\n",
+  "[Analysis]\nFormat=1\nDesign=two-proportions\n[Data]\nSuccessesA=3\nTrialsA=11\n"
+  "SuccessesB=1\nTrialsB=9\n",
+  "[Analysis]\nFormat=1\nDesign=one-mean\n[Data]\nN=12\nMean=-0.25\nSD=3.5\n[Null]\nValue=1\n",
+  "[Analysis]\nFormat=1\nDesign=paired-means\n[Data]\nN=30\nMeanDiff=0.75\nSDDiff=1.25\n",
+  "[Analysis]\nFormat=1\nDesign=two-means\n[Data]\nNA=6\nMeanA=1\nSDA=2\nNB=8\nMeanB=2.5\n"
+  "SDB=0.75\n",
+  "[Analysis]\nFormat=1\nDesign=one-rate\n[Data]\nEvents=3\nExposure=120.5\n"
+  "[Null]\nValue=0.01\n",
+  "[Analysis]\nFormat=1\nDesign=two-rates\n[Data]\nEventsA=4\nExposureA=10\nEventsB=9\n"
+  "ExposureB=12.25\n",
+};
+
+/* Every interval's limits carry a method or what they are of, both limits the same;
+ * other numbers carry neither; the JSON carries none of it. */
+static void
+test_interval_methods (void)
+{
+  for (guint f = 0; f < G_N_ELEMENTS (design_files); f++)
+    {
+      g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+      g_autoptr (TfAnalysis) analysis = load_string (design_files[f], problems);
+      g_autoptr (TfResults) results = tf_analysis_compute (analysis, problems);
+      const char *name = tf_design_to_string (analysis->design);
+      g_autofree char *json = NULL;
+
+      g_assert_nonnull (results);
+      json = tf_results_to_json (name, NULL, results, NULL);
+      g_assert_null (strstr (json, "method"));
+      for (guint i = 0; i < results->numbers->len; i++)
+        {
+          const TfNumber *number = g_ptr_array_index (results->numbers, i);
+
+          g_test_message ("%s %s", name, number->id);
+          if (!is_limit (number->id))
+            {
+              g_assert_null (number->method);
+              g_assert_null (number->of);
+              continue;
+            }
+          g_assert_true (number->method != NULL || number->of != NULL);
+          if (g_str_has_suffix (number->id, "_low"))
+            {
+              g_autofree char *stem = g_strndup (number->id, strlen (number->id) - 4);
+              g_autofree char *high_id = g_strconcat (stem, "_high", NULL);
+              const TfNumber *high = tf_results_lookup (results, high_id);
+
+              g_assert_nonnull (high);
+              g_assert_cmpstr (high->method, ==, number->method);
+              g_assert_cmpstr (high->of, ==, number->of);
+            }
+        }
+    }
+  {
+    g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+    g_autoptr (TfAnalysis) analysis = load_string (design_files[1], problems);
+    g_autoptr (TfResults) results = tf_analysis_compute (analysis, problems);
+
+    /* Woolf's interval for the odds ratio (common practice naming) */
+    g_assert_cmpstr (tf_results_lookup (results, "or_ci_low")->method, ==, "Woolf");
+    g_assert_cmpstr (tf_results_lookup (results, "or_ci_high")->of, ==, "the odds ratio");
+    g_assert_cmpstr (tf_results_lookup (results, "cri_low")->method, ==, "equal-tailed");
+  }
+}
+
+/* Each design's form has a field for each of its [Data] keys, in TfAnalysis. */
+static void
+test_form_fields_cover_data (void)
+{
+  for (guint d = 0; d < TF_N_DESIGNS; d++)
+    {
+      const TfDesignClass *klass = tf_design_class ((TfDesign) d);
+      g_autoptr (GPtrArray) keys = g_ptr_array_new ();
+
+      g_assert_nonnull (klass);
+      g_assert_cmpuint (klass->n_fields, >, 0);
+      for (guint i = 0; i < klass->n_numbers; i++)
+        g_ptr_array_add (keys, (gpointer) klass->numbers[i].key);
+      for (guint i = 0; i < klass->n_samples; i++)
+        {
+          g_ptr_array_add (keys, (gpointer) klass->samples[i].values_key);
+          for (guint k = 0; k < 3; k++)
+            g_ptr_array_add (keys, (gpointer) klass->samples[i].summary_keys[k]);
+        }
+      for (guint k = 0; k < keys->len; k++)
+        {
+          gboolean found = FALSE;
+
+          for (guint i = 0; i < klass->n_fields; i++)
+            found = found || (g_str_equal (klass->fields[i].group, "Data")
+                              && g_str_equal (klass->fields[i].key, g_ptr_array_index (keys, k)));
+          g_test_message ("%s %s", klass->name, (const char *) g_ptr_array_index (keys, k));
+          g_assert_true (found);
+        }
+      for (guint i = 0; i < klass->n_fields; i++)
+        {
+          g_assert_cmpuint (klass->fields[i].offset, <, sizeof (TfAnalysis));
+          g_assert_true ((klass->fields[i].kind == TF_FIELD_CHOICE)
+                         == (klass->fields[i].choices != NULL));
+        }
+    }
+}
+
 int
 main (int argc, char **argv)
 {
@@ -365,5 +478,7 @@ main (int argc, char **argv)
   g_test_add_func ("/analysis-file/not-an-analysis", test_not_an_analysis);
   g_test_add_func ("/analysis-file/demos-load", test_demos_load);
   g_test_add_func ("/results/format-value", test_format_value);
+  g_test_add_func ("/results/interval-methods", test_interval_methods);
+  g_test_add_func ("/designs/form-fields-cover-data", test_form_fields_cover_data);
   return g_test_run ();
 }

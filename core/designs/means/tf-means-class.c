@@ -164,6 +164,34 @@ static const TfFormField two_means_fields[] = {
   FORM_MODELS_AND_OPTIONS,
 };
 
+/* The main confidence interval's method (the statistic it inverts); the others are in
+ * the table. */
+static const char *
+one_mean_method_of (const TfAnalysis *analysis, const char *id)
+{
+  if (!g_str_has_prefix (id, "ci_"))
+    return NULL;
+  return analysis->has_known_sd ? _("z") : _("t");
+}
+
+static const char *
+two_means_method_of (const TfAnalysis *analysis, const char *id)
+{
+  if (!g_str_has_prefix (id, "ci_"))
+    return NULL;
+  return analysis->equal_variances ? _("Student") : _("Welch");
+}
+
+static const TfIntervalMethod means_intervals[] = {
+  { "effect_ci", N_("noncentral t"), N_("Cohen's d") },
+};
+
+/* The prior is on the standardised effect δ, so the credible intervals are of δ. */
+#define MEANS_INTERVALS                              \
+  .intervals = means_intervals,                      \
+  .n_intervals = G_N_ELEMENTS (means_intervals),     \
+  .credible_of = N_("δ")
+
 #define MEANS_HOOKS                                  \
   .defaults = means_defaults,                        \
   .compute = class_compute,                          \
@@ -268,6 +296,8 @@ const TfDesignClass tf_one_mean_class = {
   .n_samples = G_N_ELEMENTS (one_mean_samples),
   .fields = one_mean_fields,
   .n_fields = G_N_ELEMENTS (one_mean_fields),
+  .method_of = one_mean_method_of,
+  MEANS_INTERVALS,
   .known_sd = TRUE,
   .null_value_required = TRUE,
   .summarise = tf_one_mean_summarise,
@@ -288,6 +318,8 @@ const TfDesignClass tf_paired_means_class = {
   .n_samples = G_N_ELEMENTS (paired_means_samples),
   .fields = paired_means_fields,
   .n_fields = G_N_ELEMENTS (paired_means_fields),
+  .method_of = one_mean_method_of,
+  MEANS_INTERVALS,
   .summarise = tf_paired_means_summarise,
   .validate = tf_one_mean_validate,
   MEANS_HOOKS,
@@ -307,6 +339,8 @@ const TfDesignClass tf_two_means_class = {
   .n_samples = G_N_ELEMENTS (two_means_samples),
   .fields = two_means_fields,
   .n_fields = G_N_ELEMENTS (two_means_fields),
+  .method_of = two_means_method_of,
+  MEANS_INTERVALS,
   .equal_variances = TRUE,
   .summarise = tf_two_means_summarise,
   .validate = tf_two_means_validate,

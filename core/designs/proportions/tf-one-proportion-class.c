@@ -116,6 +116,14 @@ static const TfFormField fields[] = {
   FORM_MODELS_AND_OPTIONS,
 };
 
+static const TfIntervalMethod intervals[] = {
+  { "ci", N_("Clopper–Pearson"), NULL },
+  { "wilson", N_("Wilson"), NULL },
+  { "wilson_cc", N_("Wilson, continuity-corrected"), NULL },
+  { "jeffreys", N_("Jeffreys"), NULL },
+  { "agresti_coull", N_("Agresti–Coull"), NULL },
+};
+
 const TfDesignClass tf_one_proportion_class = {
   .design = TF_DESIGN_ONE_PROPORTION,
   .name = "one-proportion",
@@ -130,6 +138,8 @@ const TfDesignClass tf_one_proportion_class = {
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,
   .n_fields = G_N_ELEMENTS (fields),
+  .intervals = intervals,
+  .n_intervals = G_N_ELEMENTS (intervals),
   .null_value_required = TRUE,
   .model_set = TRUE,
   .defaults = defaults,

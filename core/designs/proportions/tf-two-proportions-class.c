@@ -60,6 +60,13 @@ static const TfFormField fields[] = {
   FORM_MODELS_AND_OPTIONS,
 };
 
+static const TfIntervalMethod intervals[] = {
+  { "ci", N_("Newcombe"), NULL },
+  { "diff_ci", N_("Newcombe"), NULL },
+  { "or_ci", N_("Woolf"), N_("the odds ratio") },
+  { "rr_ci", N_("Katz"), N_("the risk ratio") },
+};
+
 const TfDesignClass tf_two_proportions_class = {
   .design = TF_DESIGN_TWO_PROPORTIONS,
   .name = "two-proportions",
@@ -74,6 +81,8 @@ const TfDesignClass tf_two_proportions_class = {
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,
   .n_fields = G_N_ELEMENTS (fields),
+  .intervals = intervals,
+  .n_intervals = G_N_ELEMENTS (intervals),
   .beta_with_scale = TRUE,
   .defaults = defaults,
   .validate = tf_two_proportions_validate,

@@ -43,6 +43,10 @@ static const TfFormField fields[] = {
   FORM_MODELS_AND_OPTIONS,
 };
 
+static const TfIntervalMethod intervals[] = {
+  { "ci", N_("Garwood"), NULL },
+};
+
 const TfDesignClass tf_one_rate_class = {
   .design = TF_DESIGN_ONE_RATE,
   .name = "one-rate",
@@ -55,6 +59,8 @@ const TfDesignClass tf_one_rate_class = {
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,
   .n_fields = G_N_ELEMENTS (fields),
+  .intervals = intervals,
+  .n_intervals = G_N_ELEMENTS (intervals),
   .null_value_required = TRUE,
   .defaults = tf_rates_defaults,
   .validate = tf_one_rate_validate,

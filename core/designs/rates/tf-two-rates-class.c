@@ -51,6 +51,10 @@ static const TfFormField fields[] = {
   FORM_MODELS_AND_OPTIONS,
 };
 
+static const TfIntervalMethod intervals[] = {
+  { "ci", N_("conditional Clopper–Pearson"), NULL },
+};
+
 const TfDesignClass tf_two_rates_class = {
   .design = TF_DESIGN_TWO_RATES,
   .name = "two-rates",
@@ -65,6 +69,8 @@ const TfDesignClass tf_two_rates_class = {
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,
   .n_fields = G_N_ELEMENTS (fields),
+  .intervals = intervals,
+  .n_intervals = G_N_ELEMENTS (intervals),
   .defaults = tf_rates_defaults,
   .validate = tf_two_rates_validate,
   .compute = tf_two_rates_compute,
