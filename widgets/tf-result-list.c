@@ -1,8 +1,10 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-result-list.c: one row per number: its label, and its value or "not defined" with
  * the reason both visible and as a tooltip. An interval (any "<stem>_low" with its
- * "<stem>_high": ci, cri, hdi, wilson, or_ci...) is one row, "95% confidence interval (Clopper–Pearson)" with "0.8012 – 0.8153",
- * whose accessible description names each limit with its number.
+ * "<stem>_high": ci, cri, hdi, wilson, or_ci...) is one row, titled with what it is of
+ * and its method as the core gives them (TfNumber.of, .method): "95% confidence
+ * interval (Clopper–Pearson)" with "0.8012 – 0.8153", whose accessible description
+ * names each limit with its number.
  */
 #include <math.h>
 #include <string.h>
@@ -24,30 +26,6 @@ struct _TfResultList
   GHashTable *titles;           /* id -> AdwPreferencesRow*, not owned */
   GHashTable *subtitles;        /* id -> char* */
   GHashTable *descriptions;     /* id -> char*, the accessible description, if set */
-};
-
-/* The intervals the list knows by name: "<stem>_low" and "<stem>_high" share a row whose
- * title says what the interval is of and, in brackets, its published method. An interval
- * the table does not know still gets one row, titled from its lower limit's label. */
-typedef struct {
-  const char *stem;
-  gboolean credible;
-  const char *of;       /* NULL: the design's own parameter */
-  const char *method;   /* NULL: by design (the main confidence interval) */
-} TfIntervalKind;
-
-static const TfIntervalKind interval_kinds[] = {
-  { "ci", FALSE, NULL, NULL },
-  { "cri", TRUE, NULL, N_("equal-tailed") },
-  { "hdi", TRUE, NULL, N_("highest density") },
-  { "wilson", FALSE, NULL, N_("Wilson") },
-  { "wilson_cc", FALSE, NULL, N_("Wilson, continuity-corrected") },
-  { "jeffreys", FALSE, NULL, N_("Jeffreys") },
-  { "agresti_coull", FALSE, NULL, N_("Agresti–Coull") },
-  { "diff_ci", FALSE, NULL, N_("Newcombe") },
-  { "or_ci", FALSE, N_("the odds ratio"), N_("Woolf") },
-  { "rr_ci", FALSE, N_("the risk ratio"), N_("Katz") },
-  { "effect_ci", FALSE, N_("Cohen's d"), N_("noncentral t") },
 };
 
 G_DEFINE_FINAL_TYPE (TfResultList, tf_result_list, GTK_TYPE_WIDGET)
@@ -139,46 +117,6 @@ row_new (TfResultList *self, const TfNumber *number)
   return row;
 }
 
-/* The published name of the main confidence interval's method for this analysis. */
-static const char *
-confidence_method (const TfAnalysis *analysis)
-{
-  switch (analysis->design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      return _("Clopper–Pearson");
-    case TF_DESIGN_TWO_PROPORTIONS:
-      return _("Newcombe");
-    case TF_DESIGN_ONE_MEAN:
-    case TF_DESIGN_PAIRED_MEANS:
-      return analysis->has_known_sd ? _("z") : _("t");
-    case TF_DESIGN_TWO_MEANS:
-      return analysis->equal_variances ? _("Student") : _("Welch");
-    case TF_DESIGN_ONE_RATE:
-      return _("Garwood");
-    case TF_DESIGN_TWO_RATES:
-      return _("conditional Clopper–Pearson");
-    default:
-      return NULL;
-    }
-}
-
-/* What a credible interval is of, when it is not the parameter of the confidence
- * interval: the means' prior is on the standardised effect δ. */
-static const char *
-credible_of (TfDesign design)
-{
-  switch (design)
-    {
-    case TF_DESIGN_ONE_MEAN:
-    case TF_DESIGN_PAIRED_MEANS:
-    case TF_DESIGN_TWO_MEANS:
-      return "δ";
-    default:
-      return NULL;
-    }
-}
-
 /* A name joined by dashes ("Clopper–Pearson") that a narrow row wraps before or after,
  * never at the dash itself: a word joiner (U+2060) follows each en dash and hyphen. */
 static char *
@@ -198,19 +136,19 @@ unbreakable_name (const char *name)
 }
 
 /* "95% confidence interval (Clopper–Pearson)", "95% credible interval of δ (equal-tailed)",
- * "95% confidence interval of the odds ratio (Woolf)"; for an interval the list does not
- * know, "95% " and its lower limit's label without ", lower". */
+ * "95% confidence interval of the odds ratio (Woolf)": the kind from the limits' measure,
+ * what it is of and the method from the core; for an interval the core gives neither,
+ * "95% " and its lower limit's label without ", lower". */
 static char *
-interval_title (const TfAnalysis *analysis, const TfIntervalKind *kind, const TfNumber *low)
+interval_title (const TfAnalysis *analysis, const TfNumber *low)
 {
   /* up to 8 decimals of the percentage, no trailing zeros: 95, 99.9, 99.99999 */
   double percent = round (analysis->level * 100.0 * 1e8) / 1e8;
   g_autofree char *level_text = g_strdup_printf ("%.10g", percent);
-  const char *name, *of;
   g_autofree char *method = NULL;
   g_autofree char *kind_text = NULL;
 
-  if (!kind)
+  if (!low->method && !low->of)
     {
       g_autofree char *label = g_strdup (low->label ? low->label : low->id);
       char *cut = g_strrstr (label, _(", lower"));
@@ -220,24 +158,20 @@ interval_title (const TfAnalysis *analysis, const TfIntervalKind *kind, const Tf
       /* TRANSLATORS: result row: %s is the level in percent, then an interval's name */
       return g_strdup_printf (_("%s%% %s"), level_text, label);
     }
-  name = kind->method ? _(kind->method) : confidence_method (analysis);
-  method = name ? unbreakable_name (name) : NULL;
-  of = kind->of ? _(kind->of) : kind->credible ? credible_of (analysis->design) : NULL;
-  kind_text = kind->credible
+  method = low->method ? unbreakable_name (low->method) : NULL;
+  kind_text = low->measure == TF_MEASURE_CREDIBLE_LIMIT
     /* TRANSLATORS: result row: %s is the level in percent */
     ? g_strdup_printf (_("%s%% credible interval"), level_text)
     /* TRANSLATORS: result row: %s is the level in percent */
     : g_strdup_printf (_("%s%% confidence interval"), level_text);
-  if (of && method)
+  if (low->of && method)
     /* TRANSLATORS: result row: an interval, what it is of, and its method in brackets */
-    return g_strdup_printf (_("%s of %s (%s)"), kind_text, of, method);
-  if (of)
+    return g_strdup_printf (_("%s of %s (%s)"), kind_text, low->of, method);
+  if (low->of)
     /* TRANSLATORS: result row: an interval and what it is of */
-    return g_strdup_printf (_("%s of %s"), kind_text, of);
-  if (method)
-    /* TRANSLATORS: result row: an interval and its method in brackets */
-    return g_strdup_printf (_("%s (%s)"), kind_text, method);
-  return g_steal_pointer (&kind_text);
+    return g_strdup_printf (_("%s of %s"), kind_text, low->of);
+  /* TRANSLATORS: result row: an interval and its method in brackets */
+  return g_strdup_printf (_("%s (%s)"), kind_text, method);
 }
 
 static const char *
@@ -249,10 +183,10 @@ reason_of (const TfNumber *number)
 /* One row for both limits: "0.8012 – 0.8153"; a limit that is not defined shows
  * "not defined" and the row's subtitle says why. */
 static GtkWidget *
-interval_row_new (TfResultList *self, const TfAnalysis *analysis, const TfIntervalKind *kind,
-                  const TfNumber *low, const TfNumber *high)
+interval_row_new (TfResultList *self, const TfAnalysis *analysis, const TfNumber *low,
+                  const TfNumber *high)
 {
-  g_autofree char *title = interval_title (analysis, kind, low);
+  g_autofree char *title = interval_title (analysis, low);
   g_autofree char *low_text = tf_number_format (low);
   g_autofree char *high_text = tf_number_format (high);
   gboolean low_ok = low->status == TF_STATUS_OK, high_ok = high->status == TF_STATUS_OK;
@@ -316,10 +250,10 @@ interval_row_new (TfResultList *self, const TfAnalysis *analysis, const TfInterv
 }
 
 /* When id is a limit of an interval whose other limit results also hold: its lower and
- * upper limit, and its kind when the list knows it. */
+ * upper limit. */
 static gboolean
 interval_of (const TfResults *results, const char *id, const TfNumber **low,
-             const TfNumber **high, const TfIntervalKind **kind)
+             const TfNumber **high)
 {
   g_autofree char *stem = NULL;
   g_autofree char *low_id = NULL, *high_id = NULL;
@@ -334,13 +268,7 @@ interval_of (const TfResults *results, const char *id, const TfNumber **low,
   high_id = g_strconcat (stem, "_high", NULL);
   *low = tf_results_lookup (results, low_id);
   *high = tf_results_lookup (results, high_id);
-  if (!*low || !*high)
-    return FALSE;
-  *kind = NULL;
-  for (guint i = 0; i < G_N_ELEMENTS (interval_kinds); i++)
-    if (strcmp (interval_kinds[i].stem, stem) == 0)
-      *kind = &interval_kinds[i];
-  return TRUE;
+  return *low && *high;
 }
 
 static gboolean
@@ -359,11 +287,10 @@ alias_shown_interval (TfResultList *self, const TfResults *results, const TfNumb
     {
       const TfNumber *other_low = g_ptr_array_index (results->numbers, i);
       const TfNumber *a, *b;
-      const TfIntervalKind *kind;
       GtkLabel *value;
 
       if (other_low == low || !g_hash_table_contains (self->values, other_low->id)
-          || !interval_of (results, other_low->id, &a, &b, &kind) || a != other_low
+          || !interval_of (results, other_low->id, &a, &b) || a != other_low
           || !same_number (a, low) || !same_number (b, high))
         continue;
       value = g_hash_table_lookup (self->values, a->id);
@@ -397,16 +324,15 @@ tf_result_list_set_results (TfResultList *self, const TfAnalysis *analysis,
       const TfNumber *number = g_ptr_array_index (results->numbers, i);
       TfResultSection section = tf_result_section_for_number (number);
       const TfNumber *low, *high;
-      const TfIntervalKind *kind;
       GtkWidget *row;
 
-      if (interval_of (results, number->id, &low, &high, &kind))
+      if (interval_of (results, number->id, &low, &high))
         {
           /* the row goes where the first of its limits is */
           if (g_hash_table_contains (self->values, number->id)
               || alias_shown_interval (self, results, low, high))
             continue;
-          row = interval_row_new (self, analysis, kind, low, high);
+          row = interval_row_new (self, analysis, low, high);
         }
       else
         row = row_new (self, number);

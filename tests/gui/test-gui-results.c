@@ -4,6 +4,54 @@
  */
 #include "test-gui.h"
 
+/* Each design's intervals, one row each, titled with what they are of and their
+ * published method; two proportions' diff_ci repeats its ci and shares its row. */
+static void
+check_design_titles (TfResultList *list)
+{
+  static const struct { TfDesign design; const char *id; const char *title; } titles[] = {
+    { TF_DESIGN_ONE_PROPORTION, "wilson_cc_low", "95% confidence interval (Wilson, continuity-\u2060corrected)" },
+    { TF_DESIGN_ONE_PROPORTION, "hdi_high", "95% credible interval (highest density)" },
+    { TF_DESIGN_ONE_PROPORTION, "agresti_coull_low", "95% confidence interval (Agresti–\u2060Coull)" },
+    { TF_DESIGN_TWO_PROPORTIONS, "ci_low", "95% confidence interval (Newcombe)" },
+    { TF_DESIGN_TWO_PROPORTIONS, "diff_ci_high", "95% confidence interval (Newcombe)" },
+    { TF_DESIGN_TWO_PROPORTIONS, "or_ci_low", "95% confidence interval of the odds ratio (Woolf)" },
+    { TF_DESIGN_TWO_PROPORTIONS, "rr_ci_high", "95% confidence interval of the risk ratio (Katz)" },
+    { TF_DESIGN_ONE_MEAN, "ci_low", "95% confidence interval (t)" },
+    { TF_DESIGN_ONE_MEAN, "cri_high", "95% credible interval of δ (equal-\u2060tailed)" },
+    { TF_DESIGN_ONE_MEAN, "effect_ci_low", "95% confidence interval of Cohen's d (noncentral t)" },
+    { TF_DESIGN_PAIRED_MEANS, "hdi_low", "95% credible interval of δ (highest density)" },
+    { TF_DESIGN_TWO_MEANS, "ci_high", "95% confidence interval (Student)" },
+    { TF_DESIGN_ONE_RATE, "ci_low", "95% confidence interval (Garwood)" },
+    { TF_DESIGN_TWO_RATES, "ci_low", "95% confidence interval (conditional Clopper–\u2060Pearson)" },
+  };
+
+  for (guint t = 0; t < G_N_ELEMENTS (titles); t++)
+    for (guint c = 0; c < n_design_cases; c++)
+      if (design_cases[c].design == titles[t].design)
+        {
+          g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
+          g_autoptr (TfResults) dr = compute_or_fail (dc);
+
+          dc->level = 0.95;
+          tf_result_list_set_results (list, dc, dr);
+          assert_list_shows (list, dr);
+          g_assert_cmpstr (tf_result_list_get_title (list, titles[t].id), ==, titles[t].title);
+        }
+  /* the last case was two rates; two proportions again: the repeated interval reads
+   * back the very row of its ci (the same title string), not a second row */
+  for (guint c = 0; c < n_design_cases; c++)
+    if (design_cases[c].design == TF_DESIGN_TWO_PROPORTIONS)
+      {
+        g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
+        g_autoptr (TfResults) dr = compute_or_fail (dc);
+
+        tf_result_list_set_results (list, dc, dr);
+        g_assert_true (tf_result_list_get_title (list, "ci_low")
+                       == tf_result_list_get_title (list, "diff_ci_low"));
+      }
+}
+
 /* The list on its own, fed results made by hand so that limits can be undefined (the
  * numbers are placeholders for the display, not check values of any method). */
 static void
@@ -24,6 +72,8 @@ test_result_list_intervals (void)
                             TF_MEASURE_CREDIBLE_LIMIT, why);
   tf_results_add (results, "posterior_mean", "Posterior mean", TF_MEASURE_ESTIMATE, 0.3);
   analysis->level = 0.999;
+  /* the core names each interval's method; results made by hand ask it too */
+  tf_analysis_describe_numbers (analysis, results);
 
   tf_result_list_set_results (list, analysis, results);
   assert_list_shows (list, results);
@@ -52,51 +102,7 @@ test_result_list_intervals (void)
     g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==, "Confidence interval, lower");
   }
 
-  /* Each design's intervals, one row each, titled with what they are of and their
-   * published method; two proportions' diff_ci repeats its ci and shares its row. */
-  {
-    static const struct { TfDesign design; const char *id; const char *title; } titles[] = {
-      { TF_DESIGN_ONE_PROPORTION, "wilson_cc_low", "95% confidence interval (Wilson, continuity-\u2060corrected)" },
-      { TF_DESIGN_ONE_PROPORTION, "hdi_high", "95% credible interval (highest density)" },
-      { TF_DESIGN_ONE_PROPORTION, "agresti_coull_low", "95% confidence interval (Agresti–\u2060Coull)" },
-      { TF_DESIGN_TWO_PROPORTIONS, "ci_low", "95% confidence interval (Newcombe)" },
-      { TF_DESIGN_TWO_PROPORTIONS, "diff_ci_high", "95% confidence interval (Newcombe)" },
-      { TF_DESIGN_TWO_PROPORTIONS, "or_ci_low", "95% confidence interval of the odds ratio (Woolf)" },
-      { TF_DESIGN_TWO_PROPORTIONS, "rr_ci_high", "95% confidence interval of the risk ratio (Katz)" },
-      { TF_DESIGN_ONE_MEAN, "ci_low", "95% confidence interval (t)" },
-      { TF_DESIGN_ONE_MEAN, "cri_high", "95% credible interval of δ (equal-\u2060tailed)" },
-      { TF_DESIGN_ONE_MEAN, "effect_ci_low", "95% confidence interval of Cohen's d (noncentral t)" },
-      { TF_DESIGN_PAIRED_MEANS, "hdi_low", "95% credible interval of δ (highest density)" },
-      { TF_DESIGN_TWO_MEANS, "ci_high", "95% confidence interval (Student)" },
-      { TF_DESIGN_ONE_RATE, "ci_low", "95% confidence interval (Garwood)" },
-      { TF_DESIGN_TWO_RATES, "ci_low", "95% confidence interval (conditional Clopper–\u2060Pearson)" },
-    };
-
-    for (guint t = 0; t < G_N_ELEMENTS (titles); t++)
-      for (guint c = 0; c < n_design_cases; c++)
-        if (design_cases[c].design == titles[t].design)
-          {
-            g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
-            g_autoptr (TfResults) dr = compute_or_fail (dc);
-
-            dc->level = 0.95;
-            tf_result_list_set_results (list, dc, dr);
-            assert_list_shows (list, dr);
-            g_assert_cmpstr (tf_result_list_get_title (list, titles[t].id), ==, titles[t].title);
-          }
-    /* the last case was two rates; two proportions again: the repeated interval reads
-     * back the very row of its ci (the same title string), not a second row */
-    for (guint c = 0; c < n_design_cases; c++)
-      if (design_cases[c].design == TF_DESIGN_TWO_PROPORTIONS)
-        {
-          g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
-          g_autoptr (TfResults) dr = compute_or_fail (dc);
-
-          tf_result_list_set_results (list, dc, dr);
-          g_assert_true (tf_result_list_get_title (list, "ci_low")
-                         == tf_result_list_get_title (list, "diff_ci_low"));
-        }
-  }
+  check_design_titles (list);
 
   /* Cleared, nothing is left to read back. */
   tf_result_list_clear (list, "Fix the Marked Field", "A field needs fixing.");
