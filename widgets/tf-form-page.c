@@ -122,6 +122,30 @@ choice_new (const TfFormField *info)
   return gtk_drop_down_new (G_LIST_MODEL (g_steal_pointer (&model)), NULL);
 }
 
+/* Raw values: a text view that wraps, in a scrolled frame. */
+static void
+values_input_new (TfFormPage *page, TfFormFieldWidgets *field)
+{
+  field->input = gtk_text_view_new ();
+  gtk_text_view_set_wrap_mode (GTK_TEXT_VIEW (field->input), GTK_WRAP_WORD_CHAR);
+  gtk_text_view_set_accepts_tab (GTK_TEXT_VIEW (field->input), FALSE);
+  gtk_text_view_set_input_purpose (GTK_TEXT_VIEW (field->input), GTK_INPUT_PURPOSE_NUMBER);
+  gtk_text_view_set_top_margin (GTK_TEXT_VIEW (field->input), 6);
+  gtk_text_view_set_bottom_margin (GTK_TEXT_VIEW (field->input), 6);
+  gtk_text_view_set_left_margin (GTK_TEXT_VIEW (field->input), 8);
+  gtk_text_view_set_right_margin (GTK_TEXT_VIEW (field->input), 8);
+  field->frame = gtk_scrolled_window_new ();
+  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (field->frame),
+                                  GTK_POLICY_NEVER, GTK_POLICY_AUTOMATIC);
+  gtk_scrolled_window_set_min_content_height (GTK_SCROLLED_WINDOW (field->frame), 96);
+  gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (field->frame), field->input);
+  gtk_widget_add_css_class (field->frame, "frame");
+  gtk_widget_add_css_class (field->frame, "tf-values");
+  gtk_widget_set_hexpand (field->frame, TRUE);
+  g_signal_connect_swapped (gtk_text_view_get_buffer (GTK_TEXT_VIEW (field->input)),
+                            "changed", G_CALLBACK (on_edited), page);
+}
+
 /* The label line, the input, the hint and the message of a field, in column col of
  * grid (a lone field spans both columns); messages go full width below both. */
 static void
@@ -148,24 +172,7 @@ field_build (TfFormPage *page, TfFormFieldWidgets *field, GtkGrid *grid, int col
   switch (info->kind)
     {
     case TF_FIELD_LIST:
-      field->input = gtk_text_view_new ();
-      gtk_text_view_set_wrap_mode (GTK_TEXT_VIEW (field->input), GTK_WRAP_WORD_CHAR);
-      gtk_text_view_set_accepts_tab (GTK_TEXT_VIEW (field->input), FALSE);
-      gtk_text_view_set_input_purpose (GTK_TEXT_VIEW (field->input), GTK_INPUT_PURPOSE_NUMBER);
-      gtk_text_view_set_top_margin (GTK_TEXT_VIEW (field->input), 6);
-      gtk_text_view_set_bottom_margin (GTK_TEXT_VIEW (field->input), 6);
-      gtk_text_view_set_left_margin (GTK_TEXT_VIEW (field->input), 8);
-      gtk_text_view_set_right_margin (GTK_TEXT_VIEW (field->input), 8);
-      field->frame = gtk_scrolled_window_new ();
-      gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (field->frame),
-                                      GTK_POLICY_NEVER, GTK_POLICY_AUTOMATIC);
-      gtk_scrolled_window_set_min_content_height (GTK_SCROLLED_WINDOW (field->frame), 96);
-      gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (field->frame), field->input);
-      gtk_widget_add_css_class (field->frame, "frame");
-      gtk_widget_add_css_class (field->frame, "tf-values");
-      gtk_widget_set_hexpand (field->frame, TRUE);
-      g_signal_connect_swapped (gtk_text_view_get_buffer (GTK_TEXT_VIEW (field->input)),
-                                "changed", G_CALLBACK (on_edited), page);
+      values_input_new (page, field);
       break;
     case TF_FIELD_CHOICE:
       field->input = choice_new (info);
