@@ -6,6 +6,7 @@
 #include <glib/gi18n-lib.h>
 #include "tf-design.h"
 #include "tf-analysis-form.h"
+#include "tf-widget-template.h"
 #include "tf-form-page.h"
 
 struct _TfAnalysisForm
@@ -261,19 +262,9 @@ tf_analysis_form_get_message (TfAnalysisForm *self, const char *group, const cha
 /* GObject */
 
 static void
-clear_children (GtkWidget *widget)
-{
-  GtkWidget *child;
-
-  while ((child = gtk_widget_get_first_child (widget)))
-    gtk_widget_unparent (child);
-}
-
-static void
 tf_analysis_form_dispose (GObject *object)
 {
-  gtk_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_ANALYSIS_FORM);
-  clear_children (GTK_WIDGET (object));
+  tf_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_ANALYSIS_FORM);
   G_OBJECT_CLASS (tf_analysis_form_parent_class)->dispose (object);
 }
 

@@ -5,6 +5,7 @@
 #include <glib/gi18n-lib.h>
 #include <adwaita.h>
 #include "tf-explanation-pane.h"
+#include "tf-widget-template.h"
 #include "tf-explain.h"
 
 struct _TfExplanationPane
@@ -114,21 +115,10 @@ tf_explanation_pane_get_n_explanations (TfExplanationPane *self)
   return self->n_explanations;
 }
 
-/* The template's root is not bound to a field: unparent whatever is left. */
-static void
-clear_children (GtkWidget *widget)
-{
-  GtkWidget *child;
-
-  while ((child = gtk_widget_get_first_child (widget)))
-    gtk_widget_unparent (child);
-}
-
 static void
 tf_explanation_pane_dispose (GObject *object)
 {
-  gtk_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_EXPLANATION_PANE);
-  clear_children (GTK_WIDGET (object));
+  tf_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_EXPLANATION_PANE);
   G_OBJECT_CLASS (tf_explanation_pane_parent_class)->dispose (object);
 }
 

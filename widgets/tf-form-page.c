@@ -122,6 +122,17 @@ choice_new (const TfFormField *info)
   return gtk_drop_down_new (G_LIST_MODEL (g_steal_pointer (&model)), NULL);
 }
 
+/* A switch at the end of a field's label line. */
+static GtkWidget *
+head_switch_new (GtkWidget *head)
+{
+  GtkWidget *toggle = gtk_switch_new ();
+
+  gtk_widget_set_valign (toggle, GTK_ALIGN_CENTER);
+  gtk_box_append (GTK_BOX (head), toggle);
+  return toggle;
+}
+
 /* Raw values: a text view that wraps, in a scrolled frame. */
 static void
 values_input_new (TfFormPage *page, TfFormFieldWidgets *field)
@@ -179,15 +190,11 @@ field_build (TfFormPage *page, TfFormFieldWidgets *field, GtkGrid *grid, int col
       g_signal_connect_swapped (field->input, "notify::selected", G_CALLBACK (on_edited), page);
       break;
     case TF_FIELD_SWITCH:
-      field->input = gtk_switch_new ();
-      gtk_widget_set_valign (field->input, GTK_ALIGN_CENTER);
-      gtk_box_append (GTK_BOX (head), field->input);
+      field->input = head_switch_new (head);
       g_signal_connect_swapped (field->input, "notify::active", G_CALLBACK (on_edited), page);
       break;
     case TF_FIELD_OPTIONAL_NUMBER:
-      field->toggle = gtk_switch_new ();
-      gtk_widget_set_valign (field->toggle, GTK_ALIGN_CENTER);
-      gtk_box_append (GTK_BOX (head), field->toggle);
+      field->toggle = head_switch_new (head);
       gtk_accessible_update_relation (GTK_ACCESSIBLE (field->toggle),
                                       GTK_ACCESSIBLE_RELATION_LABELLED_BY, field->label, NULL,
                                       -1);

@@ -11,6 +11,7 @@
 #include <glib/gi18n-lib.h>
 #include <adwaita.h>
 #include "tf-result-list.h"
+#include "tf-widget-template.h"
 
 struct _TfResultList
 {
@@ -398,23 +399,10 @@ tf_result_list_get_description (TfResultList *self, const char *id)
   return g_hash_table_lookup (self->descriptions, id);
 }
 
-/* The template's root is not bound to a field: unparent whatever is left. */
-static void
-clear_children (GtkWidget *widget)
-{
-  GtkWidget *child;
-
-  while ((child = gtk_widget_get_first_child (widget)))
-    gtk_widget_unparent (child);
-}
-
 static void
 tf_result_list_dispose (GObject *object)
 {
-  TfResultList *self = TF_RESULT_LIST (object);
-
-  gtk_widget_dispose_template (GTK_WIDGET (self), TF_TYPE_RESULT_LIST);
-  clear_children (GTK_WIDGET (object));
+  tf_widget_dispose_template (GTK_WIDGET (object), TF_TYPE_RESULT_LIST);
   G_OBJECT_CLASS (tf_result_list_parent_class)->dispose (object);
 }
 
