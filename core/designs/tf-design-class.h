@@ -52,8 +52,6 @@ typedef struct {
   /* What the prior and the credible interval are about when that is not the estimand
    * (N_): "the standardised effect δ"; NULL: the estimand. */
   const char *parameter;
-  /* What the credible interval is of when that is not the estimand's symbol: "δ"; NULL. */
-  const char *credible_of;
   /* The parameter in the null "%s = 0.5": a symbol ("θ", "μA − μB", "λA/λB") or words
    * marked N_ ("the mean difference"); read through gettext. */
   const char *symbol;
@@ -65,9 +63,6 @@ typedef struct {
   const char *group_parameters;
   /* The data in one sentence, translated: "The data: 9700 successes in 12000 trials." */
   char *(*data_words) (const TfAnalysis *analysis);
-  /* The published name of the main confidence interval's method, which also names the
-   * main test where they are one ("t", "Welch"); translated. */
-  const char *(*interval_method) (const TfAnalysis *analysis);
   /* A sentence added to what the Bayes factor does not say, translated; NULL: none. */
   const char *(*bayes_factor_note) (const TfAnalysis *analysis);
   /* When the readings disagree: appends the design's own conditions that make them (each

@@ -88,13 +88,11 @@ test_class_words (void)
       g_assert_nonnull (klass->estimand);
       g_assert_nonnull (klass->symbol);
       g_assert_nonnull (klass->data_words);
-      g_assert_nonnull (klass->interval_method);
       g_assert_true (klass->no_condition_words == NULL || klass->disagreement_conditions != NULL);
       a = tf_analysis_new (d);
       data = klass->data_words (a);
       g_assert_true (g_str_has_prefix (data, "The data: "));
       g_assert_null (strstr (data, "(null)"));
-      g_assert_nonnull (klass->interval_method (a));
     }
 }
 

@@ -251,18 +251,6 @@ two_means_data_words (const TfAnalysis *a)
                           ga, gb);
 }
 
-static const char *
-one_sample_interval_method (const TfAnalysis *analysis)
-{
-  return analysis->has_known_sd ? _("z") : _("t");
-}
-
-static const char *
-two_means_interval_method (const TfAnalysis *analysis)
-{
-  return analysis->equal_variances ? _("Student") : _("Welch");
-}
-
 /* Under Welch's test the classical numbers do not assume equal SDs, but the Bayes
  * factors, δ and its intervals come from Student's pooled t: the reader is told. */
 static const char *
@@ -280,7 +268,6 @@ two_means_bayes_factor_note (const TfAnalysis *analysis)
 /* The prior, the credible interval and an interval null are on the standardised effect. */
 #define MEANS_WORDS                                  \
   .parameter = N_("the standardised effect δ"),      \
-  .credible_of = "δ",                                \
   .interval_symbol = "δ"
 
 const TfDesignClass tf_one_mean_class = {
@@ -290,7 +277,6 @@ const TfDesignClass tf_one_mean_class = {
   .estimand = N_("the mean μ"),
   .symbol = "μ",
   .data_words = one_mean_data_words,
-  .interval_method = one_sample_interval_method,
   MEANS_WORDS,
   .samples = one_mean_samples,
   .n_samples = G_N_ELEMENTS (one_mean_samples),
@@ -312,7 +298,6 @@ const TfDesignClass tf_paired_means_class = {
   .estimand = N_("the mean difference within pairs"),
   .symbol = N_("the mean difference"),
   .data_words = paired_means_data_words,
-  .interval_method = one_sample_interval_method,
   MEANS_WORDS,
   .samples = paired_means_samples,
   .n_samples = G_N_ELEMENTS (paired_means_samples),
@@ -332,7 +317,6 @@ const TfDesignClass tf_two_means_class = {
   .estimand = N_("the difference of means μA − μB"),
   .symbol = "μA − μB",
   .data_words = two_means_data_words,
-  .interval_method = two_means_interval_method,
   .bayes_factor_note = two_means_bayes_factor_note,
   MEANS_WORDS,
   .samples = two_means_samples,

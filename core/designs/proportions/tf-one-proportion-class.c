@@ -34,12 +34,6 @@ data_words (const TfAnalysis *a)
   return g_strdup_printf (_("The data: %s successes in %s trials."), k, n);
 }
 
-static const char *
-interval_method (const TfAnalysis *analysis)
-{
-  return _("Clopper–Pearson");
-}
-
 /* Thresholds of the disagreement's conditions, common practice: a sample is large from
  * 10^4, an effect is small when it is under half the prior's SD, a null is precise when
  * it is a point or narrower than a tenth of the prior's SD, and a prior is diffuse when
@@ -131,7 +125,6 @@ const TfDesignClass tf_one_proportion_class = {
   .estimand = N_("the proportion θ"),
   .symbol = "θ",
   .data_words = data_words,
-  .interval_method = interval_method,
   .disagreement_conditions = disagreement_conditions,
   .no_condition_words = N_(" None of large n, small effect, precise null or diffuse prior holds here."),
   .numbers = numbers,

@@ -32,12 +32,6 @@ data_words (const TfAnalysis *a)
   return g_strdup_printf (_("The data: %s successes in %s trials in group A, %s in %s in group B."),
                           ka, na, kb, nb);
 }
-
-static const char *
-interval_method (const TfAnalysis *analysis)
-{
-  return _("Newcombe");
-}
 static const char *const directions[] = {
   N_("Two-sided: θA − θB ≠ Δ₀"), N_("Greater: θA − θB > Δ₀"), N_("Less: θA − θB < Δ₀"), NULL,
 };
@@ -76,7 +70,6 @@ const TfDesignClass tf_two_proportions_class = {
   .no_difference = "θA = θB",
   .group_parameters = "θA and θB",
   .data_words = data_words,
-  .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,

@@ -21,12 +21,6 @@ data_words (const TfAnalysis *a)
 
   return g_strdup_printf (_("The data: %s events over an exposure of %s."), events, exposure);
 }
-
-static const char *
-interval_method (const TfAnalysis *analysis)
-{
-  return _("Garwood");
-}
 static const char *const directions[] = {
   N_("Two-sided: λ ≠ λ₀"), N_("Greater: λ > λ₀"), N_("Less: λ < λ₀"), NULL,
 };
@@ -54,7 +48,6 @@ const TfDesignClass tf_one_rate_class = {
   .estimand = N_("the rate λ"),
   .symbol = "λ",
   .data_words = data_words,
-  .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,

@@ -25,12 +25,6 @@ data_words (const TfAnalysis *a)
   return g_strdup_printf (_("The data: %s events over an exposure of %s in group A, %s over %s in group B."),
                           ea, ta, eb, tb);
 }
-
-static const char *
-interval_method (const TfAnalysis *analysis)
-{
-  return _("conditional Clopper–Pearson");
-}
 static const char *const directions[] = {
   N_("Two-sided: λA ÷ λB ≠ ρ₀"), N_("Greater: λA ÷ λB > ρ₀"), N_("Less: λA ÷ λB < ρ₀"), NULL,
 };
@@ -64,7 +58,6 @@ const TfDesignClass tf_two_rates_class = {
   .no_difference = "λA = λB",
   .group_parameters = "λA and λB",
   .data_words = data_words,
-  .interval_method = interval_method,
   .numbers = numbers,
   .n_numbers = G_N_ELEMENTS (numbers),
   .fields = fields,
