@@ -1,5 +1,5 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-figure.c: the densities figure: prior and posterior of the parameter under the
+ * tf-figure-densities.c: the densities figure: prior and posterior of the parameter under the
  * alternative, the scaled likelihood, and the null as a spike (a point null, its
  * probability beside it) or a band (an interval null), with the Savage–Dickey heights.
  */
