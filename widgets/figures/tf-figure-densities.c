@@ -415,22 +415,3 @@ tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double 
   cairo_restore (cr);
   return TRUE;
 }
-
-gboolean
-tf_figure_draw_densities (cairo_t *cr, double width, double height, double scale,
-                          const TfAnalysis *analysis, TfFigureStyle style)
-{
-  return tf_figure_draw_densities_full (cr, width, height, scale, analysis, style, NULL);
-}
-
-gboolean
-tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double scale,
-                               const TfAnalysis *analysis, TfFigureStyle style,
-                               TfPlotArea *area_out)
-{
-  TfFigureOptions options = TF_FIGURE_OPTIONS_INIT;
-
-  options.style = style;
-  return tf_figure_draw_kind (cr, TF_FIGURE_DENSITIES, width, height, scale, analysis,
-                              &options, area_out, NULL);
-}

@@ -1,6 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-figure-kinds.c: the figure kinds by name, a kind's curves computed once for an
- * analysis (TfFigure), and the crosshair readout.
+ * tf-figure.c: a figure kind's curves computed once for an analysis (TfFigure), drawn as
+ * often as needed, and the crosshair readout; the figure kinds by name.
  */
 #include <math.h>
 #include <string.h>
@@ -403,4 +403,23 @@ tf_figure_reading_markup (const TfFigureReading *reading)
       g_string_append_printf (text, "   %s %s", reading->names[i], v);
     }
   return g_string_free (g_steal_pointer (&text), FALSE);
+}
+
+gboolean
+tf_figure_draw_densities (cairo_t *cr, double width, double height, double scale,
+                          const TfAnalysis *analysis, TfFigureStyle style)
+{
+  return tf_figure_draw_densities_full (cr, width, height, scale, analysis, style, NULL);
+}
+
+gboolean
+tf_figure_draw_densities_full (cairo_t *cr, double width, double height, double scale,
+                               const TfAnalysis *analysis, TfFigureStyle style,
+                               TfPlotArea *area_out)
+{
+  TfFigureOptions options = TF_FIGURE_OPTIONS_INIT;
+
+  options.style = style;
+  return tf_figure_draw_kind (cr, TF_FIGURE_DENSITIES, width, height, scale, analysis,
+                              &options, area_out, NULL);
 }
