@@ -10,6 +10,83 @@
 
 /* A prior lower than this share of the axis reads as a line on the floor: say its height. */
 #define LOW_PRIOR_SHARE 0.08
+#define DENSITY_POINTS 401
+
+/* The kind's curves: the densities, and the null's probability given the data. */
+typedef struct {
+  TfDensityCurves *curves;
+  double null_mass;             /* P(null | data) beside a point null's spike, or NAN */
+  char *x_markup;               /* the parameter's name for the readout */
+} Densities;
+
+gpointer
+tf_fig_densities_compute (const TfAnalysis *analysis, const TfResults *results,
+                          GPtrArray *problems, char **reason)
+{
+  TfDensityCurves *curves = tf_density_curves_new (analysis, DENSITY_POINTS, problems);
+  Densities *d;
+
+  if (curves == NULL)
+    {
+      if (problems->len == 0)
+        /* TRANSLATORS: %s is a design, "one proportion" */
+        *reason = g_strdup_printf (_("The densities figure is not available for the %s design in this version."),
+                                   tf_design_label (analysis->design));
+      return NULL;
+    }
+  d = g_new0 (Densities, 1);
+  d->curves = curves;
+  d->null_mass = NAN;
+  if (analysis->null_kind == TF_NULL_POINT)
+    {
+      g_autoptr (TfResults) computed = results ? NULL : tf_analysis_compute (analysis, NULL);
+      const TfResults *r = results ? results : computed;
+      double p;
+
+      if (r && tf_results_get (r, "posterior_null", &p) && isfinite (p))
+        d->null_mass = p;
+    }
+  d->x_markup = g_strdup_printf ("<i>%s</i>", curves->parameter_markup
+                                              ? curves->parameter_markup : "θ");
+  return d;
+}
+
+void
+tf_fig_densities_free (gpointer curves)
+{
+  Densities *d = curves;
+
+  tf_density_curves_free (d->curves);
+  g_free (d->x_markup);
+  g_free (d);
+}
+
+gboolean
+tf_fig_densities_draw (cairo_t *cr, double width, double height, double scale,
+                       gconstpointer curves, const TfFigureOptions *options,
+                       TfFigurePanels *panels)
+{
+  const Densities *d = curves;
+
+  return tf_figure_draw_density_curves (cr, width, height, scale, d->curves, d->null_mass,
+                                        options, &panels->area[0]);
+}
+
+gboolean
+tf_fig_densities_read (gconstpointer curves, const TfPlotArea *area, double x,
+                       TfFigureReading *reading)
+{
+  const Densities *d = curves;
+  const TfDensityCurves *c = d->curves;
+  guint i = tf_fig_nearest (c->x, c->n, x);
+
+  reading->x_markup = d->x_markup;
+  tf_fig_reading_add (reading, area, _("posterior"), c->posterior[i], c->posterior[i]);
+  tf_fig_reading_add (reading, area, _("prior"), c->prior[i], c->prior[i]);
+  tf_fig_reading_add (reading, area, _("likelihood, scaled"), c->likelihood[i],
+                      c->likelihood[i]);
+  return TRUE;
+}
 
 static double
 array_max (const double *v, guint n, guint *at)

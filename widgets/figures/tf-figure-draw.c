@@ -1,6 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-figure-draw.c: drawing pieces the figure kinds share: polylines, markers, spikes,
- * text with a halo, arrows, messages and the one-panel layout.
+ * tf-figure-draw.c: drawing pieces the figure kinds share: the options by name,
+ * polylines, markers, spikes, text with a halo, arrows, messages, the one-panel layout
+ * and the crosshair readout's values.
  */
 #include <math.h>
 #include <stdlib.h>
@@ -89,6 +90,43 @@ tf_fig_options (const TfFigureOptions *options)
 {
   static const TfFigureOptions defaults = TF_FIGURE_OPTIONS_INIT;
   return options ? options : &defaults;
+}
+
+/* The index of name in names, as the enum listed in that order. */
+static gboolean
+index_of_name (const char *const *names, guint n, const char *name, guint *index)
+{
+  for (guint i = 0; i < n; i++)
+    if (g_strcmp0 (name, names[i]) == 0)
+      {
+        *index = i;
+        return TRUE;
+      }
+  return FALSE;
+}
+
+gboolean
+tf_figure_style_from_string (const char *name, TfFigureStyle *style)
+{
+  static const char *const names[] = { "light", "dark", "print" };
+  guint i;
+
+  if (!index_of_name (names, G_N_ELEMENTS (names), name, &i))
+    return FALSE;
+  *style = (TfFigureStyle) i;
+  return TRUE;
+}
+
+gboolean
+tf_evidence_scale_from_string (const char *name, TfEvidenceScale *scale)
+{
+  static const char *const names[] = { "kass-raftery", "jeffreys", "none" };
+  guint i;
+
+  if (!index_of_name (names, G_N_ELEMENTS (names), name, &i))
+    return FALSE;
+  *scale = (TfEvidenceScale) i;
+  return TRUE;
 }
 
 void
@@ -369,4 +407,37 @@ tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width, dou
     .y_lo = out->y_ticks.lo, .y_hi = out->y_ticks.hi,
     .x_log = x_log,
   };
+}
+
+/* Bisection. */
+guint
+tf_fig_nearest (const double *grid, guint n, double x)
+{
+  guint lo = 0, hi = n - 1;
+
+  if (x <= grid[0])
+    return 0;
+  if (x >= grid[n - 1])
+    return n - 1;
+  while (hi - lo > 1)
+    {
+      guint mid = (lo + hi) / 2;
+      if (grid[mid] <= x)
+        lo = mid;
+      else
+        hi = mid;
+    }
+  return x - grid[lo] <= grid[hi] - x ? lo : hi;
+}
+
+void
+tf_fig_reading_add (TfFigureReading *reading, const TfPlotArea *area, const char *name,
+                    double value, double y)
+{
+  guint i = reading->n++;
+  double lo = MIN (area->y_lo, area->y_hi), hi = MAX (area->y_lo, area->y_hi);
+
+  reading->names[i] = name;
+  reading->values[i] = value;
+  reading->y[i] = isfinite (y) && y >= lo && y <= hi ? tf_plot_area_map_y (area, y) : NAN;
 }

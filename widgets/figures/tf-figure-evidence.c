@@ -10,6 +10,7 @@
 #define PANEL_GAP_PT 10.0
 #define TOP_SHARE 0.58
 #define TF_BF_CAP_DECADES 6.0
+#define EVIDENCE_POINTS 256
 
 /* A curve that leaves its panel ends at the panel's edge, where the segment crosses it,
  * and is not drawn outside (a curve clamped along the edge would look flat there). */
@@ -540,4 +541,53 @@ tf_figure_draw_sample_size (cairo_t *cr, double width, double height, double sca
                             TfPlotArea *area_out)
 {
   return draw_upper (cr, width, height, scale, curve, options, TRUE, area_out);
+}
+
+gpointer
+tf_fig_sensitivity_compute (const TfAnalysis *analysis, const TfResults *results,
+                            GPtrArray *problems, char **reason)
+{
+  return tf_sensitivity_curve_new (analysis, EVIDENCE_POINTS, problems, reason);
+}
+
+gpointer
+tf_fig_sample_size_compute (const TfAnalysis *analysis, const TfResults *results,
+                            GPtrArray *problems, char **reason)
+{
+  return tf_sample_size_curve_new (analysis, EVIDENCE_POINTS, problems, reason);
+}
+
+gboolean
+tf_fig_sensitivity_draw (cairo_t *cr, double width, double height, double scale,
+                         gconstpointer curves, const TfFigureOptions *options,
+                         TfFigurePanels *panels)
+{
+  return tf_fig_draw_evidence (cr, width, height, scale, curves, options, FALSE, panels);
+}
+
+gboolean
+tf_fig_sample_size_draw (cairo_t *cr, double width, double height, double scale,
+                         gconstpointer curves, const TfFigureOptions *options,
+                         TfFigurePanels *panels)
+{
+  return tf_fig_draw_evidence (cr, width, height, scale, curves, options, TRUE, panels);
+}
+
+/* The Bayes factor above (log10 on its axis), P(H0 | data) below. */
+gboolean
+tf_fig_evidence_read (gconstpointer curves, const TfPlotArea *area, double x,
+                      TfFigureReading *reading)
+{
+  const TfEvidenceCurve *c = curves;
+  guint i = tf_fig_nearest (c->x, c->n, x);
+
+  reading->x = c->x[i];
+  reading->x_markup = c->x_markup ? c->x_markup : "x";
+  if (area->panel == 0)
+    tf_fig_reading_add (reading, area, "BF<sub>01</sub>", exp (c->log_bf01[i]),
+                        c->log_bf01[i] / G_LN10);
+  else
+    tf_fig_reading_add (reading, area, _("P(H₀ | data)"), c->posterior_null[i],
+                        c->posterior_null[i]);
+  return TRUE;
 }

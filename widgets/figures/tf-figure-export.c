@@ -143,9 +143,10 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
 
   if (!tf_figure_kind_is_known (kind))
     {
+      g_autofree char *names = tf_figure_kind_names ();
+      /* TRANSLATORS: %s is what was asked, then the list of figure kinds */
       g_set_error (error, TF_FIGURE_ERROR, TF_FIGURE_ERROR_UNKNOWN_KIND,
-                   _("“%s” is not a figure kind; use densities, sensitivity, sample-size, "
-                     "null-distribution or model-probabilities."), kind);
+                   _("“%s” is not a figure kind; use %s."), kind, names);
       return FALSE;
     }
   if (!tf_figure_format_from_filename (filename, &format))

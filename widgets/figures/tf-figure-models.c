@@ -136,3 +136,19 @@ tf_figure_draw_model_probabilities (cairo_t *cr, double width, double height, do
   cairo_restore (cr);
   return TRUE;
 }
+
+gpointer
+tf_fig_models_compute (const TfAnalysis *analysis, const TfResults *results,
+                       GPtrArray *problems, char **reason)
+{
+  return tf_model_probabilities_new (analysis, problems, reason);
+}
+
+gboolean
+tf_fig_models_draw (cairo_t *cr, double width, double height, double scale,
+                    gconstpointer curves, const TfFigureOptions *options,
+                    TfFigurePanels *panels)
+{
+  return tf_figure_draw_model_probabilities (cr, width, height, scale, curves, options,
+                                             &panels->area[0]);
+}

@@ -9,6 +9,7 @@
 
 /* Masses below this share of the largest are not worth the width they take. */
 #define VISIBLE_SHARE 1e-3
+#define NULL_POINTS 401
 
 /* The x range that shows the distribution's bulk and the observed value. */
 static void
@@ -249,5 +250,35 @@ tf_figure_draw_null_distribution (cairo_t *cr, double width, double height, doub
     *area_out = *area;
   tf_fig_points_clear (&line);
   cairo_restore (cr);
+  return TRUE;
+}
+
+gpointer
+tf_fig_null_compute (const TfAnalysis *analysis, const TfResults *results,
+                     GPtrArray *problems, char **reason)
+{
+  return tf_null_distribution_new (analysis, NULL_POINTS, problems, reason);
+}
+
+gboolean
+tf_fig_null_draw (cairo_t *cr, double width, double height, double scale,
+                  gconstpointer curves, const TfFigureOptions *options,
+                  TfFigurePanels *panels)
+{
+  return tf_figure_draw_null_distribution (cr, width, height, scale, curves, options,
+                                           &panels->area[0]);
+}
+
+gboolean
+tf_fig_null_read (gconstpointer curves, const TfPlotArea *area, double x,
+                  TfFigureReading *reading)
+{
+  const TfNullDistribution *d = curves;
+  guint i = tf_fig_nearest (d->x, d->n, x);
+
+  reading->x = d->x[i];
+  reading->x_markup = d->x_markup ? d->x_markup : "x";
+  tf_fig_reading_add (reading, area, d->discrete ? _("probability") : _("density"),
+                      d->mass[i], d->mass[i]);
   return TRUE;
 }

@@ -1,5 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-figure-private.h: drawing pieces the figure kinds share (the figure library only).
+ * tf-figure-private.h: drawing pieces the figure kinds share, and the table of figure
+ * kinds (the figure library only).
  */
 #pragma once
 
@@ -84,5 +85,71 @@ void tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width
 gboolean tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
                                const TfEvidenceCurve *curve, const TfFigureOptions *options,
                                gboolean sample_size, TfFigurePanels *panels_out);
+
+/* The crosshair readout's pieces: the index of the grid point nearest x in an increasing
+ * grid, and one value read, with where it is drawn in area (y a coordinate of its axis). */
+guint tf_fig_nearest (const double *grid, guint n, double x);
+void tf_fig_reading_add (TfFigureReading *reading, const TfPlotArea *area, const char *name,
+                         double value, double y);
+
+/* One figure kind. tf-figure-kinds.c holds the table of them, in TfFigureKind order;
+ * TfFigure and every kind's name and label read it. The curves are the kind's own
+ * (compute makes them, free frees them, draw and read take them as they are). */
+typedef struct {
+  const char *name;             /* as `twofold-cli figure --kind` takes it: "sample-size" */
+  const char *label;            /* for people, untranslated (N_()) */
+  /* The curves of analysis (results: its results computed already, or NULL); NULL when
+   * the kind does not apply, with *reason set or problems filled. */
+  gpointer (*compute) (const TfAnalysis *analysis, const TfResults *results,
+                       GPtrArray *problems, char **reason);
+  GDestroyNotify free;
+  /* Draws the curves, each panel's area into panels (one panel: area[0], n left 0). */
+  gboolean (*draw) (cairo_t *cr, double width, double height, double scale,
+                    gconstpointer curves, const TfFigureOptions *options,
+                    TfFigurePanels *panels);
+  /* The crosshair readout at x (the data value) in area, with reading->x and ->panel set;
+   * NULL for a kind with no x to read. */
+  gboolean (*read) (gconstpointer curves, const TfPlotArea *area, double x,
+                    TfFigureReading *reading);
+} TfFigKind;
+
+const TfFigKind *tf_fig_kind (TfFigureKind kind);
+
+/* Each kind's entries of the table. */
+gpointer tf_fig_densities_compute (const TfAnalysis *analysis, const TfResults *results,
+                                   GPtrArray *problems, char **reason);
+void tf_fig_densities_free (gpointer curves);
+gboolean tf_fig_densities_draw (cairo_t *cr, double width, double height, double scale,
+                                gconstpointer curves, const TfFigureOptions *options,
+                                TfFigurePanels *panels);
+gboolean tf_fig_densities_read (gconstpointer curves, const TfPlotArea *area, double x,
+                                TfFigureReading *reading);
+
+gpointer tf_fig_sensitivity_compute (const TfAnalysis *analysis, const TfResults *results,
+                                     GPtrArray *problems, char **reason);
+gpointer tf_fig_sample_size_compute (const TfAnalysis *analysis, const TfResults *results,
+                                     GPtrArray *problems, char **reason);
+gboolean tf_fig_sensitivity_draw (cairo_t *cr, double width, double height, double scale,
+                                  gconstpointer curves, const TfFigureOptions *options,
+                                  TfFigurePanels *panels);
+gboolean tf_fig_sample_size_draw (cairo_t *cr, double width, double height, double scale,
+                                  gconstpointer curves, const TfFigureOptions *options,
+                                  TfFigurePanels *panels);
+gboolean tf_fig_evidence_read (gconstpointer curves, const TfPlotArea *area, double x,
+                               TfFigureReading *reading);
+
+gpointer tf_fig_null_compute (const TfAnalysis *analysis, const TfResults *results,
+                              GPtrArray *problems, char **reason);
+gboolean tf_fig_null_draw (cairo_t *cr, double width, double height, double scale,
+                           gconstpointer curves, const TfFigureOptions *options,
+                           TfFigurePanels *panels);
+gboolean tf_fig_null_read (gconstpointer curves, const TfPlotArea *area, double x,
+                           TfFigureReading *reading);
+
+gpointer tf_fig_models_compute (const TfAnalysis *analysis, const TfResults *results,
+                                GPtrArray *problems, char **reason);
+gboolean tf_fig_models_draw (cairo_t *cr, double width, double height, double scale,
+                             gconstpointer curves, const TfFigureOptions *options,
+                             TfFigurePanels *panels);
 
 G_END_DECLS

@@ -1,103 +1,16 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-figure.c: a figure kind's curves computed once for an analysis (TfFigure), drawn as
- * often as needed, and the crosshair readout; the figure kinds by name.
+ * often as needed and read under the pointer, each by its entry of the table of kinds.
  */
-#include <math.h>
 #include <string.h>
 #include <glib/gi18n-lib.h>
 #include "tf-design.h"
 #include "tf-figure-private.h"
 
-#define DENSITY_POINTS 401
-#define EVIDENCE_POINTS 256
-#define NULL_POINTS 401
-
 struct _TfFigure {
   TfFigureKind kind;
-  TfDensityCurves *densities;
-  double null_mass;             /* P(null | data) beside a point null's spike, or NAN */
-  TfEvidenceCurve *evidence;
-  TfNullDistribution *null_distribution;
-  TfModelProbabilities *models;
-  char *x_markup;               /* the x axis's name for the readout */
+  gpointer curves;              /* the kind's own (TfFigKind), never NULL */
 };
-
-static const char *const kind_names[TF_N_FIGURE_KINDS] = {
-  [TF_FIGURE_DENSITIES] = "densities",
-  [TF_FIGURE_SENSITIVITY] = "sensitivity",
-  [TF_FIGURE_SAMPLE_SIZE] = "sample-size",
-  [TF_FIGURE_NULL_DISTRIBUTION] = "null-distribution",
-  [TF_FIGURE_MODEL_PROBABILITIES] = "model-probabilities",
-};
-
-const char *
-tf_figure_kind_to_string (TfFigureKind kind)
-{
-  g_return_val_if_fail (kind < TF_N_FIGURE_KINDS, NULL);
-  return kind_names[kind];
-}
-
-gboolean
-tf_figure_kind_from_string (const char *name, TfFigureKind *kind)
-{
-  for (guint i = 0; i < TF_N_FIGURE_KINDS; i++)
-    if (g_strcmp0 (name, kind_names[i]) == 0)
-      {
-        if (kind)
-          *kind = (TfFigureKind) i;
-        return TRUE;
-      }
-  return FALSE;
-}
-
-const char *
-tf_figure_kind_label (TfFigureKind kind)
-{
-  switch (kind)
-    {
-    case TF_FIGURE_DENSITIES:
-      return _("Prior, likelihood and posterior");
-    case TF_FIGURE_SENSITIVITY:
-      return _("Evidence against the prior’s scale");
-    case TF_FIGURE_SAMPLE_SIZE:
-      return _("Evidence against the sample size");
-    case TF_FIGURE_NULL_DISTRIBUTION:
-      return _("Null distribution and p-value");
-    case TF_FIGURE_MODEL_PROBABILITIES:
-      return _("Model probabilities");
-    case TF_N_FIGURE_KINDS:
-    default:
-      return "";
-    }
-}
-
-gboolean
-tf_figure_style_from_string (const char *name, TfFigureStyle *style)
-{
-  static const char *const names[] = { "light", "dark", "print" };
-
-  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
-    if (g_strcmp0 (name, names[i]) == 0)
-      {
-        *style = (TfFigureStyle) i;
-        return TRUE;
-      }
-  return FALSE;
-}
-
-gboolean
-tf_evidence_scale_from_string (const char *name, TfEvidenceScale *scale)
-{
-  static const char *const names[] = { "kass-raftery", "jeffreys", "none" };
-
-  for (guint i = 0; i < G_N_ELEMENTS (names); i++)
-    if (g_strcmp0 (name, names[i]) == 0)
-      {
-        *scale = (TfEvidenceScale) i;
-        return TRUE;
-      }
-  return FALSE;
-}
 
 static void
 set_reason (char **why_not, char *reason)
@@ -124,7 +37,8 @@ tf_figure_new_with_results (const TfAnalysis *analysis, const TfResults *results
                             TfFigureKind kind, char **why_not)
 {
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
-  g_autoptr (TfFigure) figure = NULL;
+  TfFigure *figure;
+  gpointer curves;
   char *reason = NULL;
 
   g_return_val_if_fail (kind < TF_N_FIGURE_KINDS, NULL);
@@ -133,56 +47,14 @@ tf_figure_new_with_results (const TfAnalysis *analysis, const TfResults *results
       set_reason (why_not, g_strdup (_("There is no analysis.")));
       return NULL;
     }
-  figure = g_new0 (TfFigure, 1);
-  figure->kind = kind;
-  figure->null_mass = NAN;
-  switch (kind)
+  curves = tf_fig_kind (kind)->compute (analysis, results, problems, &reason);
+  if (curves)
     {
-    case TF_FIGURE_DENSITIES:
-      figure->densities = tf_density_curves_new (analysis, DENSITY_POINTS, problems);
-      if (figure->densities && analysis->null_kind == TF_NULL_POINT)
-        {
-          g_autoptr (TfResults) computed = results ? NULL : tf_analysis_compute (analysis, NULL);
-          const TfResults *r = results ? results : computed;
-          double p;
-
-          if (r && tf_results_get (r, "posterior_null", &p) && isfinite (p))
-            figure->null_mass = p;
-        }
-      if (figure->densities == NULL && problems->len == 0)
-        /* TRANSLATORS: %s is a design, "one proportion" */
-        reason = g_strdup_printf (_("The densities figure is not available for the %s design in this version."),
-                                  tf_design_label (analysis->design));
-      break;
-    case TF_FIGURE_SENSITIVITY:
-      figure->evidence = tf_sensitivity_curve_new (analysis, EVIDENCE_POINTS, problems, &reason);
-      break;
-    case TF_FIGURE_SAMPLE_SIZE:
-      figure->evidence = tf_sample_size_curve_new (analysis, EVIDENCE_POINTS, problems, &reason);
-      break;
-    case TF_FIGURE_NULL_DISTRIBUTION:
-      figure->null_distribution = tf_null_distribution_new (analysis, NULL_POINTS, problems,
-                                                            &reason);
-      break;
-    case TF_FIGURE_MODEL_PROBABILITIES:
-      figure->models = tf_model_probabilities_new (analysis, problems, &reason);
-      break;
-    case TF_N_FIGURE_KINDS:
-    default:
-      break;
-    }
-  if (figure->densities || figure->evidence || figure->null_distribution || figure->models)
-    {
-      if (figure->densities)
-        figure->x_markup = g_strdup_printf ("<i>%s</i>", figure->densities->parameter_markup
-                                                         ? figure->densities->parameter_markup : "θ");
-      else if (figure->evidence)
-        figure->x_markup = g_strdup (figure->evidence->x_markup ? figure->evidence->x_markup : "x");
-      else if (figure->null_distribution)
-        figure->x_markup = g_strdup (figure->null_distribution->x_markup
-                                     ? figure->null_distribution->x_markup : "x");
       g_free (reason);
-      return g_steal_pointer (&figure);
+      figure = g_new0 (TfFigure, 1);
+      figure->kind = kind;
+      figure->curves = curves;
+      return figure;
     }
   if (reason == NULL && problems->len > 0)
     {
@@ -198,11 +70,7 @@ tf_figure_free (TfFigure *figure)
 {
   if (figure == NULL)
     return;
-  tf_density_curves_free (figure->densities);
-  tf_evidence_curve_free (figure->evidence);
-  tf_null_distribution_free (figure->null_distribution);
-  tf_model_probabilities_free (figure->models);
-  g_free (figure->x_markup);
+  tf_fig_kind (figure->kind)->free (figure->curves);
   g_free (figure);
 }
 
@@ -217,33 +85,11 @@ tf_figure_draw_panels (const TfFigure *figure, cairo_t *cr, double width, double
                        double scale, const TfFigureOptions *options, TfFigurePanels *panels_out)
 {
   TfFigurePanels panels = { 0 };
-  TfPlotArea *one = &panels.area[0];
-  gboolean ok = FALSE;
+  gboolean ok;
 
   g_return_val_if_fail (figure != NULL, FALSE);
-  switch (figure->kind)
-    {
-    case TF_FIGURE_DENSITIES:
-      ok = tf_figure_draw_density_curves (cr, width, height, scale, figure->densities,
-                                          figure->null_mass, options, one);
-      break;
-    case TF_FIGURE_SENSITIVITY:
-    case TF_FIGURE_SAMPLE_SIZE:
-      ok = tf_fig_draw_evidence (cr, width, height, scale, figure->evidence, options,
-                                 figure->kind == TF_FIGURE_SAMPLE_SIZE, &panels);
-      break;
-    case TF_FIGURE_NULL_DISTRIBUTION:
-      ok = tf_figure_draw_null_distribution (cr, width, height, scale,
-                                             figure->null_distribution, options, one);
-      break;
-    case TF_FIGURE_MODEL_PROBABILITIES:
-      ok = tf_figure_draw_model_probabilities (cr, width, height, scale, figure->models,
-                                               options, one);
-      break;
-    case TF_N_FIGURE_KINDS:
-    default:
-      break;
-    }
+  ok = tf_fig_kind (figure->kind)->draw (cr, width, height, scale, figure->curves, options,
+                                         &panels);
   if (ok && panels.n == 0)
     panels.n = 1;
   if (!ok)
@@ -284,95 +130,20 @@ tf_figure_draw_kind (cairo_t *cr, TfFigureKind kind, double width, double height
   return tf_figure_draw (figure, cr, width, height, scale, options, area_out);
 }
 
-/* Index of the grid point nearest x in an increasing grid (bisection). */
-static guint
-nearest (const double *grid, guint n, double x)
-{
-  guint lo = 0, hi = n - 1;
-
-  if (x <= grid[0])
-    return 0;
-  if (x >= grid[n - 1])
-    return n - 1;
-  while (hi - lo > 1)
-    {
-      guint mid = (lo + hi) / 2;
-      if (grid[mid] <= x)
-        lo = mid;
-      else
-        hi = mid;
-    }
-  return x - grid[lo] <= grid[hi] - x ? lo : hi;
-}
-
-/* One value of the reading, and where it is drawn in area (y a coordinate of its axis). */
-static void
-add_value (TfFigureReading *reading, const TfPlotArea *area, const char *name, double value,
-           double y)
-{
-  guint i = reading->n++;
-  double lo = MIN (area->y_lo, area->y_hi), hi = MAX (area->y_lo, area->y_hi);
-
-  reading->names[i] = name;
-  reading->values[i] = value;
-  reading->y[i] = isfinite (y) && y >= lo && y <= hi ? tf_plot_area_map_y (area, y) : NAN;
-}
-
 gboolean
 tf_figure_read_at (const TfFigure *figure, const TfPlotArea *area, double px,
                    TfFigureReading *reading)
 {
-  double x;
-  guint i;
+  const TfFigKind *kind;
 
   g_return_val_if_fail (figure != NULL && area != NULL && reading != NULL, FALSE);
   memset (reading, 0, sizeof *reading);
   if (px < area->x || px > area->x + area->width)
     return FALSE;
-  x = tf_plot_area_unmap_x (area, px);
-  reading->x = x;
-  reading->x_markup = figure->x_markup;
+  reading->x = tf_plot_area_unmap_x (area, px);
   reading->panel = area->panel;
-  switch (figure->kind)
-    {
-    case TF_FIGURE_DENSITIES:
-      {
-        const TfDensityCurves *c = figure->densities;
-        i = nearest (c->x, c->n, x);
-        add_value (reading, area, _("posterior"), c->posterior[i], c->posterior[i]);
-        add_value (reading, area, _("prior"), c->prior[i], c->prior[i]);
-        add_value (reading, area, _("likelihood, scaled"), c->likelihood[i], c->likelihood[i]);
-      }
-      return TRUE;
-    case TF_FIGURE_SENSITIVITY:
-    case TF_FIGURE_SAMPLE_SIZE:
-      {
-        /* the Bayes factor above (log10 on its axis), P(H0 | data) below */
-        const TfEvidenceCurve *c = figure->evidence;
-        i = nearest (c->x, c->n, x);
-        reading->x = c->x[i];
-        if (area->panel == 0)
-          add_value (reading, area, "BF<sub>01</sub>", exp (c->log_bf01[i]),
-                     c->log_bf01[i] / G_LN10);
-        else
-          add_value (reading, area, _("P(H₀ | data)"), c->posterior_null[i],
-                     c->posterior_null[i]);
-      }
-      return TRUE;
-    case TF_FIGURE_NULL_DISTRIBUTION:
-      {
-        const TfNullDistribution *d = figure->null_distribution;
-        i = nearest (d->x, d->n, x);
-        reading->x = d->x[i];
-        add_value (reading, area, d->discrete ? _("probability") : _("density"), d->mass[i],
-                   d->mass[i]);
-      }
-      return TRUE;
-    case TF_FIGURE_MODEL_PROBABILITIES:
-    case TF_N_FIGURE_KINDS:
-    default:
-      return FALSE;
-    }
+  kind = tf_fig_kind (figure->kind);
+  return kind->read && kind->read (figure->curves, area, reading->x, reading);
 }
 
 gboolean

@@ -52,7 +52,9 @@ typedef struct _TfFigurePanels TfFigurePanels;
 
 const char *tf_figure_kind_to_string (TfFigureKind kind);      /* "sample-size" */
 gboolean tf_figure_kind_from_string (const char *name, TfFigureKind *kind);
-const char *tf_figure_kind_label (TfFigureKind kind);          /* translated: "Sample size" */
+const char *tf_figure_kind_label (TfFigureKind kind);          /* translated: "Model probabilities" */
+/* Every kind's name, for people: "densities, sensitivity, … or model-probabilities". */
+char *tf_figure_kind_names (void);
 gboolean tf_figure_style_from_string (const char *name, TfFigureStyle *style); /* light|dark|print */
 gboolean tf_evidence_scale_from_string (const char *name, TfEvidenceScale *scale); /* kass-raftery|jeffreys|none */
 
