@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-figure-densities.c: the densities figure: prior and posterior of the parameter under the
- * alternative, the scaled likelihood, and the null as a spike (a point null, its
- * probability beside it) or a band (an interval null), with the Savage–Dickey heights.
+ * tf-figure-densities.c: the densities figure: prior and posterior of the parameter
+ * under the alternative, the scaled likelihood, and the null as a spike (a point null,
+ * its probability beside it) or a band (an interval null), with the Savage–Dickey
+ * heights.
  */
 #include <math.h>
 #include <string.h>
@@ -149,346 +150,442 @@ posterior_mode (const TfDensityCurves *curves, guint argmax)
   return curves->x[argmax];
 }
 
+/* One drawing of the figure: what its phases share. */
+typedef struct {
+  cairo_t *cr;
+  TfFigureTheme theme;
+  const TfDensityCurves *curves;
+  double width, height, pad;
+  /* the ranges: the curves drawn as spikes do not set the axis's height */
+  double prior_max, y_max, mode;
+  guint posterior_at, likelihood_at;
+  gboolean spike_posterior, spike_likelihood, interval_null;
+  /* the words */
+  double null_mass;
+  char *x_label, *null_label, *mass_label, *note, *prior_note;
+  double null_h;
+  gboolean mass_beside;         /* the null's probability fits beside its spike */
+  /* the legend, inside the plot area or above it */
+  TfLegendEntry entries[3];
+  guint n_entries, legend_columns;
+  double legend_w, legend_h, legend_x, legend_y;
+  /* the plot area, and the curves in it */
+  TfFigLayout layout;
+  TfFigPoints prior, posterior, likelihood, null_line;
+} Draw;
+
+/* A prior that runs off to infinity at an end (Beta with a or b below 1) would flatten
+ * everything else: the axis then follows the prior's inside and the ends go off the top. */
+static double
+prior_height (const Draw *d, double posterior_max, double likelihood_max)
+{
+  const TfDensityCurves *c = d->curves;
+  guint prior_at, edge = MAX (c->n / 33, 1);
+  double inside = 0, others = 0;
+
+  array_max (c->prior, c->n, &prior_at);
+  for (guint i = edge; i + edge < c->n; i++)
+    inside = MAX (inside, c->prior[i]);
+  if (!d->spike_posterior)
+    others = MAX (others, posterior_max);
+  if (!d->spike_likelihood)
+    others = MAX (others, likelihood_max);
+  if ((prior_at < edge || prior_at + edge >= c->n) && d->prior_max > 1.5 * MAX (inside, others))
+    return MAX (inside, 1e-300);
+  return d->prior_max;
+}
+
+/* What sets the height of the axis, and which curves are drawn as spikes. */
+static void
+densities_ranges (Draw *d)
+{
+  const TfDensityCurves *c = d->curves;
+  double posterior_max = array_max (c->posterior, c->n, &d->posterior_at);
+  double likelihood_max = array_max (c->likelihood, c->n, &d->likelihood_at);
+
+  d->prior_max = array_max (c->prior, c->n, NULL);
+  d->spike_posterior = c->posterior_narrow;
+  d->spike_likelihood = d->spike_posterior && likelihood_max > 4 * MAX (d->prior_max, 1e-300);
+  d->mode = posterior_mode (c, d->posterior_at);
+  d->prior_max = prior_height (d, posterior_max, likelihood_max);
+  d->y_max = d->prior_max;
+  if (!d->spike_posterior)
+    d->y_max = MAX (d->y_max, posterior_max);
+  if (!d->spike_likelihood)
+    d->y_max = MAX (d->y_max, likelihood_max);
+  if (!(d->y_max > 0) || !isfinite (d->y_max))
+    d->y_max = 1;
+}
+
+/* On a range zoomed to the posterior's bulk the prior is a line along the floor: it is
+ * kept drawn at its true height, and that height is written beside it. NULL when the
+ * prior reads off the axis. */
+static char *
+low_prior_note (const Draw *d)
+{
+  g_autofree char *a = NULL;
+  g_autofree char *b = NULL;
+
+  if (!(d->prior_max < LOW_PRIOR_SHARE * d->y_max))
+    return NULL;
+  a = tf_fig_number (array_min (d->curves->prior, d->curves->n), 2);
+  b = tf_fig_number (d->prior_max, 2);
+  if (g_str_equal (a, b))
+    /* TRANSLATORS: beside a prior density too low to read off the axis; %s its height */
+    return g_strdup_printf (_("prior: %s"), a);
+  /* TRANSLATORS: the prior density's lowest and highest height on the range shown */
+  return g_strdup_printf (_("prior: %s to %s"), a, b);
+}
+
+/* The null's name above the area: its interval, or "θ₀ = 0.8". */
+static char *
+null_name (const TfDensityCurves *c, const char *parameter, gboolean interval_null)
+{
+  g_autofree char *value = NULL;
+
+  if (interval_null)
+    {
+      g_autofree char *lo = tf_fig_number (c->null_low, 4);
+      g_autofree char *hi = tf_fig_number (c->null_high, 4);
+      /* TRANSLATORS: the null interval in a figure, e.g. "null: 0.45 to 0.55" */
+      return g_strdup_printf (_("null: %s to %s"), lo, hi);
+    }
+  value = tf_fig_number (c->null_value, 6);
+  /* "θ₀ = 0.8" for a single parameter; a compound one (θA − θB, ln(λA/λB)) takes no
+   * subscript: "θA − θB = 0" */
+  if (strchr (parameter, '<') || strchr (parameter, ' ') || strchr (parameter, '('))
+    return g_strdup_printf ("<i>%s</i> = %s", parameter, value);
+  return g_strdup_printf ("<i>%s</i>₀ = %s", parameter, value);
+}
+
+/* The notes, the axis's and the null's names, and the legend's entries. */
+static void
+densities_words (Draw *d)
+{
+  const TfDensityCurves *c = d->curves;
+  const char *parameter = c->parameter_markup ? c->parameter_markup : "θ";
+
+  d->prior_note = low_prior_note (d);
+  d->x_label = g_strdup_printf ("<i>%s</i>", parameter);
+  d->interval_null = c->null_high > c->null_low;
+  d->null_label = null_name (c, parameter, d->interval_null);
+  if (isfinite (d->null_mass))
+    {
+      g_autofree char *p = tf_fig_number (d->null_mass, 3);
+      /* TRANSLATORS: beside the spike of the null: its probability given the data */
+      d->mass_label = g_strdup_printf (_("P(H₀ | data) = %s"), p);
+    }
+  d->null_h = tf_fig_text_height (d->cr, &d->theme, d->theme.text_size, d->null_label);
+
+  if (d->spike_posterior)
+    {
+      g_autofree char *m = g_strdup_printf ("%.4g", d->mode);
+      /* TRANSLATORS: legend of a posterior drawn as a spike; %s is its mode, e.g. 0.8094 */
+      d->note = g_strdup_printf (_("Posterior under H₁, too narrow\nto draw: a spike at its mode, %s"), m);
+      d->entries[d->n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, d->note, TF_SWATCH_LINE };
+    }
+  else
+    d->entries[d->n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, _("Posterior under H₁"), TF_SWATCH_LINE };
+  d->entries[d->n_entries++] = (TfLegendEntry) { TF_SERIES_PRIOR, _("Prior under H₁"), TF_SWATCH_LINE };
+  d->entries[d->n_entries++] = (TfLegendEntry) { TF_SERIES_LIKELIHOOD, _("Likelihood, scaled"), TF_SWATCH_LINE };
+}
+
+static void
+clear_curves (Draw *d)
+{
+  tf_fig_points_clear (&d->prior);
+  tf_fig_points_clear (&d->posterior);
+  tf_fig_points_clear (&d->likelihood);
+  tf_fig_points_clear (&d->null_line);
+}
+
+/* The curves in the plot area of this layout (a spike as a vertical line). */
+static void
+map_curves (Draw *d)
+{
+  const TfDensityCurves *c = d->curves;
+  const TfPlotArea *area = &d->layout.area;
+
+  tf_fig_points_map (area, c->x, c->prior, c->n, TRUE, &d->prior);
+  if (d->spike_posterior)
+    map_vertical (area, d->mode, &d->posterior);
+  else
+    tf_fig_points_map (area, c->x, c->posterior, c->n, TRUE, &d->posterior);
+  if (d->spike_likelihood)
+    map_vertical (area, c->x[d->likelihood_at], &d->likelihood);
+  else
+    tf_fig_points_map (area, c->x, c->likelihood, c->n, TRUE, &d->likelihood);
+  map_vertical (area, c->null_value, &d->null_line);
+}
+
+/* The box of the point null's probability beside its spike, inside the area (TRUE), or
+ * not (FALSE: it goes beside the null's name above the area). */
+static gboolean
+mass_box (const Draw *d, double box_x[5], double box_y[5])
+{
+  const TfPlotArea *area = &d->layout.area;
+  double mw = tf_fig_text_width (d->cr, &d->theme, d->theme.text_size, d->mass_label);
+  double mh = tf_fig_text_height (d->cr, &d->theme, d->theme.text_size, d->mass_label);
+  double mx = mass_label_x (&d->theme, area, d->curves->null_value, mw);
+  double my = area->y + tf_figure_theme_pt (&d->theme, 1.0);
+
+  box_x[0] = box_x[3] = box_x[4] = mx;
+  box_x[1] = box_x[2] = mx + mw;
+  box_y[0] = box_y[1] = box_y[4] = my;
+  box_y[2] = box_y[3] = my + mh;
+  return mx >= area->x;
+}
+
+/* A place in the plot area for the legend where it hides no curve and not the null's
+ * probability (box, or NULL). */
+static gboolean
+place_legend_inside (Draw *d, const double *box_x, const double *box_y)
+{
+  TfPolyline lines[5];
+  guint n_lines = 0;
+
+  lines[n_lines++] = (TfPolyline) { d->prior.x, d->prior.y, d->prior.n };
+  lines[n_lines++] = (TfPolyline) { d->posterior.x, d->posterior.y, d->posterior.n };
+  lines[n_lines++] = (TfPolyline) { d->likelihood.x, d->likelihood.y, d->likelihood.n };
+  lines[n_lines++] = (TfPolyline) { d->null_line.x, d->null_line.y, d->null_line.n };
+  if (box_x)
+    lines[n_lines++] = (TfPolyline) { box_x, box_y, 5 };
+  return tf_legend_place (&d->layout.area, d->legend_w, d->legend_h,
+                          tf_figure_theme_pt (&d->theme, 4.0), lines, n_lines,
+                          &d->legend_x, &d->legend_y);
+}
+
+/* Above the plot area: as few rows as fit the width; in a narrow figure, shorter names
+ * in fewer rows. */
+static void
+fit_legend_above (Draw *d)
+{
+  double max_w = d->width - 2 * d->pad;
+
+  d->legend_columns = tf_legend_fit_columns (d->cr, &d->theme, d->entries, d->n_entries, max_w);
+  if (d->legend_columns < d->n_entries)
+    {
+      if (!d->spike_posterior)
+        d->entries[0].markup = _("Posterior (H₁)");
+      d->entries[1].markup = _("Prior (H₁)");
+      d->entries[2].markup = _("Likelihood");
+      d->legend_columns = tf_legend_fit_columns (d->cr, &d->theme, d->entries, d->n_entries,
+                                                 max_w);
+    }
+}
+
+/* The margins and the plot area, with the legend inside; if it would hide data, with
+ * the legend above the plot area. */
+static void
+densities_layout (Draw *d)
+{
+  double top_extra = d->null_h + tf_figure_theme_pt (&d->theme, 2.0);
+
+  d->legend_columns = 1;
+  for (int attempt = 0; attempt < 2; attempt++)
+    {
+      gboolean above = attempt == 1;
+      gboolean box = d->mass_label && !d->interval_null;
+      double box_x[5], box_y[5];
+
+      clear_curves (d);
+      if (above)
+        fit_legend_above (d);
+      tf_legend_measure (d->cr, &d->theme, d->entries, d->n_entries, d->legend_columns,
+                         &d->legend_w, &d->legend_h);
+      tf_fig_layout_single (d->cr, &d->theme, d->width, d->height,
+                            top_extra + (above ? d->legend_h + tf_figure_theme_pt (&d->theme, 2.0) : 0),
+                            0, d->x_label, _("density"), d->curves->lo, d->curves->hi, FALSE,
+                            0, d->y_max * 1.04, &d->layout);
+      map_curves (d);
+      if (box)
+        d->mass_beside = mass_box (d, box_x, box_y);
+      if (above)
+        {
+          d->legend_x = tf_fig_centred_over (&d->layout.area, d->legend_w, d->width, d->pad);
+          d->legend_y = d->pad;
+        }
+      else if (place_legend_inside (d, box && d->mass_beside ? box_x : NULL, box_y))
+        break;
+    }
+}
+
+/* The posterior's area, lightly filled. */
+static void
+fill_under (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+            const TfFigPoints *p, TfSeries series)
+{
+  cairo_new_path (cr);
+  for (guint i = 0; i < p->n; i++)
+    if (isfinite (p->y[i]))
+      cairo_line_to (cr, p->x[i], p->y[i]);
+  cairo_line_to (cr, p->x[p->n - 1], area->y + area->height);
+  cairo_line_to (cr, p->x[0], area->y + area->height);
+  cairo_close_path (cr);
+  tf_figure_theme_set_source_alpha (cr, &theme->series[series], 0.10);
+  cairo_fill (cr);
+}
+
+/* The interval null's band and the curves, clipped to the plot area. */
+static void
+densities_curves (Draw *d)
+{
+  cairo_t *cr = d->cr;
+  const TfFigureTheme *theme = &d->theme;
+  const TfPlotArea *area = &d->layout.area;
+
+  cairo_save (cr);
+  cairo_rectangle (cr, area->x, area->y - tf_figure_theme_pt (theme, 1.0),
+                   area->width, area->height + tf_figure_theme_pt (theme, 1.0));
+  cairo_clip (cr);
+  if (d->interval_null)
+    {
+      double x0 = tf_plot_area_map_x (area, d->curves->null_low);
+      double x1 = tf_plot_area_map_x (area, d->curves->null_high);
+      cairo_rectangle (cr, x0, area->y, x1 - x0, area->height);
+      tf_figure_theme_fill_hatched (cr, theme, TF_SERIES_NULL, 0.06);
+    }
+  if (!d->spike_posterior)
+    fill_under (cr, theme, area, &d->posterior, TF_SERIES_POSTERIOR);
+
+  tf_fig_stroke_series (cr, theme, TF_SERIES_PRIOR, &d->prior);
+  if (d->spike_posterior)
+    tf_fig_spike (cr, theme, area, TF_SERIES_POSTERIOR, d->mode);
+  else
+    tf_fig_stroke_series (cr, theme, TF_SERIES_POSTERIOR, &d->posterior);
+  /* the likelihood's dashes on top: with a flat prior it lies on the posterior */
+  if (d->spike_likelihood)
+    tf_fig_spike (cr, theme, area, TF_SERIES_LIKELIHOOD, d->curves->x[d->likelihood_at]);
+  else
+    tf_fig_stroke_series (cr, theme, TF_SERIES_LIKELIHOOD, &d->likelihood);
+  cairo_restore (cr);
+}
+
+/* The prior's height in words, on the side away from the posterior's peak. */
+static void
+densities_prior_note (Draw *d)
+{
+  const TfFigureTheme *theme = &d->theme;
+  const TfPlotArea *area = &d->layout.area;
+  double peak_x, w, h, gap, lx, ly;
+
+  if (d->prior_note == NULL)
+    return;
+  peak_x = tf_plot_area_map_x (area, d->spike_posterior ? d->mode
+                                                         : d->curves->x[d->posterior_at]);
+  w = tf_fig_text_width (d->cr, theme, theme->text_size, d->prior_note);
+  h = tf_fig_text_height (d->cr, theme, theme->text_size, d->prior_note);
+  gap = tf_figure_theme_pt (theme, 3.0);
+  lx = peak_x > area->x + area->width / 2 ? area->x + gap : area->x + area->width - w - gap;
+  ly = tf_plot_area_map_y (area, d->prior_max) - h - tf_figure_theme_pt (theme, 1.5);
+  tf_fig_text_halo (d->cr, theme, &theme->series[TF_SERIES_PRIOR], theme->text_size,
+                    d->prior_note, lx, MAX (ly, area->y));
+}
+
+/* A point null: a spike with its probability beside it (or beside its name, when it
+ * does not fit), or a plain line; and the Savage–Dickey heights. */
+static void
+densities_point_null (Draw *d)
+{
+  cairo_t *cr = d->cr;
+  const TfFigureTheme *theme = &d->theme;
+  const TfPlotArea *area = &d->layout.area;
+  const TfDensityCurves *c = d->curves;
+  double x = tf_plot_area_map_x (area, c->null_value);
+
+  if (d->mass_label)
+    {
+      double mw = tf_fig_text_width (cr, theme, theme->text_size, d->mass_label);
+
+      tf_fig_spike (cr, theme, area, TF_SERIES_NULL, c->null_value);
+      if (d->mass_beside)
+        tf_fig_text_halo (cr, theme, &theme->foreground, theme->text_size, d->mass_label,
+                          mass_label_x (theme, area, c->null_value, mw),
+                          area->y + tf_figure_theme_pt (theme, 1.0));
+      else
+        {
+          /* beside the null's name, on its line above the area */
+          char *both = g_strdup_printf ("%s   %s", d->null_label, d->mass_label);
+          g_free (d->null_label);
+          d->null_label = both;
+        }
+    }
+  else
+    {
+      tf_figure_theme_set_series_line (cr, theme, TF_SERIES_NULL);
+      cairo_move_to (cr, x, area->y + area->height);
+      cairo_line_to (cr, x, area->y);
+      cairo_stroke (cr);
+    }
+
+  /* Savage–Dickey heights: both densities at the null value, where the models nest (a
+   * design that leaves both at 0 has no such ratio). */
+  if (c->prior_at_null > 0.0 || c->posterior_at_null > 0.0)
+    {
+      tf_fig_marker (cr, theme, area, TF_SERIES_PRIOR, c->null_value, c->prior_at_null, FALSE);
+      if (!d->spike_posterior)
+        tf_fig_marker (cr, theme, area, TF_SERIES_POSTERIOR, c->null_value,
+                       c->posterior_at_null, TRUE);
+    }
+}
+
+/* The null, when it is on the range: a point's spike or an interval's centre, named
+ * above the area. */
+static void
+densities_null (Draw *d)
+{
+  const TfFigureTheme *theme = &d->theme;
+  const TfPlotArea *area = &d->layout.area;
+  const TfDensityCurves *c = d->curves;
+  double x, w;
+
+  if (!(c->null_value >= area->x_lo && c->null_value <= area->x_hi))
+    return;
+  if (!d->interval_null)
+    {
+      densities_point_null (d);
+      x = tf_plot_area_map_x (area, c->null_value);
+    }
+  else
+    x = tf_plot_area_map_x (area, (c->null_low + c->null_high) / 2);
+  w = tf_fig_text_width (d->cr, theme, theme->text_size, d->null_label);
+  tf_fig_text (d->cr, theme, &theme->foreground, theme->text_size, d->null_label,
+               tf_fig_label_x (x, w, area, d->width, d->pad),
+               area->y - d->null_h - tf_figure_theme_pt (theme, 1.5));
+}
+
 gboolean
 tf_figure_draw_density_curves (cairo_t *cr, double width, double height, double scale,
                                const TfDensityCurves *curves, double null_mass,
                                const TfFigureOptions *options, TfPlotArea *area_out)
 {
-  const TfFigureOptions *opt = tf_fig_options (options);
-  TfFigureTheme theme;
-  g_autofree char *x_label = NULL;
-  g_autofree char *null_label = NULL;
-  g_autofree char *mass_label = NULL;
-  g_autofree char *note = NULL;
-  g_autofree char *prior_note = NULL;
-  const char *y_label = _("density");
-  const char *parameter;
-  gboolean spike_posterior, spike_likelihood, interval_null, low_prior, mass_beside = FALSE;
-  double prior_max, posterior_max, likelihood_max, y_max, null_h, top_extra, mode;
-  double pad;
-  guint posterior_at, likelihood_at;
-  TfFigLayout layout;
-  TfPlotArea *area;
-  TfFigPoints prior = { 0 }, posterior = { 0 }, likelihood = { 0 }, null_line = { 0 };
-  TfLegendEntry entries[3];
-  guint n_entries = 0;
-  double legend_w, legend_h, legend_x = 0, legend_y = 0;
-  guint legend_columns;
+  Draw d = { .cr = cr, .curves = curves, .width = width, .height = height,
+             .null_mass = null_mass };
 
-  tf_figure_theme_init (&theme, opt->style, scale);
-  pad = tf_figure_theme_pt (&theme, TF_FIG_PAD_PT);
-  cairo_save (cr);
-  tf_fig_begin (cr, &theme, width, height);
+  tf_fig_start (cr, &d.theme, tf_fig_options (options)->style, scale, width, height);
   if (curves == NULL || curves->n < 2 || !(curves->hi > curves->lo))
-    {
-      tf_fig_message (cr, &theme, width, height, NULL, _("There are no curves to draw."));
-      cairo_restore (cr);
-      return FALSE;
-    }
+    return tf_fig_nothing (cr, &d.theme, width, height, _("There are no curves to draw."));
+  d.pad = tf_figure_theme_pt (&d.theme, TF_FIG_PAD_PT);
 
-  /* What sets the height of the axis: curves drawn as spikes do not. */
-  prior_max = array_max (curves->prior, curves->n, NULL);
-  posterior_max = array_max (curves->posterior, curves->n, &posterior_at);
-  likelihood_max = array_max (curves->likelihood, curves->n, &likelihood_at);
-  spike_posterior = curves->posterior_narrow;
-  spike_likelihood = spike_posterior && likelihood_max > 4 * MAX (prior_max, 1e-300);
-  mode = posterior_mode (curves, posterior_at);
-  /* A prior that runs off to infinity at an end (Beta with a or b below 1) would flatten
-   * everything else: the axis then follows the prior's inside and the ends go off the top. */
-  {
-    guint prior_at, edge = MAX (curves->n / 33, 1);
-    double inside = 0, others = 0;
-
-    array_max (curves->prior, curves->n, &prior_at);
-    for (guint i = edge; i + edge < curves->n; i++)
-      inside = MAX (inside, curves->prior[i]);
-    if (!spike_posterior)
-      others = MAX (others, posterior_max);
-    if (!spike_likelihood)
-      others = MAX (others, likelihood_max);
-    if ((prior_at < edge || prior_at + edge >= curves->n)
-        && prior_max > 1.5 * MAX (inside, others))
-      prior_max = MAX (inside, 1e-300);
-  }
-  y_max = prior_max;
-  if (!spike_posterior)
-    y_max = MAX (y_max, posterior_max);
-  if (!spike_likelihood)
-    y_max = MAX (y_max, likelihood_max);
-  if (!(y_max > 0) || !isfinite (y_max))
-    y_max = 1;
-  /* On a range zoomed to the posterior's bulk the prior is a line along the floor: keep
-   * it drawn at its true height and write that height beside it. */
-  low_prior = prior_max < LOW_PRIOR_SHARE * y_max;
-  if (low_prior)
-    {
-      double lo = array_min (curves->prior, curves->n);
-      g_autofree char *a = tf_fig_number (lo, 2);
-      g_autofree char *b = tf_fig_number (prior_max, 2);
-
-      if (g_str_equal (a, b))
-        /* TRANSLATORS: beside a prior density too low to read off the axis; %s its height */
-        prior_note = g_strdup_printf (_("prior: %s"), a);
-      else
-        /* TRANSLATORS: the prior density's lowest and highest height on the range shown */
-        prior_note = g_strdup_printf (_("prior: %s to %s"), a, b);
-    }
-
-  parameter = curves->parameter_markup ? curves->parameter_markup : "θ";
-  x_label = g_strdup_printf ("<i>%s</i>", parameter);
-  interval_null = curves->null_high > curves->null_low;
-  if (interval_null)
-    {
-      g_autofree char *lo = tf_fig_number (curves->null_low, 4);
-      g_autofree char *hi = tf_fig_number (curves->null_high, 4);
-      /* TRANSLATORS: the null interval in a figure, e.g. "null: 0.45 to 0.55" */
-      null_label = g_strdup_printf (_("null: %s to %s"), lo, hi);
-    }
-  else
-    {
-      g_autofree char *value = tf_fig_number (curves->null_value, 6);
-      /* "θ₀ = 0.8" for a single parameter; a compound one (θA − θB, ln(λA/λB))
-       * takes no subscript: "θA − θB = 0" */
-      if (strchr (parameter, '<') || strchr (parameter, ' ') || strchr (parameter, '('))
-        null_label = g_strdup_printf ("<i>%s</i> = %s", parameter, value);
-      else
-        null_label = g_strdup_printf ("<i>%s</i>₀ = %s", parameter, value);
-    }
-  if (isfinite (null_mass))
-    {
-      g_autofree char *p = tf_fig_number (null_mass, 3);
-      /* TRANSLATORS: beside the spike of the null: its probability given the data */
-      mass_label = g_strdup_printf (_("P(H₀ | data) = %s"), p);
-    }
-  null_h = tf_fig_text_height (cr, &theme, theme.text_size, null_label);
-  top_extra = null_h + tf_figure_theme_pt (&theme, 2.0);
-
-  if (spike_posterior)
-    {
-      g_autofree char *m = g_strdup_printf ("%.4g", mode);
-      /* TRANSLATORS: legend of a posterior drawn as a spike; %s is its mode, e.g. 0.8094 */
-      note = g_strdup_printf (_("Posterior under H₁, too narrow\nto draw: a spike at its mode, %s"), m);
-      entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, note, TF_SWATCH_LINE };
-    }
-  else
-    entries[n_entries++] = (TfLegendEntry) { TF_SERIES_POSTERIOR, _("Posterior under H₁"), TF_SWATCH_LINE };
-  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_PRIOR, _("Prior under H₁"), TF_SWATCH_LINE };
-  entries[n_entries++] = (TfLegendEntry) { TF_SERIES_LIKELIHOOD, _("Likelihood, scaled"), TF_SWATCH_LINE };
-
-  /* Lay out with the legend inside; if it would hide data, put it above the plot area in
-   * as few rows as fit the width. */
-  legend_columns = 1;
-  for (int attempt = 0; attempt < 2; attempt++)
-    {
-      gboolean above = attempt == 1;
-      TfPolyline lines[6];
-      guint n_lines = 0;
-      double box_x[5], box_y[5];
-
-      tf_fig_points_clear (&prior);
-      tf_fig_points_clear (&posterior);
-      tf_fig_points_clear (&likelihood);
-      tf_fig_points_clear (&null_line);
-      if (above)
-        {
-          for (legend_columns = n_entries; legend_columns > 1; legend_columns--)
-            {
-              tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
-              if (legend_w <= width - 2 * pad)
-                break;
-            }
-          /* a narrow figure: shorter names, in fewer rows */
-          if (legend_columns < n_entries)
-            {
-              if (!spike_posterior)
-                entries[0].markup = _("Posterior (H₁)");
-              entries[1].markup = _("Prior (H₁)");
-              entries[2].markup = _("Likelihood");
-              for (legend_columns = n_entries; legend_columns > 1; legend_columns--)
-                {
-                  tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
-                  if (legend_w <= width - 2 * pad)
-                    break;
-                }
-            }
-        }
-      tf_legend_measure (cr, &theme, entries, n_entries, legend_columns, &legend_w, &legend_h);
-      tf_fig_layout_single (cr, &theme, width, height,
-                            top_extra + (above ? legend_h + tf_figure_theme_pt (&theme, 2.0) : 0),
-                            0, x_label, y_label, curves->lo, curves->hi, FALSE, 0, y_max * 1.04,
-                            &layout);
-      area = &layout.area;
-
-      tf_fig_points_map (area, curves->x, curves->prior, curves->n, TRUE, &prior);
-      if (spike_posterior)
-        map_vertical (area, mode, &posterior);
-      else
-        tf_fig_points_map (area, curves->x, curves->posterior, curves->n, TRUE, &posterior);
-      if (spike_likelihood)
-        map_vertical (area, curves->x[likelihood_at], &likelihood);
-      else
-        tf_fig_points_map (area, curves->x, curves->likelihood, curves->n, TRUE, &likelihood);
-      map_vertical (area, curves->null_value, &null_line);
-
-      lines[n_lines++] = (TfPolyline) { prior.x, prior.y, prior.n };
-      lines[n_lines++] = (TfPolyline) { posterior.x, posterior.y, posterior.n };
-      lines[n_lines++] = (TfPolyline) { likelihood.x, likelihood.y, likelihood.n };
-      lines[n_lines++] = (TfPolyline) { null_line.x, null_line.y, null_line.n };
-      /* the point null's probability, written beside its spike where it fits inside the
-       * area (else beside the null's name above it): the legend keeps off it */
-      if (mass_label && !interval_null)
-        {
-          double mw = tf_fig_text_width (cr, &theme, theme.text_size, mass_label);
-          double mh = tf_fig_text_height (cr, &theme, theme.text_size, mass_label);
-          double mx = mass_label_x (&theme, area, curves->null_value, mw);
-          double my = area->y + tf_figure_theme_pt (&theme, 1.0);
-
-          mass_beside = mx >= area->x;
-          box_x[0] = box_x[3] = box_x[4] = mx;
-          box_x[1] = box_x[2] = mx + mw;
-          box_y[0] = box_y[1] = box_y[4] = my;
-          box_y[2] = box_y[3] = my + mh;
-          if (mass_beside)
-            lines[n_lines++] = (TfPolyline) { box_x, box_y, 5 };
-        }
-
-      if (!above)
-        {
-          if (tf_legend_place (area, legend_w, legend_h, tf_figure_theme_pt (&theme, 4.0),
-                               lines, n_lines, &legend_x, &legend_y))
-            break;
-        }
-      else
-        {
-          /* centred over the plot area, inside the figure */
-          legend_x = area->x + (area->width - legend_w) / 2;
-          legend_x = MAX (MIN (legend_x, width - pad - legend_w), pad);
-          legend_y = pad;
-        }
-    }
-  area = &layout.area;
-
-  /* The data, clipped to the plot area. */
-  cairo_save (cr);
-  cairo_rectangle (cr, area->x, area->y - tf_figure_theme_pt (&theme, 1.0),
-                   area->width, area->height + tf_figure_theme_pt (&theme, 1.0));
-  cairo_clip (cr);
-
-  if (interval_null)
-    {
-      double x0 = tf_plot_area_map_x (area, curves->null_low);
-      double x1 = tf_plot_area_map_x (area, curves->null_high);
-      cairo_rectangle (cr, x0, area->y, x1 - x0, area->height);
-      tf_figure_theme_fill_hatched (cr, &theme, TF_SERIES_NULL, 0.06);
-    }
-
-  if (!spike_posterior)
-    {
-      cairo_new_path (cr);
-      for (guint i = 0; i < posterior.n; i++)
-        if (isfinite (posterior.y[i]))
-          cairo_line_to (cr, posterior.x[i], posterior.y[i]);
-      cairo_line_to (cr, posterior.x[posterior.n - 1], area->y + area->height);
-      cairo_line_to (cr, posterior.x[0], area->y + area->height);
-      cairo_close_path (cr);
-      tf_figure_theme_set_source_alpha (cr, &theme.series[TF_SERIES_POSTERIOR], 0.10);
-      cairo_fill (cr);
-    }
-
-  tf_fig_stroke_series (cr, &theme, TF_SERIES_PRIOR, &prior);
-  if (spike_posterior)
-    tf_fig_spike (cr, &theme, area, TF_SERIES_POSTERIOR, mode);
-  else
-    tf_fig_stroke_series (cr, &theme, TF_SERIES_POSTERIOR, &posterior);
-
-  /* the likelihood's dashes on top: with a flat prior it lies on the posterior */
-  if (spike_likelihood)
-    tf_fig_spike (cr, &theme, area, TF_SERIES_LIKELIHOOD, curves->x[likelihood_at]);
-  else
-    tf_fig_stroke_series (cr, &theme, TF_SERIES_LIKELIHOOD, &likelihood);
-  cairo_restore (cr);
-
-  /* The prior's height in words, on the side away from the posterior's peak. */
-  if (prior_note)
-    {
-      double peak_x = tf_plot_area_map_x (area, spike_posterior ? mode : curves->x[posterior_at]);
-      double w = tf_fig_text_width (cr, &theme, theme.text_size, prior_note);
-      double h = tf_fig_text_height (cr, &theme, theme.text_size, prior_note);
-      double gap = tf_figure_theme_pt (&theme, 3.0);
-      double lx = peak_x > area->x + area->width / 2 ? area->x + gap
-                                                      : area->x + area->width - w - gap;
-      double ly = tf_plot_area_map_y (area, prior_max) - h - tf_figure_theme_pt (&theme, 1.5);
-
-      tf_fig_text_halo (cr, &theme, &theme.series[TF_SERIES_PRIOR], theme.text_size, prior_note,
-                        lx, MAX (ly, area->y));
-    }
-
-  /* The null: a spike for a point (its probability beside it), labelled above the area. */
-  if (curves->null_value >= area->x_lo && curves->null_value <= area->x_hi)
-    {
-      double x = tf_plot_area_map_x (area, curves->null_value);
-      double w, lx;
-
-      if (!interval_null)
-        {
-          if (mass_label)
-            {
-              double mw = tf_fig_text_width (cr, &theme, theme.text_size, mass_label);
-
-              tf_fig_spike (cr, &theme, area, TF_SERIES_NULL, curves->null_value);
-              if (mass_beside)
-                tf_fig_text_halo (cr, &theme, &theme.foreground, theme.text_size, mass_label,
-                                  mass_label_x (&theme, area, curves->null_value, mw),
-                                  area->y + tf_figure_theme_pt (&theme, 1.0));
-              else
-                {
-                  /* beside the null's name, on its line above the area */
-                  char *both = g_strdup_printf ("%s   %s", null_label, mass_label);
-                  g_free (null_label);
-                  null_label = both;
-                }
-            }
-          else
-            {
-              tf_figure_theme_set_series_line (cr, &theme, TF_SERIES_NULL);
-              cairo_move_to (cr, x, area->y + area->height);
-              cairo_line_to (cr, x, area->y);
-              cairo_stroke (cr);
-            }
-
-          /* Savage–Dickey heights: both densities at the null value, where the models
-           * nest (a design that leaves both at 0 has no such ratio). */
-          if (curves->prior_at_null > 0.0 || curves->posterior_at_null > 0.0)
-            {
-              tf_fig_marker (cr, &theme, area, TF_SERIES_PRIOR, curves->null_value,
-                             curves->prior_at_null, FALSE);
-              if (!spike_posterior)
-                tf_fig_marker (cr, &theme, area, TF_SERIES_POSTERIOR, curves->null_value,
-                               curves->posterior_at_null, TRUE);
-            }
-        }
-      else
-        x = tf_plot_area_map_x (area, (curves->null_low + curves->null_high) / 2);
-
-      /* centred on the null, inside the figure and right of the y axis's labels */
-      w = tf_fig_text_width (cr, &theme, theme.text_size, null_label);
-      lx = MAX (MIN (x - w / 2, width - w - pad), MIN (area->x, width - w - pad));
-      lx = MAX (lx, pad);
-      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, null_label, lx,
-                        area->y - null_h - tf_figure_theme_pt (&theme, 1.5));
-    }
-
-  tf_axis_draw_bottom (cr, &theme, area, &layout.x_ticks, x_label);
-  tf_axis_draw_left (cr, &theme, area, &layout.y_ticks, y_label);
-  tf_legend_draw (cr, &theme, entries, n_entries, legend_columns, legend_x, legend_y);
-
+  densities_ranges (&d);
+  densities_words (&d);
+  densities_layout (&d);
+  densities_curves (&d);
+  densities_prior_note (&d);
+  densities_null (&d);
+  tf_axis_draw_bottom (cr, &d.theme, &d.layout.area, &d.layout.x_ticks, d.x_label);
+  tf_axis_draw_left (cr, &d.theme, &d.layout.area, &d.layout.y_ticks, _("density"));
+  tf_legend_draw (cr, &d.theme, d.entries, d.n_entries, d.legend_columns, d.legend_x,
+                  d.legend_y);
   if (area_out)
-    *area_out = *area;
+    *area_out = d.layout.area;
 
-  tf_fig_points_clear (&prior);
-  tf_fig_points_clear (&posterior);
-  tf_fig_points_clear (&likelihood);
-  tf_fig_points_clear (&null_line);
+  clear_curves (&d);
+  g_free (d.x_label);
+  g_free (d.null_label);
+  g_free (d.mass_label);
+  g_free (d.note);
+  g_free (d.prior_note);
   cairo_restore (cr);
   return TRUE;
 }

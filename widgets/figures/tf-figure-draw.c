@@ -140,6 +140,39 @@ tf_fig_begin (cairo_t *cr, TfFigureTheme *theme, double width, double height)
 }
 
 void
+tf_fig_start (cairo_t *cr, TfFigureTheme *theme, TfFigureStyle style, double scale,
+              double width, double height)
+{
+  tf_figure_theme_init (theme, style, scale);
+  cairo_save (cr);
+  tf_fig_begin (cr, theme, width, height);
+}
+
+gboolean
+tf_fig_nothing (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
+                const char *reason)
+{
+  tf_fig_message (cr, theme, width, height, NULL, reason);
+  cairo_restore (cr);
+  return FALSE;
+}
+
+double
+tf_fig_label_x (double x, double label_width, const TfPlotArea *area, double width,
+                double pad)
+{
+  double right = width - pad - label_width;
+
+  return MAX (MAX (MIN (x - label_width / 2, right), MIN (area->x, right)), pad);
+}
+
+double
+tf_fig_centred_over (const TfPlotArea *area, double box_width, double width, double pad)
+{
+  return MAX (MIN (area->x + (area->width - box_width) / 2, width - pad - box_width), pad);
+}
+
+void
 tf_fig_message (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
                 const char *title, const char *reason)
 {

@@ -38,6 +38,22 @@ const TfFigureOptions *tf_fig_options (const TfFigureOptions *options);
 void tf_fig_begin (cairo_t *cr, TfFigureTheme *theme, double width, double height);
 void tf_fig_message (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
                      const char *title, const char *reason);
+/* Starts a figure: the theme of style at scale, fitted to the size; cairo's state saved
+ * (the figure restores it when done); the background filled. */
+void tf_fig_start (cairo_t *cr, TfFigureTheme *theme, TfFigureStyle style, double scale,
+                   double width, double height);
+/* Ends a figure started that has nothing to draw: the reason in its place, cairo's state
+ * restored. Returns FALSE (nothing drawn). */
+gboolean tf_fig_nothing (cairo_t *cr, const TfFigureTheme *theme, double width,
+                         double height, const char *reason);
+/* The left edge of a label label_width wide above the area, centred on column x, right
+ * of the y axis's labels (the area's left edge) and inside the figure: the null's name,
+ * the observed value, the chosen setting. */
+double tf_fig_label_x (double x, double label_width, const TfPlotArea *area, double width,
+                       double pad);
+/* The left edge of a box centred over the plot area, inside the figure (a legend above). */
+double tf_fig_centred_over (const TfPlotArea *area, double box_width, double width,
+                            double pad);
 
 /* Height of one line of markup at size points, user units. */
 double tf_fig_text_height (cairo_t *cr, const TfFigureTheme *theme, double size,

@@ -95,6 +95,22 @@ count_hits (const TfPolyline *lines, guint n_lines,
   return hits;
 }
 
+guint
+tf_legend_fit_columns (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
+                       guint n_entries, double max_width)
+{
+  guint columns;
+  double w, h;
+
+  for (columns = n_entries; columns > 1; columns--)
+    {
+      tf_legend_measure (cr, theme, entries, n_entries, columns, &w, &h);
+      if (w <= max_width)
+        break;
+    }
+  return columns;
+}
+
 gboolean
 tf_legend_box_is_clear (const TfPolyline *lines, guint n_lines, double left, double top,
                         double right, double bottom)

@@ -33,6 +33,11 @@ typedef struct {
 void tf_legend_measure (cairo_t *cr, const TfFigureTheme *theme, const TfLegendEntry *entries,
                         guint n_entries, guint columns, double *width, double *height);
 
+/* The most columns (one row: n_entries) in which the legend is at most max_width wide;
+ * 1 when none is. */
+guint tf_legend_fit_columns (cairo_t *cr, const TfFigureTheme *theme,
+                             const TfLegendEntry *entries, guint n_entries, double max_width);
+
 /* Finds a place for a width × height box inside area, inset from its edges, that no
  * polyline crosses: the top corners first, then along the top, then lower down.
  * Returns FALSE when every place hides some data. */
