@@ -224,27 +224,59 @@ tf_ticks_target (const TfFigureTheme *theme, double length, double spacing_pt)
   return (guint) CLAMP (floor (n) + 1, 2, 10);
 }
 
-double
-tf_axis_left_extent (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
-                     const char *label_markup)
+/* The widest and the tallest of the ticks' labels (either may be NULL). */
+static void
+tick_labels_size (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
+                  double *widest, double *tallest)
 {
-  double widest = 0, label_h = 0;
+  double max_w = 0, max_h = 0;
 
   for (guint i = 0; i < ticks->n; i++)
     {
       g_autofree char *text = tf_ticks_label (ticks, i);
       g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
-      double w;
+      double w, h;
 
-      tf_figure_layout_size (layout, &w, NULL);
-      widest = MAX (widest, w);
+      tf_figure_layout_size (layout, &w, &h);
+      max_w = MAX (max_w, w);
+      max_h = MAX (max_h, h);
     }
-  if (label_markup)
-    {
-      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
-                                                               label_markup);
-      tf_figure_layout_size (layout, NULL, &label_h);
-    }
+  if (widest)
+    *widest = max_w;
+  if (tallest)
+    *tallest = max_h;
+}
+
+double
+tf_axis_widest_tick_label (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks)
+{
+  double w;
+
+  tick_labels_size (cr, theme, ticks, &w, NULL);
+  return w;
+}
+
+/* The height of an axis's name (0 without one). */
+static double
+label_height (cairo_t *cr, const TfFigureTheme *theme, const char *label_markup)
+{
+  g_autoptr (PangoLayout) layout = NULL;
+  double h;
+
+  if (label_markup == NULL)
+    return 0;
+  layout = tf_figure_theme_layout (cr, theme, theme->label_size, label_markup);
+  tf_figure_layout_size (layout, NULL, &h);
+  return h;
+}
+
+double
+tf_axis_left_extent (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
+                     const char *label_markup)
+{
+  double widest = tf_axis_widest_tick_label (cr, theme, ticks);
+  double label_h = label_height (cr, theme, label_markup);
+
   return tf_figure_theme_pt (theme, theme->tick_length + GAP_PT) + widest
          + (label_h > 0 ? tf_figure_theme_pt (theme, GAP_PT * 1.5) + label_h : 0);
 }
@@ -263,23 +295,10 @@ double
 tf_axis_bottom_extent_ticks (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
                              const char *label_markup)
 {
-  double tick_h = 0, label_h = 0;
+  double tick_h = 0, label_h = label_height (cr, theme, label_markup);
 
-  for (guint i = 0; ticks && i < ticks->n; i++)
-    {
-      g_autofree char *text = tf_ticks_label (ticks, i);
-      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->text_size, text);
-      double h;
-
-      tf_figure_layout_size (layout, NULL, &h);
-      tick_h = MAX (tick_h, h);
-    }
-  if (label_markup)
-    {
-      g_autoptr (PangoLayout) layout = tf_figure_theme_layout (cr, theme, theme->label_size,
-                                                               label_markup);
-      tf_figure_layout_size (layout, NULL, &label_h);
-    }
+  if (ticks)
+    tick_labels_size (cr, theme, ticks, NULL, &tick_h);
   return tf_figure_theme_pt (theme, theme->tick_length + GAP_PT) + tick_h
          + (label_h > 0 ? tf_figure_theme_pt (theme, GAP_PT) + label_h : 0);
 }

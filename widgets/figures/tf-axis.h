@@ -71,6 +71,10 @@ char *tf_ticks_label (const TfTicks *ticks, guint i);
 /* How many ticks fit in length user units at one tick per spacing_pt points (2..10). */
 guint tf_ticks_target (const TfFigureTheme *theme, double length, double spacing_pt);
 
+/* The width of the widest of the ticks' labels, user units. */
+double tf_axis_widest_tick_label (cairo_t *cr, const TfFigureTheme *theme,
+                                  const TfTicks *ticks);
+
 /* Space the axes take outside the plot area, user units. */
 double tf_axis_left_extent (cairo_t *cr, const TfFigureTheme *theme, const TfTicks *ticks,
                             const char *label_markup);

@@ -396,18 +396,24 @@ tf_fig_number (double value, int digits)
 }
 
 void
+tf_fig_x_ticks (TfTicks *ticks, double lo, double hi, gboolean log_axis, guint target)
+{
+  if (log_axis)
+    tf_ticks_compute_log (ticks, lo, hi, target, FALSE);
+  else
+    tf_ticks_compute (ticks, lo, hi, target, FALSE);
+}
+
+void
 tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
                       double top_extra, double right_extra, const char *x_label,
                       const char *y_label, double x_lo, double x_hi, gboolean x_log,
                       double y_lo, double y_hi, TfFigLayout *out)
 {
   double pad = tf_figure_theme_pt (theme, TF_FIG_PAD_PT);
-  double top, bottom, left, right, plot_h, plot_w, last_w = 0;
+  double top, bottom, left, right, plot_h, plot_w;
 
-  if (x_log)
-    tf_ticks_compute_log (&out->x_ticks, x_lo, x_hi, 8, FALSE);
-  else
-    tf_ticks_compute (&out->x_ticks, x_lo, x_hi, 8, FALSE);
+  tf_fig_x_ticks (&out->x_ticks, x_lo, x_hi, x_log, 8);
   top = pad + top_extra;
   bottom = pad + tf_axis_bottom_extent_ticks (cr, theme, &out->x_ticks, x_label);
   plot_h = MAX (height - top - bottom, 1);
@@ -416,19 +422,10 @@ tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width, dou
   left = pad + tf_axis_left_extent (cr, theme, &out->y_ticks, y_label);
 
   /* room for half of the widest x label at the right end */
-  for (guint i = 0; i < out->x_ticks.n; i++)
-    {
-      g_autofree char *label = tf_ticks_label (&out->x_ticks, i);
-      last_w = MAX (last_w, tf_fig_text_width (cr, theme, theme->text_size, label));
-    }
-  right = pad + MAX (last_w / 2, right_extra);
+  right = pad + MAX (tf_axis_widest_tick_label (cr, theme, &out->x_ticks) / 2, right_extra);
   plot_w = MAX (width - left - right, 1);
-  if (x_log)
-    tf_ticks_compute_log (&out->x_ticks, x_lo, x_hi,
-                          tf_ticks_target (theme, plot_w, TF_FIG_X_TICK_SPACING_PT), FALSE);
-  else
-    tf_ticks_compute (&out->x_ticks, x_lo, x_hi,
-                      tf_ticks_target (theme, plot_w, TF_FIG_X_TICK_SPACING_PT), FALSE);
+  tf_fig_x_ticks (&out->x_ticks, x_lo, x_hi, x_log,
+                  tf_ticks_target (theme, plot_w, TF_FIG_X_TICK_SPACING_PT));
   if (out->x_ticks.n > 0 && !x_log)
     {
       x_lo = MIN (x_lo, tf_ticks_value (&out->x_ticks, 0));

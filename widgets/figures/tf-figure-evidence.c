@@ -196,319 +196,410 @@ label_beside (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
   tf_fig_text_halo (cr, theme, &theme->foreground, theme->text_size, markup, x, y);
 }
 
+/* One drawing of the figure: what its phases share. */
+typedef struct {
+  cairo_t *cr;
+  TfFigureTheme theme;
+  const TfEvidenceCurve *curve;
+  TfEvidenceScale evidence_scale;
+  gboolean sample_size;
+  double width, height, scale, pad, gap;
+  /* the ranges: x (log10 on a log axis) and log10 BF01 at each point */
+  double *xs, *bf;
+  double x_lo, x_hi, y_lo, y_hi;
+  double beyond_hi, beyond_lo;  /* log10 BF01 the curve reaches off the axis, or NAN */
+  gboolean chosen_ok;           /* the analysis's own setting is on the x axis */
+  /* the words */
+  const char *x_label, *bf_label, *p_label;
+  char *chosen_label, *note;
+  double label_h;
+  double chosen_right;          /* where the chosen setting's label ends */
+  /* the panels: the Bayes factor above P(H0 | data) */
+  TfTicks x_ticks, bf_ticks, p_ticks;
+  TfPlotArea top, low;
+  TfFigPoints bf_line, p_line;
+} Draw;
+
+/* The x and log10 BF01 coordinates and their ranges, the chosen setting's included.
+ * Returns why there is nothing to draw, or NULL. */
+static const char *
+evidence_ranges (Draw *d)
+{
+  const TfEvidenceCurve *c = d->curve;
+  guint finite = 0;
+
+  d->x_lo = INFINITY, d->x_hi = -INFINITY, d->y_lo = 0, d->y_hi = 0;
+  d->xs = g_new (double, c->n);
+  d->bf = g_new (double, c->n);
+  for (guint i = 0; i < c->n; i++)
+    {
+      d->xs[i] = c->x_log && c->x[i] > 0 ? log10 (c->x[i]) : c->x_log ? NAN : c->x[i];
+      d->bf[i] = c->log_bf01[i] / G_LN10;
+      if (isfinite (d->xs[i]))
+        d->x_lo = MIN (d->x_lo, d->xs[i]), d->x_hi = MAX (d->x_hi, d->xs[i]);
+      if (isfinite (d->bf[i]))
+        d->y_lo = MIN (d->y_lo, d->bf[i]), d->y_hi = MAX (d->y_hi, d->bf[i]);
+    }
+  d->chosen_ok = isfinite (c->chosen_x) && (!c->x_log || c->chosen_x > 0);
+  if (d->chosen_ok)
+    {
+      double cx = coord (c->chosen_x, c->x_log);
+      d->x_lo = MIN (d->x_lo, cx), d->x_hi = MAX (d->x_hi, cx);
+      if (isfinite (c->chosen_log_bf01))
+        {
+          d->y_lo = MIN (d->y_lo, c->chosen_log_bf01 / G_LN10);
+          d->y_hi = MAX (d->y_hi, c->chosen_log_bf01 / G_LN10);
+        }
+    }
+  if (!(d->x_hi > d->x_lo))
+    return _("The curve has no range to draw.");
+  for (guint i = 0; i < c->n; i++)
+    finite += isfinite (d->bf[i]) && isfinite (d->xs[i]);
+  if (finite < 2)
+    return _("The Bayes factor is not defined along this curve, so there is nothing to draw: the result list says why.");
+  return NULL;
+}
+
+/* Past 10^±6, or 3 decades past the chosen value, a Bayes factor tells the reader
+ * nothing the grades do not, and the range would flatten the curve where it matters:
+ * the axis stops there, the curve leaves the panel and a note says how far it goes. */
+static void
+evidence_cap (Draw *d)
+{
+  const TfEvidenceCurve *c = d->curve;
+  double chosen_dec = d->chosen_ok && isfinite (c->chosen_log_bf01)
+                      ? c->chosen_log_bf01 / G_LN10 : 0.0;
+  double cap_hi = MAX (TF_BF_CAP_DECADES, chosen_dec + 3.0);
+  double cap_lo = MIN (-TF_BF_CAP_DECADES, chosen_dec - 3.0);
+
+  d->beyond_hi = d->beyond_lo = NAN;
+  if (d->y_hi > cap_hi)
+    d->beyond_hi = d->y_hi, d->y_hi = cap_hi;
+  if (d->y_lo < cap_lo)
+    d->beyond_lo = d->y_lo, d->y_lo = cap_lo;
+  d->y_lo -= 0.15, d->y_hi += 0.15;
+}
+
+/* The axes' names, the chosen setting's label and the held p-value's note. */
+static void
+evidence_words (Draw *d)
+{
+  const TfEvidenceCurve *c = d->curve;
+
+  d->bf_label = _("BF<sub>01</sub>, log scale");
+  d->p_label = _("P(H₀ | data)");
+  d->x_label = c->x_markup ? c->x_markup
+                           : d->sample_size ? _("sample size <i>n</i>") : _("prior scale");
+  if (d->chosen_ok)
+    {
+      g_autofree char *v = tf_fig_number (c->chosen_x, 4);
+      d->chosen_label = d->sample_size ? g_strdup_printf (_("observed: %s"), v)
+                                       : g_strdup_printf (_("chosen prior: %s"), v);
+    }
+  if (d->sample_size && isfinite (c->p_value))
+    {
+      g_autofree char *p = tf_fig_number (c->p_value, 3);
+      /* TRANSLATORS: the sample-size figure holds the p-value fixed while n changes */
+      d->note = g_strdup_printf (_("<i>p</i> = %s held fixed"), p);
+    }
+}
+
+/* The right margin: the grades' names and which way favours which model. */
+static double
+grades_width (const Draw *d)
+{
+  Grade g[8];
+  guint n = grades (d->evidence_scale, g);
+  double size = d->theme.text_size * 0.9;
+  double right_w = 0;
+
+  for (guint i = 0; i < n; i++)
+    right_w = MAX (right_w, tf_fig_text_width (d->cr, &d->theme, size, _(g[i].name)));
+  return MAX (right_w, tf_fig_text_width (d->cr, &d->theme, size, _("↑ H₀")));
+}
+
+/* The margins, the ticks of the three axes, and the two panels sharing x. */
+static void
+evidence_panels (Draw *d)
+{
+  const TfFigureTheme *theme = &d->theme;
+  double top, bottom, left, right, avail, top_h, low_h;
+  double right_w = grades_width (d);
+
+  d->label_h = tf_fig_text_height (d->cr, theme, theme->text_size,
+                                   d->chosen_label ? d->chosen_label : "Hg");
+  tf_fig_x_ticks (&d->x_ticks, d->x_lo, d->x_hi, d->curve->x_log, 8);
+  top = d->pad + d->label_h + tf_figure_theme_pt (theme, 2.0);
+  bottom = d->pad + tf_axis_bottom_extent_ticks (d->cr, theme, &d->x_ticks, d->x_label);
+  avail = MAX (d->height - top - bottom - tf_figure_theme_pt (theme, PANEL_GAP_PT), 2);
+  top_h = avail * TOP_SHARE;
+  low_h = avail - top_h;
+  tf_ticks_compute_log (&d->bf_ticks, d->y_lo, d->y_hi,
+                        tf_ticks_target (theme, top_h, TF_FIG_Y_TICK_SPACING_PT * 0.8), TRUE);
+  tf_ticks_compute (&d->p_ticks, 0, 1, tf_ticks_target (theme, low_h, TF_FIG_Y_TICK_SPACING_PT),
+                    TRUE);
+  left = d->pad + MAX (tf_axis_left_extent (d->cr, theme, &d->bf_ticks, d->bf_label),
+                       tf_axis_left_extent (d->cr, theme, &d->p_ticks, d->p_label));
+  right = d->pad + right_w + d->gap;
+  right = MAX (right, d->pad + tf_axis_widest_tick_label (d->cr, theme, &d->x_ticks) / 2);
+  tf_fig_x_ticks (&d->x_ticks, d->x_lo, d->x_hi, d->curve->x_log,
+                  tf_ticks_target (theme, d->width - left - right, TF_FIG_X_TICK_SPACING_PT));
+
+  d->top = (TfPlotArea) {
+    .x = left, .y = top, .width = MAX (d->width - left - right, 1), .height = top_h,
+    .x_lo = d->x_lo, .x_hi = d->x_hi, .y_lo = d->bf_ticks.lo, .y_hi = d->bf_ticks.hi,
+    .x_log = d->curve->x_log, .y_log = TRUE,
+  };
+  d->low = d->top;
+  d->low.y = top + top_h + tf_figure_theme_pt (theme, PANEL_GAP_PT);
+  d->low.height = low_h;
+  d->low.y_lo = d->p_ticks.lo;
+  d->low.y_hi = d->p_ticks.hi;
+  d->low.y_log = FALSE;
+  d->low.panel = 1;
+}
+
+/* Under the data: the grades above, P(H0 | data) = 0.5 below. */
+static void
+evidence_reference_lines (Draw *d)
+{
+  cairo_t *cr = d->cr;
+
+  draw_grades (cr, &d->theme, &d->top, d->evidence_scale);
+  cairo_save (cr);
+  tf_figure_theme_set_source (cr, &d->theme.reference);
+  cairo_set_line_width (cr, tf_figure_theme_pt (&d->theme, 0.5));
+  cairo_move_to (cr, d->low.x, tf_plot_area_map_y (&d->low, 0.5));
+  cairo_line_to (cr, d->low.x + d->low.width, tf_plot_area_map_y (&d->low, 0.5));
+  cairo_stroke (cr);
+  cairo_restore (cr);
+}
+
+/* The column of the analysis's own setting, or -1 when it is not on the axis. */
+static double
+chosen_column (const Draw *d)
+{
+  return d->chosen_ok ? tf_plot_area_map_x (&d->top, coord (d->curve->chosen_x, d->curve->x_log))
+                      : -1;
+}
+
+/* The analysis's own setting: a line through both panels, its label above them. */
+static void
+evidence_chosen_line (Draw *d)
+{
+  cairo_t *cr = d->cr;
+  const TfFigureTheme *theme = &d->theme;
+  double x, w, lx;
+  double dash[] = { 3.0 * d->scale, 2.0 * d->scale };
+
+  if (!d->chosen_ok)
+    return;
+  x = chosen_column (d);
+  w = tf_fig_text_width (cr, theme, theme->text_size, d->chosen_label);
+  cairo_save (cr);
+  tf_figure_theme_set_source (cr, &theme->muted);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, 0.7));
+  cairo_set_dash (cr, dash, 2, 0);
+  cairo_move_to (cr, x, d->top.y);
+  cairo_line_to (cr, x, d->low.y + d->low.height);
+  cairo_stroke (cr);
+  cairo_restore (cr);
+  lx = tf_fig_label_x (x, w, &d->top, d->width, d->pad);
+  tf_fig_text (cr, theme, &theme->foreground, theme->text_size, d->chosen_label, lx,
+               d->top.y - d->label_h - tf_figure_theme_pt (theme, 1.5));
+  d->chosen_right = lx + w;
+}
+
+/* The curves: the Bayes factor leaves its panel at the edge, P(H0 | data) never does. */
+static void
+evidence_curves (Draw *d)
+{
+  const TfEvidenceCurve *c = d->curve;
+
+  tf_fig_points_map (&d->top, d->xs, d->bf, c->n, FALSE, &d->bf_line);
+  cut_at_panel (&d->bf_line, &d->top);
+  tf_fig_points_map (&d->low, d->xs, c->posterior_null, c->n, TRUE, &d->p_line);
+  for (guint i = 0; i < c->n; i++)
+    if (!isfinite (d->xs[i]))
+      d->bf_line.y[i] = d->p_line.y[i] = NAN;
+  tf_fig_stroke_series (d->cr, &d->theme, TF_SERIES_EVIDENCE, &d->bf_line);
+  tf_fig_stroke_series (d->cr, &d->theme, TF_SERIES_EVIDENCE, &d->p_line);
+}
+
+/* One chosen value: marked on its curve at y (on the panel's axis) and written beside
+ * it, clear of the reference line at ref_y. */
+static void
+mark_chosen (Draw *d, const TfPlotArea *area, const TfFigPoints *line, double y,
+             double ref_y, const char *text)
+{
+  double cx = coord (d->curve->chosen_x, d->curve->x_log);
+
+  tf_fig_marker (d->cr, &d->theme, area, TF_SERIES_EVIDENCE, cx, y, TRUE);
+  label_beside (d->cr, &d->theme, area, line, tf_plot_area_map_x (&d->top, cx),
+                tf_plot_area_map_y (area, y), ref_y, text);
+}
+
+/* The chosen values, marked and written beside. */
+static void
+evidence_marks (Draw *d)
+{
+  const TfEvidenceCurve *c = d->curve;
+
+  if (!d->chosen_ok)
+    return;
+  if (isfinite (c->chosen_log_bf01))
+    {
+      g_autofree char *v = tf_fig_number (exp (c->chosen_log_bf01), 3);
+      g_autofree char *text = g_strdup_printf ("BF<sub>01</sub> = %s", v);
+
+      mark_chosen (d, &d->top, &d->bf_line, c->chosen_log_bf01 / G_LN10,
+                   d->top.y_lo < 0 && d->top.y_hi > 0 ? tf_plot_area_map_y (&d->top, 0) : NAN,
+                   text);
+    }
+  if (isfinite (c->chosen_posterior_null))
+    {
+      g_autofree char *v = tf_fig_number (c->chosen_posterior_null, 3);
+      g_autofree char *text = g_strdup_printf (_("P(H₀ | data) = %s"), v);
+
+      mark_chosen (d, &d->low, &d->p_line, c->chosen_posterior_null,
+                   tf_plot_area_map_y (&d->low, 0.5), text);
+    }
+}
+
+/* A place in area for a w × h note that hides neither its curve nor the chosen
+ * setting's line (from the top panel's top down to line_bottom). */
+static gboolean
+place_note (const Draw *d, const TfPlotArea *area, const TfFigPoints *curve,
+            double line_bottom, double w, double h, double *x, double *y)
+{
+  double cx = chosen_column (d);
+  double up_x[2] = { cx, cx }, up_y[2] = { d->top.y, line_bottom };
+  TfPolyline lines[] = { { curve->x, curve->y, curve->n }, { up_x, up_y, 2 } };
+
+  return tf_legend_place (area, w, h, d->gap, lines, 2, x, y);
+}
+
+/* How far the curve goes off the axis, in the top panel or the row above it; a figure
+ * too small for the note shows the curve leaving the axis only. */
+static void
+evidence_off_axis_note (Draw *d)
+{
+  const TfFigureTheme *theme = &d->theme;
+  g_autofree char *hi_text = NULL;
+  g_autofree char *lo_text = NULL;
+  g_autofree char *off = NULL;
+  double w, h, ox, oy;
+  gboolean placed;
+
+  if (!isfinite (d->beyond_hi) && !isfinite (d->beyond_lo))
+    return;
+  hi_text = isfinite (d->beyond_hi) ? tf_fig_power_of_ten (d->beyond_hi) : NULL;
+  lo_text = isfinite (d->beyond_lo) ? tf_fig_power_of_ten (d->beyond_lo) : NULL;
+  off = hi_text && lo_text
+    /* TRANSLATORS: the BF curve leaves the axis at both ends; %s are powers of ten */
+    ? g_strdup_printf (_("off the axis: BF₀₁ from %s to %s"), lo_text, hi_text)
+    : hi_text
+    /* TRANSLATORS: the BF curve leaves the top of its axis; %s is a power of ten */
+    ? g_strdup_printf (_("off the axis: BF₀₁ up to %s"), hi_text)
+    /* TRANSLATORS: the BF curve leaves the bottom of its axis; %s is a power of ten */
+    : g_strdup_printf (_("off the axis: BF₀₁ down to %s"), lo_text);
+  w = tf_fig_text_width (d->cr, theme, theme->text_size * 0.9, off);
+  h = tf_fig_text_height (d->cr, theme, theme->text_size * 0.9, off);
+  placed = place_note (d, &d->top, &d->bf_line, d->top.y + d->top.height, w, h, &ox, &oy);
+  if (!placed && d->width - d->pad - w > d->chosen_right + 2 * d->gap)
+    {
+      /* no room in the panel: at the right of the row above it */
+      ox = d->width - d->pad - w;
+      oy = d->top.y - h - tf_figure_theme_pt (theme, 1.5);
+      placed = TRUE;
+    }
+  if (placed)
+    tf_fig_text_halo (d->cr, theme, &theme->muted, theme->text_size * 0.9, off, ox, oy);
+}
+
+/* The held p-value: a note where it hides no curve, in either panel, else at the right
+ * of the row above them, clear of the chosen setting's label when it can be. */
+static void
+evidence_held_note (Draw *d)
+{
+  const TfFigureTheme *theme = &d->theme;
+  double w, h, nx, ny, line_bottom = d->low.y + d->low.height;
+
+  if (d->note == NULL)
+    return;
+  w = tf_fig_text_width (d->cr, theme, theme->text_size, d->note);
+  h = tf_fig_text_height (d->cr, theme, theme->text_size, d->note);
+  if (!place_note (d, &d->top, &d->bf_line, line_bottom, w, h, &nx, &ny)
+      && !place_note (d, &d->low, &d->p_line, line_bottom, w, h, &nx, &ny))
+    {
+      nx = d->width - d->pad - w;
+      ny = d->top.y - h - tf_figure_theme_pt (theme, 1.5);
+      if (nx < d->chosen_right + 2 * d->gap)
+        nx = d->top.x + d->gap, ny = d->top.y + d->gap;
+    }
+  tf_fig_text_halo (d->cr, theme, &theme->muted, theme->text_size, d->note, nx, ny);
+}
+
+static void
+evidence_axes (Draw *d)
+{
+  tf_axis_draw_bottom_bare (d->cr, &d->theme, &d->top, &d->x_ticks);
+  tf_axis_draw_left (d->cr, &d->theme, &d->top, &d->bf_ticks, d->bf_label);
+  tf_axis_draw_bottom (d->cr, &d->theme, &d->low, &d->x_ticks, d->x_label);
+  tf_axis_draw_left (d->cr, &d->theme, &d->low, &d->p_ticks, d->p_label);
+}
+
+static void
+draw_clear (Draw *d)
+{
+  g_free (d->xs);
+  g_free (d->bf);
+  g_free (d->chosen_label);
+  g_free (d->note);
+  tf_fig_points_clear (&d->bf_line);
+  tf_fig_points_clear (&d->p_line);
+}
+
 gboolean
 tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
                       const TfEvidenceCurve *curve, const TfFigureOptions *options,
                       gboolean sample_size, TfFigurePanels *panels_out)
 {
   const TfFigureOptions *opt = tf_fig_options (options);
-  TfFigureTheme theme;
-  g_autofree double *xs = NULL;
-  g_autofree double *bf = NULL;
-  g_autofree char *chosen_label = NULL;
-  g_autofree char *note = NULL;
-  g_autofree char *bf_text = NULL;
-  g_autofree char *p_text = NULL;
-  const char *x_label;
-  const char *bf_label = _("BF<sub>01</sub>, log scale");
-  const char *p_label = _("P(H₀ | data)");
-  double pad, gap, top, bottom, left, right, avail, top_h, low_h, label_h;
-  double x_lo = INFINITY, x_hi = -INFINITY, y_lo = 0, y_hi = 0, right_w = 0;
-  double beyond_hi = NAN, beyond_lo = NAN;   /* log10 BF01 the curve reaches off the axis */
-  double chosen_right = -INFINITY;  /* where the chosen setting's label ends */
-  gboolean chosen_ok;
-  TfTicks x_ticks, bf_ticks, p_ticks;
-  TfPlotArea top_area, low_area;
-  TfFigPoints bf_line = { 0 }, p_line = { 0 };
-  Grade g[8];
-  guint n_grades;
+  Draw d = { .cr = cr, .curve = curve, .evidence_scale = opt->evidence_scale,
+             .sample_size = sample_size, .width = width, .height = height, .scale = scale,
+             .chosen_right = -INFINITY };
+  const char *nothing;
 
   if (panels_out)
     panels_out->n = 0;
-  tf_figure_theme_init (&theme, opt->style, scale);
-  pad = tf_figure_theme_pt (&theme, TF_FIG_PAD_PT);
-  gap = tf_figure_theme_pt (&theme, 3.0);
-  cairo_save (cr);
-  tf_fig_begin (cr, &theme, width, height);
+  tf_fig_start (cr, &d.theme, opt->style, scale, width, height);
   if (curve == NULL || curve->n < 2)
+    return tf_fig_nothing (cr, &d.theme, width, height, _("There are no curves to draw."));
+  d.pad = tf_figure_theme_pt (&d.theme, TF_FIG_PAD_PT);
+  d.gap = tf_figure_theme_pt (&d.theme, 3.0);
+  if ((nothing = evidence_ranges (&d)))
     {
-      tf_fig_message (cr, &theme, width, height, NULL, _("There are no curves to draw."));
-      cairo_restore (cr);
-      return FALSE;
+      draw_clear (&d);
+      return tf_fig_nothing (cr, &d.theme, width, height, nothing);
     }
-
-  xs = g_new (double, curve->n);
-  bf = g_new (double, curve->n);
-  for (guint i = 0; i < curve->n; i++)
-    {
-      xs[i] = curve->x_log && curve->x[i] > 0 ? log10 (curve->x[i]) : curve->x_log ? NAN : curve->x[i];
-      bf[i] = curve->log_bf01[i] / G_LN10;
-      if (isfinite (xs[i]))
-        x_lo = MIN (x_lo, xs[i]), x_hi = MAX (x_hi, xs[i]);
-      if (isfinite (bf[i]))
-        y_lo = MIN (y_lo, bf[i]), y_hi = MAX (y_hi, bf[i]);
-    }
-  chosen_ok = isfinite (curve->chosen_x) && (!curve->x_log || curve->chosen_x > 0);
-  if (chosen_ok)
-    {
-      double cx = coord (curve->chosen_x, curve->x_log);
-      x_lo = MIN (x_lo, cx), x_hi = MAX (x_hi, cx);
-      if (isfinite (curve->chosen_log_bf01))
-        {
-          y_lo = MIN (y_lo, curve->chosen_log_bf01 / G_LN10);
-          y_hi = MAX (y_hi, curve->chosen_log_bf01 / G_LN10);
-        }
-    }
-  if (!(x_hi > x_lo))
-    {
-      tf_fig_message (cr, &theme, width, height, NULL, _("The curve has no range to draw."));
-      cairo_restore (cr);
-      return FALSE;
-    }
-  {
-    guint finite = 0;
-
-    for (guint i = 0; i < curve->n; i++)
-      finite += isfinite (bf[i]) && isfinite (xs[i]);
-    if (finite < 2)
-      {
-        tf_fig_message (cr, &theme, width, height, NULL,
-                        _("The Bayes factor is not defined along this curve, so there is nothing to draw: the result list says why."));
-        cairo_restore (cr);
-        return FALSE;
-      }
-  }
-  /* Past 10^±6, or 3 decades past the chosen value, a Bayes factor tells the reader
-   * nothing the grades do not, and the range would flatten the curve where it matters:
-   * the axis stops there, the curve leaves the panel and a note says how far it goes. */
-  {
-    double chosen_dec = chosen_ok && isfinite (curve->chosen_log_bf01)
-                        ? curve->chosen_log_bf01 / G_LN10 : 0.0;
-    double cap_hi = MAX (TF_BF_CAP_DECADES, chosen_dec + 3.0);
-    double cap_lo = MIN (-TF_BF_CAP_DECADES, chosen_dec - 3.0);
-
-    if (y_hi > cap_hi)
-      beyond_hi = y_hi, y_hi = cap_hi;
-    if (y_lo < cap_lo)
-      beyond_lo = y_lo, y_lo = cap_lo;
-  }
-  y_lo -= 0.15, y_hi += 0.15;
-
-  x_label = curve->x_markup ? curve->x_markup
-                            : sample_size ? _("sample size <i>n</i>") : _("prior scale");
-  if (chosen_ok)
-    {
-      g_autofree char *v = tf_fig_number (curve->chosen_x, 4);
-      chosen_label = sample_size ? g_strdup_printf (_("observed: %s"), v)
-                                 : g_strdup_printf (_("chosen prior: %s"), v);
-    }
-  if (sample_size && isfinite (curve->p_value))
-    {
-      g_autofree char *p = tf_fig_number (curve->p_value, 3);
-      /* TRANSLATORS: the sample-size figure holds the p-value fixed while n changes */
-      note = g_strdup_printf (_("<i>p</i> = %s held fixed"), p);
-    }
-
-  /* Margins: the right one holds the grades' names. */
-  n_grades = grades (opt->evidence_scale, g);
-  for (guint i = 0; i < n_grades; i++)
-    right_w = MAX (right_w, tf_fig_text_width (cr, &theme, theme.text_size * 0.9, _(g[i].name)));
-  right_w = MAX (right_w, tf_fig_text_width (cr, &theme, theme.text_size * 0.9, _("↑ H₀")));
-  label_h = tf_fig_text_height (cr, &theme, theme.text_size, chosen_label ? chosen_label : "Hg");
-
-  if (curve->x_log)
-    tf_ticks_compute_log (&x_ticks, x_lo, x_hi, 8, FALSE);
-  else
-    tf_ticks_compute (&x_ticks, x_lo, x_hi, 8, FALSE);
-  top = pad + label_h + tf_figure_theme_pt (&theme, 2.0);
-  bottom = pad + tf_axis_bottom_extent_ticks (cr, &theme, &x_ticks, x_label);
-  avail = MAX (height - top - bottom - tf_figure_theme_pt (&theme, PANEL_GAP_PT), 2);
-  top_h = avail * TOP_SHARE;
-  low_h = avail - top_h;
-  tf_ticks_compute_log (&bf_ticks, y_lo, y_hi,
-                        tf_ticks_target (&theme, top_h, TF_FIG_Y_TICK_SPACING_PT * 0.8), TRUE);
-  tf_ticks_compute (&p_ticks, 0, 1, tf_ticks_target (&theme, low_h, TF_FIG_Y_TICK_SPACING_PT), TRUE);
-  left = pad + MAX (tf_axis_left_extent (cr, &theme, &bf_ticks, bf_label),
-                    tf_axis_left_extent (cr, &theme, &p_ticks, p_label));
-  right = pad + right_w + gap;
-  {
-    double last_w = 0;
-    for (guint i = 0; i < x_ticks.n; i++)
-      {
-        g_autofree char *l = tf_ticks_label (&x_ticks, i);
-        last_w = MAX (last_w, tf_fig_text_width (cr, &theme, theme.text_size, l));
-      }
-    right = MAX (right, pad + last_w / 2);
-  }
-  if (curve->x_log)
-    tf_ticks_compute_log (&x_ticks, x_lo, x_hi,
-                          tf_ticks_target (&theme, width - left - right, TF_FIG_X_TICK_SPACING_PT), FALSE);
-  else
-    tf_ticks_compute (&x_ticks, x_lo, x_hi,
-                      tf_ticks_target (&theme, width - left - right, TF_FIG_X_TICK_SPACING_PT), FALSE);
-
-  top_area = (TfPlotArea) {
-    .x = left, .y = top, .width = MAX (width - left - right, 1), .height = top_h,
-    .x_lo = x_lo, .x_hi = x_hi, .y_lo = bf_ticks.lo, .y_hi = bf_ticks.hi,
-    .x_log = curve->x_log, .y_log = TRUE,
-  };
-  low_area = top_area;
-  low_area.y = top + top_h + tf_figure_theme_pt (&theme, PANEL_GAP_PT);
-  low_area.height = low_h;
-  low_area.y_lo = p_ticks.lo;
-  low_area.y_hi = p_ticks.hi;
-  low_area.y_log = FALSE;
-  low_area.panel = 1;
-
-  /* Reference lines under the data. */
-  draw_grades (cr, &theme, &top_area, opt->evidence_scale);
-  cairo_save (cr);
-  tf_figure_theme_set_source (cr, &theme.reference);
-  cairo_set_line_width (cr, tf_figure_theme_pt (&theme, 0.5));
-  cairo_move_to (cr, low_area.x, tf_plot_area_map_y (&low_area, 0.5));
-  cairo_line_to (cr, low_area.x + low_area.width, tf_plot_area_map_y (&low_area, 0.5));
-  cairo_stroke (cr);
-  cairo_restore (cr);
-
-  /* The analysis's own setting: a line through both panels. */
-  if (chosen_ok)
-    {
-      double x = tf_plot_area_map_x (&top_area, coord (curve->chosen_x, curve->x_log));
-      double dash[] = { 3.0 * scale, 2.0 * scale };
-      double w = tf_fig_text_width (cr, &theme, theme.text_size, chosen_label);
-
-      cairo_save (cr);
-      tf_figure_theme_set_source (cr, &theme.muted);
-      cairo_set_line_width (cr, tf_figure_theme_pt (&theme, 0.7));
-      cairo_set_dash (cr, dash, 2, 0);
-      cairo_move_to (cr, x, top_area.y);
-      cairo_line_to (cr, x, low_area.y + low_area.height);
-      cairo_stroke (cr);
-      cairo_restore (cr);
-      /* centred on the line, right of the y axis's labels, inside the figure */
-      double lx = MAX (MAX (MIN (x - w / 2, width - pad - w), MIN (top_area.x, width - pad - w)), pad);
-
-      tf_fig_text (cr, &theme, &theme.foreground, theme.text_size, chosen_label, lx,
-                   top_area.y - label_h - tf_figure_theme_pt (&theme, 1.5));
-      chosen_right = lx + w;
-    }
-
-  /* The curves, clipped to their panels. */
-  tf_fig_points_map (&top_area, xs, bf, curve->n, FALSE, &bf_line);
-  cut_at_panel (&bf_line, &top_area);
-  tf_fig_points_map (&low_area, xs, curve->posterior_null, curve->n, TRUE, &p_line);
-  for (guint i = 0; i < curve->n; i++)
-    if (!isfinite (xs[i]))
-      bf_line.y[i] = p_line.y[i] = NAN;
-  tf_fig_stroke_series (cr, &theme, TF_SERIES_EVIDENCE, &bf_line);
-  tf_fig_stroke_series (cr, &theme, TF_SERIES_EVIDENCE, &p_line);
-
-  /* The chosen values, marked and written beside. */
-  if (chosen_ok)
-    {
-      double cx = coord (curve->chosen_x, curve->x_log);
-      double px = tf_plot_area_map_x (&top_area, cx);
-
-      if (isfinite (curve->chosen_log_bf01))
-        {
-          g_autofree char *v = tf_fig_number (exp (curve->chosen_log_bf01), 3);
-
-          bf_text = g_strdup_printf ("BF<sub>01</sub> = %s", v);
-          tf_fig_marker (cr, &theme, &top_area, TF_SERIES_EVIDENCE, cx,
-                         curve->chosen_log_bf01 / G_LN10, TRUE);
-          label_beside (cr, &theme, &top_area, &bf_line, px,
-                        tf_plot_area_map_y (&top_area, curve->chosen_log_bf01 / G_LN10),
-                        top_area.y_lo < 0 && top_area.y_hi > 0 ? tf_plot_area_map_y (&top_area, 0) : NAN,
-                        bf_text);
-        }
-      if (isfinite (curve->chosen_posterior_null))
-        {
-          g_autofree char *v = tf_fig_number (curve->chosen_posterior_null, 3);
-
-          p_text = g_strdup_printf (_("P(H₀ | data) = %s"), v);
-          tf_fig_marker (cr, &theme, &low_area, TF_SERIES_EVIDENCE, cx,
-                         curve->chosen_posterior_null, TRUE);
-          label_beside (cr, &theme, &low_area, &p_line, px,
-                        tf_plot_area_map_y (&low_area, curve->chosen_posterior_null),
-                        tf_plot_area_map_y (&low_area, 0.5), p_text);
-        }
-    }
-
-  /* How far the curve goes off the axis. */
-  if (isfinite (beyond_hi) || isfinite (beyond_lo))
-    {
-      g_autofree char *hi_text = isfinite (beyond_hi) ? tf_fig_power_of_ten (beyond_hi) : NULL;
-      g_autofree char *lo_text = isfinite (beyond_lo) ? tf_fig_power_of_ten (beyond_lo) : NULL;
-      g_autofree char *off = hi_text && lo_text
-        /* TRANSLATORS: the BF curve leaves the axis at both ends; %s are powers of ten */
-        ? g_strdup_printf (_("off the axis: BF₀₁ from %s to %s"), lo_text, hi_text)
-        : hi_text
-        /* TRANSLATORS: the BF curve leaves the top of its axis; %s is a power of ten */
-        ? g_strdup_printf (_("off the axis: BF₀₁ up to %s"), hi_text)
-        /* TRANSLATORS: the BF curve leaves the bottom of its axis; %s is a power of ten */
-        : g_strdup_printf (_("off the axis: BF₀₁ down to %s"), lo_text);
-      double w = tf_fig_text_width (cr, &theme, theme.text_size * 0.9, off);
-      double h = tf_fig_text_height (cr, &theme, theme.text_size * 0.9, off);
-      double cx = chosen_ok ? tf_plot_area_map_x (&top_area, coord (curve->chosen_x, curve->x_log))
-                            : -1;
-      double up_x[2] = { cx, cx }, up_y[2] = { top_area.y, top_area.y + top_area.height };
-      TfPolyline lines[] = { { bf_line.x, bf_line.y, bf_line.n }, { up_x, up_y, 2 } };
-      double ox = top_area.x + gap, oy = top_area.y + gap;
-
-      gboolean placed = tf_legend_place (&top_area, w, h, gap, lines, 2, &ox, &oy);
-
-      if (!placed && width - pad - w > chosen_right + 2 * gap)
-        {
-          /* no room in the panel: at the right of the row above it */
-          ox = width - pad - w;
-          oy = top_area.y - h - tf_figure_theme_pt (&theme, 1.5);
-          placed = TRUE;
-        }
-      /* a figure too small for the note shows the curve leaving the axis only */
-      if (placed)
-        tf_fig_text_halo (cr, &theme, &theme.muted, theme.text_size * 0.9, off, ox, oy);
-    }
-
-  /* The held p-value: a note where it hides no curve. */
-  if (note)
-    {
-      double w = tf_fig_text_width (cr, &theme, theme.text_size, note);
-      double h = tf_fig_text_height (cr, &theme, theme.text_size, note);
-      double cx = chosen_ok ? tf_plot_area_map_x (&top_area, coord (curve->chosen_x, curve->x_log))
-                            : -1;
-      double up_x[2] = { cx, cx }, up_y[2] = { top_area.y, low_area.y + low_area.height };
-      TfPolyline lines[] = { { bf_line.x, bf_line.y, bf_line.n }, { up_x, up_y, 2 } };
-      double nx = top_area.x + gap, ny = top_area.y + gap;
-
-      if (!tf_legend_place (&top_area, w, h, gap, lines, 2, &nx, &ny))
-        {
-          TfPolyline low[] = { { p_line.x, p_line.y, p_line.n }, { up_x, up_y, 2 } };
-          if (!tf_legend_place (&low_area, w, h, gap, low, 2, &nx, &ny))
-            {
-              /* no room in either panel: at the right of the row above them, clear of
-               * the chosen setting's label when it can be */
-              nx = width - pad - w;
-              ny = top_area.y - h - tf_figure_theme_pt (&theme, 1.5);
-              if (nx < chosen_right + 2 * gap)
-                nx = top_area.x + gap, ny = top_area.y + gap;
-            }
-        }
-      tf_fig_text_halo (cr, &theme, &theme.muted, theme.text_size, note, nx, ny);
-    }
-
-  tf_axis_draw_bottom_bare (cr, &theme, &top_area, &x_ticks);
-  tf_axis_draw_left (cr, &theme, &top_area, &bf_ticks, bf_label);
-  tf_axis_draw_bottom (cr, &theme, &low_area, &x_ticks, x_label);
-  tf_axis_draw_left (cr, &theme, &low_area, &p_ticks, p_label);
-
+  evidence_cap (&d);
+  evidence_words (&d);
+  evidence_panels (&d);
+  evidence_reference_lines (&d);
+  evidence_chosen_line (&d);
+  evidence_curves (&d);
+  evidence_marks (&d);
+  evidence_off_axis_note (&d);
+  evidence_held_note (&d);
+  evidence_axes (&d);
   if (panels_out)
     {
       panels_out->n = 2;
-      panels_out->area[0] = top_area;
-      panels_out->area[1] = low_area;
+      panels_out->area[0] = d.top;
+      panels_out->area[1] = d.low;
     }
-  tf_fig_points_clear (&bf_line);
-  tf_fig_points_clear (&p_line);
+  draw_clear (&d);
   cairo_restore (cr);
   return TRUE;
 }

@@ -92,6 +92,8 @@ typedef struct {
   TfTicks y_ticks;
 } TfFigLayout;
 
+/* Ticks along an x axis tight to [lo, hi] (log10 when log_axis), about target of them. */
+void tf_fig_x_ticks (TfTicks *ticks, double lo, double hi, gboolean log_axis, guint target);
 void tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
                            double top_extra, double right_extra, const char *x_label,
                            const char *y_label, double x_lo, double x_hi, gboolean x_log,
