@@ -130,22 +130,16 @@ tf_evidence_scale_from_string (const char *name, TfEvidenceScale *scale)
 }
 
 void
-tf_fig_begin (cairo_t *cr, TfFigureTheme *theme, double width, double height)
-{
-  tf_figure_theme_fit (theme, width, height);
-  cairo_new_path (cr);
-  tf_figure_theme_set_source (cr, &theme->background);
-  cairo_rectangle (cr, 0, 0, width, height);
-  cairo_fill (cr);
-}
-
-void
 tf_fig_start (cairo_t *cr, TfFigureTheme *theme, TfFigureStyle style, double scale,
               double width, double height)
 {
   tf_figure_theme_init (theme, style, scale);
   cairo_save (cr);
-  tf_fig_begin (cr, theme, width, height);
+  tf_figure_theme_fit (theme, width, height);
+  cairo_new_path (cr);
+  tf_figure_theme_set_source (cr, &theme->background);
+  cairo_rectangle (cr, 0, 0, width, height);
+  cairo_fill (cr);
 }
 
 gboolean
@@ -205,9 +199,7 @@ tf_figure_draw_message (cairo_t *cr, double width, double height, double scale,
 {
   TfFigureTheme theme;
 
-  tf_figure_theme_init (&theme, style, scale);
-  cairo_save (cr);
-  tf_fig_begin (cr, &theme, width, height);
+  tf_fig_start (cr, &theme, style, scale, width, height);
   tf_fig_message (cr, &theme, width, height, title, reason);
   cairo_restore (cr);
 }

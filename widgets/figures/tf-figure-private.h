@@ -34,8 +34,6 @@ void tf_fig_stroke_series (cairo_t *cr, const TfFigureTheme *theme, TfSeries ser
                            const TfFigPoints *p);
 
 const TfFigureOptions *tf_fig_options (const TfFigureOptions *options);
-/* Fills the background; fits the theme's text to the figure's size. */
-void tf_fig_begin (cairo_t *cr, TfFigureTheme *theme, double width, double height);
 void tf_fig_message (cairo_t *cr, const TfFigureTheme *theme, double width, double height,
                      const char *title, const char *reason);
 /* Starts a figure: the theme of style at scale, fitted to the size; cairo's state saved
