@@ -99,23 +99,16 @@ png_set_resolution (GByteArray *png, double dpi)
 /* Draws one figure kind on cr, in a box of width × height user units at scale units a
  * point; a kind that does not apply draws its reason and sets NOT_APPLICABLE with it. */
 static gboolean
-draw_kind (cairo_t *cr, const char *kind, double width, double height, double scale,
+draw_kind (cairo_t *cr, TfFigureKind kind, double width, double height, double scale,
            const TfAnalysis *analysis, const TfFigureOptions *options, GError **error)
 {
   g_autofree char *why_not = NULL;
-  TfFigureKind k;
 
-  if (!tf_figure_kind_from_string (kind, &k))
-    {
-      g_set_error (error, TF_FIGURE_ERROR, TF_FIGURE_ERROR_UNKNOWN_KIND,
-                   _("“%s” is not a figure kind."), kind);
-      return FALSE;
-    }
-  if (tf_figure_draw_kind (cr, k, width, height, scale, analysis, options, NULL, &why_not))
+  if (tf_figure_draw_kind (cr, kind, width, height, scale, analysis, options, NULL, &why_not))
     return TRUE;
   g_set_error (error, TF_FIGURE_ERROR, TF_FIGURE_ERROR_NOT_APPLICABLE,
                /* TRANSLATORS: %s is a figure kind ("sensitivity"), then the reason */
-               _("The “%s” figure does not apply: %s"), kind,
+               _("The “%s” figure does not apply: %s"), tf_figure_kind_to_string (kind),
                why_not && *why_not ? why_not : _("no reason given."));
   return FALSE;
 }
@@ -127,21 +120,16 @@ tf_figure_export (const TfAnalysis *analysis, const char *kind, const char *file
   return tf_figure_export_full (analysis, kind, filename, width_mm, height_mm, dpi, NULL, error);
 }
 
-gboolean
-tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char *filename,
-                       double width_mm, double height_mm, double dpi,
-                       const TfFigureOptions *options, GError **error)
+/* What was asked, checked before anything is drawn: the kind, the file's format, the
+ * size and resolution, and the analysis. */
+static gboolean
+check_request (const TfAnalysis *analysis, const char *kind, const char *filename,
+               double width_mm, double height_mm, double dpi, TfFigureKind *kind_out,
+               TfFigureFormat *format, GError **error)
 {
   g_autoptr (GPtrArray) problems = tf_problem_list_new ();
-  g_autoptr (GByteArray) bytes = g_byte_array_new ();
-  TfFigureFormat format;
-  cairo_surface_t *surface;
-  cairo_status_t status;
-  cairo_t *cr;
-  double w, h, scale;
-  gboolean drawn;
 
-  if (!tf_figure_kind_is_known (kind))
+  if (!tf_figure_kind_from_string (kind, kind_out))
     {
       g_autofree char *names = tf_figure_kind_names ();
       /* TRANSLATORS: %s is what was asked, then the list of figure kinds */
@@ -149,7 +137,7 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
                    _("“%s” is not a figure kind; use %s."), kind, names);
       return FALSE;
     }
-  if (!tf_figure_format_from_filename (filename, &format))
+  if (!tf_figure_format_from_filename (filename, format))
     {
       g_set_error (error, TF_FIGURE_ERROR, TF_FIGURE_ERROR_BAD_FORMAT,
                    _("%s: the file name must end in .png, .svg or .pdf."), filename);
@@ -175,35 +163,77 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
                    "[%s] %s: %s", p->group, p->key, p->message);
       return FALSE;
     }
+  return TRUE;
+}
 
-  switch (format)
+/* A surface of the format and size asked, its size in user units and the units a
+ * point. PNG draws in memory; SVG and PDF stream into bytes. */
+static cairo_surface_t *
+surface_new (TfFigureFormat format, double width_mm, double height_mm, double dpi,
+             GByteArray *bytes, double *w, double *h, double *scale)
+{
+  cairo_surface_t *surface;
+
+  if (format == TF_FIGURE_FORMAT_PNG)
     {
-    case TF_FIGURE_FORMAT_PNG:
-      w = round (width_mm / 25.4 * dpi);
-      h = round (height_mm / 25.4 * dpi);
-      scale = dpi / 72.0;
-      surface = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, (int) w, (int) h);
-      break;
-    case TF_FIGURE_FORMAT_SVG:
-      w = width_mm * POINTS_PER_MM;
-      h = height_mm * POINTS_PER_MM;
-      scale = 1.0;
+      *w = round (width_mm / 25.4 * dpi);
+      *h = round (height_mm / 25.4 * dpi);
+      *scale = dpi / 72.0;
+      return cairo_image_surface_create (CAIRO_FORMAT_ARGB32, (int) *w, (int) *h);
+    }
+  *w = width_mm * POINTS_PER_MM;
+  *h = height_mm * POINTS_PER_MM;
+  *scale = 1.0;
+  if (format == TF_FIGURE_FORMAT_SVG)
+    {
       /* The page is given in points (width="240.944882pt" for 85 mm): exact, and the
        * figure is drawn in the same units as PDF. (A page in mm under a cairo_scale()
        * shrinks Pango's subscripts.) */
-      surface = cairo_svg_surface_create_for_stream (tf_figure_append_bytes, bytes, w, h);
+      surface = cairo_svg_surface_create_for_stream (tf_figure_append_bytes, bytes, *w, *h);
       cairo_svg_surface_set_document_unit (surface, CAIRO_SVG_UNIT_PT);
-      break;
-    case TF_FIGURE_FORMAT_PDF:
-    default:
-      w = width_mm * POINTS_PER_MM;
-      h = height_mm * POINTS_PER_MM;
-      scale = 1.0;
-      surface = cairo_pdf_surface_create_for_stream (tf_figure_append_bytes, bytes, w, h);
-      cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR, "Twofold " TF_VERSION);
-      break;
+      return surface;
     }
+  surface = cairo_pdf_surface_create_for_stream (tf_figure_append_bytes, bytes, *w, *h);
+  cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR, "Twofold " TF_VERSION);
+  return surface;
+}
 
+/* The surface's bytes complete: a PNG drawn is encoded with its resolution, SVG and PDF
+ * finished. */
+static cairo_status_t
+surface_finish (cairo_surface_t *surface, TfFigureFormat format, gboolean drawn,
+                GByteArray *bytes, double dpi)
+{
+  cairo_status_t status;
+
+  if (format == TF_FIGURE_FORMAT_PNG && drawn)
+    {
+      status = cairo_surface_write_to_png_stream (surface, tf_figure_append_bytes, bytes);
+      if (status == CAIRO_STATUS_SUCCESS)
+        png_set_resolution (bytes, dpi);
+      return status;
+    }
+  cairo_surface_finish (surface);
+  return cairo_surface_status (surface);
+}
+
+gboolean
+tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char *filename,
+                       double width_mm, double height_mm, double dpi,
+                       const TfFigureOptions *options, GError **error)
+{
+  g_autoptr (GByteArray) bytes = g_byte_array_new ();
+  TfFigureKind k;
+  TfFigureFormat format;
+  cairo_surface_t *surface;
+  cairo_status_t status;
+  cairo_t *cr;
+  double w, h, scale;
+  gboolean drawn;
+
+  if (!check_request (analysis, kind, filename, width_mm, height_mm, dpi, &k, &format, error))
+    return FALSE;
+  surface = surface_new (format, width_mm, height_mm, dpi, bytes, &w, &h, &scale);
   cr = cairo_create (surface);
   if (format == TF_FIGURE_FORMAT_PNG)
     {
@@ -211,19 +241,9 @@ tf_figure_export_full (const TfAnalysis *analysis, const char *kind, const char 
       cairo_set_source_rgb (cr, 1, 1, 1);
       cairo_paint (cr);
     }
-  drawn = draw_kind (cr, kind, w, h, scale, analysis, options, error);
+  drawn = draw_kind (cr, k, w, h, scale, analysis, options, error);
   cairo_destroy (cr);
-  if (format == TF_FIGURE_FORMAT_PNG && drawn)
-    {
-      status = cairo_surface_write_to_png_stream (surface, tf_figure_append_bytes, bytes);
-      if (status == CAIRO_STATUS_SUCCESS)
-        png_set_resolution (bytes, dpi);
-    }
-  else
-    {
-      cairo_surface_finish (surface);
-      status = cairo_surface_status (surface);
-    }
+  status = surface_finish (surface, format, drawn, bytes, dpi);
   cairo_surface_destroy (surface);
   if (!drawn)
     return FALSE;
