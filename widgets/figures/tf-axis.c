@@ -345,6 +345,21 @@ minor_ticks (const TfTicks *ticks, double *out, guint max)
   return n;
 }
 
+/* The axis's line from (x0, y0) to (x1, y1), square-capped; the ticks after it butt. */
+static void
+draw_spine (cairo_t *cr, const TfFigureTheme *theme, double x0, double y0, double x1,
+            double y1)
+{
+  tf_figure_theme_set_source (cr, &theme->foreground);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
+  cairo_set_dash (cr, NULL, 0, 0);
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
+  cairo_move_to (cr, x0, y0);
+  cairo_line_to (cr, x1, y1);
+  cairo_stroke (cr);
+  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+}
+
 static void
 draw_bottom_ticks (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
                    const TfTicks *ticks)
@@ -377,14 +392,7 @@ tf_axis_draw_bottom_bare (cairo_t *cr, const TfFigureTheme *theme, const TfPlotA
   double base = area->y + area->height;
 
   cairo_save (cr);
-  tf_figure_theme_set_source (cr, &theme->foreground);
-  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
-  cairo_set_dash (cr, NULL, 0, 0);
-  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
-  cairo_move_to (cr, area->x, base);
-  cairo_line_to (cr, area->x + area->width, base);
-  cairo_stroke (cr);
-  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+  draw_spine (cr, theme, area->x, base, area->x + area->width, base);
   draw_bottom_ticks (cr, theme, area, ticks);
   cairo_restore (cr);
 }
@@ -399,17 +407,9 @@ tf_axis_draw_bottom (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *
   double label_top = base + tick + gap;
   double tick_h = 0;
 
+  tf_axis_draw_bottom_bare (cr, theme, area, ticks);
   cairo_save (cr);
   tf_figure_theme_set_source (cr, &theme->foreground);
-  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
-  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
-  cairo_set_dash (cr, NULL, 0, 0);
-  cairo_move_to (cr, area->x, base);
-  cairo_line_to (cr, area->x + area->width, base);
-  cairo_stroke (cr);
-
-  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
-  draw_bottom_ticks (cr, theme, area, ticks);
   for (guint i = 0; i < ticks->n; i++)
     {
       double v = tf_ticks_value (ticks, i);
@@ -440,6 +440,22 @@ tf_axis_draw_bottom (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *
   cairo_restore (cr);
 }
 
+static void
+draw_left_minor_ticks (cairo_t *cr, const TfPlotArea *area, const TfTicks *ticks,
+                       double length)
+{
+  double minor[64];
+  guint n_minor = minor_ticks (ticks, minor, G_N_ELEMENTS (minor));
+
+  for (guint i = 0; i < n_minor; i++)
+    {
+      double y = tf_plot_area_map_y (area, minor[i]);
+      cairo_move_to (cr, area->x, y);
+      cairo_line_to (cr, area->x - length, y);
+    }
+  cairo_stroke (cr);
+}
+
 void
 tf_axis_draw_left (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
                    const TfTicks *ticks, const char *label_markup)
@@ -449,15 +465,7 @@ tf_axis_draw_left (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *ar
   double widest = 0;
 
   cairo_save (cr);
-  tf_figure_theme_set_source (cr, &theme->foreground);
-  cairo_set_line_width (cr, tf_figure_theme_pt (theme, theme->axis_width));
-  cairo_set_line_cap (cr, CAIRO_LINE_CAP_SQUARE);
-  cairo_set_dash (cr, NULL, 0, 0);
-  cairo_move_to (cr, area->x, area->y);
-  cairo_line_to (cr, area->x, area->y + area->height);
-  cairo_stroke (cr);
-
-  cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+  draw_spine (cr, theme, area->x, area->y, area->x, area->y + area->height);
   for (guint i = 0; i < ticks->n; i++)
     {
       double v = tf_ticks_value (ticks, i);
@@ -473,18 +481,7 @@ tf_axis_draw_left (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *ar
       widest = MAX (widest, w);
       draw_layout_at (cr, layout, area->x - tick - gap - w, y - h / 2);
     }
-  {
-    double minor[64];
-    guint n_minor = minor_ticks (ticks, minor, G_N_ELEMENTS (minor));
-
-    for (guint i = 0; i < n_minor; i++)
-      {
-        double y = tf_plot_area_map_y (area, minor[i]);
-        cairo_move_to (cr, area->x, y);
-        cairo_line_to (cr, area->x - tick * 0.55, y);
-      }
-    cairo_stroke (cr);
-  }
+  draw_left_minor_ticks (cr, area, ticks, tick * 0.55);
 
   if (label_markup)
     {

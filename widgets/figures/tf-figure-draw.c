@@ -298,12 +298,8 @@ tf_fig_marker (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
   cairo_save (cr);
   cairo_new_path (cr);
   cairo_arc (cr, x, y, r, 0, 2 * G_PI);
-  tf_figure_theme_set_source (cr, filled ? &theme->series[series] : &theme->background);
-  cairo_fill_preserve (cr);
-  tf_figure_theme_set_source (cr, &theme->series[series]);
-  cairo_set_dash (cr, NULL, 0, 0);
-  cairo_set_line_width (cr, tf_figure_theme_pt (theme, 1.0));
-  cairo_stroke (cr);
+  tf_figure_theme_fill_ringed (cr, theme, series,
+                               filled ? &theme->series[series] : &theme->background, 1.0);
   cairo_restore (cr);
 }
 

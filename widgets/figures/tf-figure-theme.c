@@ -170,6 +170,18 @@ tf_figure_theme_series_marker (const TfFigureTheme *theme, TfSeries series)
 }
 
 void
+tf_figure_theme_fill_ringed (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                             const TfColour *fill, double line_pt)
+{
+  tf_figure_theme_set_source (cr, fill);
+  cairo_fill_preserve (cr);
+  tf_figure_theme_set_source (cr, &theme->series[series]);
+  cairo_set_dash (cr, NULL, 0, 0);
+  cairo_set_line_width (cr, tf_figure_theme_pt (theme, line_pt));
+  cairo_stroke (cr);
+}
+
+void
 tf_figure_theme_draw_marker (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
                              double x, double y)
 {
@@ -203,12 +215,7 @@ tf_figure_theme_draw_marker (cairo_t *cr, const TfFigureTheme *theme, TfSeries s
       cairo_restore (cr);
       return;
     }
-  tf_figure_theme_set_source (cr, &theme->background);
-  cairo_fill_preserve (cr);
-  tf_figure_theme_set_source (cr, &theme->series[series]);
-  cairo_set_dash (cr, NULL, 0, 0);
-  cairo_set_line_width (cr, tf_figure_theme_pt (theme, 0.9));
-  cairo_stroke (cr);
+  tf_figure_theme_fill_ringed (cr, theme, series, &theme->background, 0.9);
   cairo_restore (cr);
 }
 

@@ -70,6 +70,11 @@ void tf_figure_theme_set_source_alpha (cairo_t *cr, const TfColour *colour, doub
 /* Sets colour, width, dash pattern and caps of one series' line. */
 void tf_figure_theme_set_series_line (cairo_t *cr, const TfFigureTheme *theme, TfSeries series);
 
+/* Fills the current path with fill and strokes it with a solid line of the series,
+ * line_pt wide (a marker); clears the path. */
+void tf_figure_theme_fill_ringed (cairo_t *cr, const TfFigureTheme *theme, TfSeries series,
+                                  const TfColour *fill, double line_pt);
+
 /* The marker of a series in this style (TF_MARKER_NONE unless the style is print). */
 TfMarker tf_figure_theme_series_marker (const TfFigureTheme *theme, TfSeries series);
 /* Draws the series' marker centred at x, y (user units), solid line, filled with the
