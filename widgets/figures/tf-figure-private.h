@@ -97,6 +97,12 @@ void tf_fig_layout_single (cairo_t *cr, const TfFigureTheme *theme, double width
                            const char *y_label, double x_lo, double x_hi, gboolean x_log,
                            double y_lo, double y_hi, TfFigLayout *out);
 
+/* The published grades of a Bayes factor on the log10 BF01 axis of area: the lines, the
+ * line of 1, their names right of the area; and the width their names take there. */
+void tf_fig_grades_draw (cairo_t *cr, const TfFigureTheme *theme, const TfPlotArea *area,
+                         TfEvidenceScale scale);
+double tf_fig_grades_width (cairo_t *cr, const TfFigureTheme *theme, TfEvidenceScale scale);
+
 /* The sensitivity (sample_size FALSE) or sample-size figure, with both panels' areas. */
 gboolean tf_fig_draw_evidence (cairo_t *cr, double width, double height, double scale,
                                const TfEvidenceCurve *curve, const TfFigureOptions *options,
