@@ -7,6 +7,7 @@
 #include <math.h>
 #include <string.h>
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-figure-private.h"
 
 /* A prior lower than this share of the axis reads as a line on the floor: say its height. */

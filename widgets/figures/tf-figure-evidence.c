@@ -6,6 +6,7 @@
  */
 #include <math.h>
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-figure-private.h"
 
 #define PANEL_GAP_PT 10.0

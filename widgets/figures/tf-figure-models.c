@@ -5,6 +5,7 @@
  */
 #include <math.h>
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-figure-private.h"
 
 #define ROW_GAP_SHARE 0.35      /* of a row's height, between hypotheses */

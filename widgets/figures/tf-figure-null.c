@@ -5,6 +5,7 @@
  */
 #include <math.h>
 #include <glib/gi18n-lib.h>
+#include "tf-design.h"
 #include "tf-figure-private.h"
 
 /* Masses below this share of the largest are not worth the width they take. */
