@@ -165,9 +165,9 @@ command_figure (int argc, char **argv)
   g_autofree char *style = NULL;
   g_autofree char *grades = NULL;
   TfFigureOptions options = TF_FIGURE_OPTIONS_INIT;
+  g_autofree char *kinds = tf_figure_kind_names ();
   GOptionEntry entries[] = {
-    { "kind", 0, 0, G_OPTION_ARG_STRING, &kind,
-      N_("densities, sensitivity, sample-size, null-distribution or model-probabilities"), N_("KIND") },
+    { "kind", 0, 0, G_OPTION_ARG_STRING, &kind, kinds, N_("KIND") },
     { "output", 'o', 0, G_OPTION_ARG_FILENAME, &output, N_("The file to write: .png, .svg or .pdf"), N_("OUT") },
     { "width-mm", 0, 0, G_OPTION_ARG_DOUBLE, &width_mm, N_("Width in millimetres (default 120)"), N_("W") },
     { "height-mm", 0, 0, G_OPTION_ARG_DOUBLE, &height_mm, N_("Height in millimetres (default 80)"), N_("H") },
@@ -233,8 +233,8 @@ command_report (int argc, char **argv)
                                   "OUT.pdf: A4 pages with the figures drawn in.\n"
                                   "OUT.html: one self-contained file, the figures as inline SVG.\n"
                                   "OUT.md: Markdown text, and each figure that applies as OUT-KIND.svg\n"
-                                  "beside it (KIND: densities, sensitivity, sample-size,\n"
-                                  "null-distribution, model-probabilities), linked by relative names."));
+                                  "beside it (KIND: one of the figure kinds of twofold-cli figure),\n"
+                                  "linked by relative names."));
   if (!parse_command (context, &argc, &argv, "report", &status))
     return status;
   if (output == NULL)
