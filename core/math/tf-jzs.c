@@ -20,11 +20,11 @@
 #include "tf-jzs.h"
 
 #include "tf-incbeta.h"
+#include "tf-normal.h"
 
 #include <math.h>
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_integration.h>
-#include <gsl/gsl_sf_erf.h>
 
 #define PANEL_WIDTH 4.0         /* in x */
 #define CUT 60.0                /* r² z at the upper end: e^(−30) of the tail is left */
@@ -312,7 +312,7 @@ log_t_cdf (double x, double df)
 {
   double tail;                  /* ln P(T ≤ −|x|) */
   if (isinf (df))
-    tail = gsl_sf_log_erfc (fabs (x) / G_SQRT2) - G_LN2;
+    tail = tf_log_normal_upper (fabs (x));
   else
     {
       double d = df + x * x;

@@ -9,12 +9,18 @@
 #include <gsl/gsl_sf_erf.h>
 
 double
-tf_log_half_erfc (double z)
+tf_log_erfc (double x)
 {
   gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z, &r) != GSL_SUCCESS)
+  if (gsl_sf_log_erfc_e (x, &r) != GSL_SUCCESS)
     return NAN;
-  return r.val - G_LN2;
+  return r.val;
+}
+
+double
+tf_log_half_erfc (double z)
+{
+  return tf_log_erfc (z) - G_LN2;
 }
 
 double

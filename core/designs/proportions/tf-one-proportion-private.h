@@ -26,9 +26,6 @@ typedef struct {
 void tf_one_proportion_tests (double k, double n, double theta0, TfDirection direction,
                               TfOneProportionTests *tests);
 
-/* ln P(Z >= z), standard normal, finite far into the tail (Cody 1969 via GSL). */
-double tf_one_proportion_log_normal_upper (double z);
-
 /* ln of the Beta(P, Q) mass on each part of (0, 1) cut at lo <= hi: below lo, inside
  * [lo, hi], above hi, each from its own tails so that none cancels. */
 void tf_one_proportion_log_masses (double P, double Q, double lo, double hi,

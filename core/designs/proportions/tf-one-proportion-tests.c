@@ -6,23 +6,9 @@
 #include "tf-incbeta.h"
 #include "tf-incbeta-private.h"
 #include "tf-logspace.h"
+#include "tf-normal.h"
 
 #include <math.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
-
-/* ln P(Z >= z) for the standard normal, ln(½ erfc(z/√2)), finite far into the tail
- * (GSL's log_erfc, Cody 1969 rational approximations). */
-double
-tf_one_proportion_log_normal_upper (double z)
-{
-  gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
-    return NAN;
-  return r.val - G_LN2;
-}
-
-#define log_q tf_one_proportion_log_normal_upper
 
 /* ln min(1, 2 e^l): a one-sided p-value doubled for two sides. */
 static double
@@ -51,19 +37,19 @@ tf_one_proportion_tests (double k, double n, double theta0, TfDirection directio
       t->lp_exact = t->lp_central = lsf;
       /* mid-p (Lancaster 1961): P(X > k) + ½ P(X = k) */
       t->lp_mid = tf_log_add (tf_binom_log_sf (k + 1.0, n, p, q), lpmf - G_LN2);
-      t->lp_score = log_q (t->z);
+      t->lp_score = tf_log_normal_upper (t->z);
       /* P(X >= k) ≈ P(Y >= k − ½), Y normal (continuity correction, common practice) */
       t->z_cc = (t->d - 0.5) / sd;
-      t->lp_score_cc = log_q (t->z_cc);
-      t->lp_lr = log_q (r);
+      t->lp_score_cc = tf_log_normal_upper (t->z_cc);
+      t->lp_lr = tf_log_normal_upper (r);
       break;
     case TF_DIRECTION_LESS:
       t->lp_exact = t->lp_central = lcdf;
       t->lp_mid = tf_log_add (tf_binom_log_cdf (k - 1.0, n, p, q), lpmf - G_LN2);
-      t->lp_score = log_q (-t->z);
+      t->lp_score = tf_log_normal_upper (-t->z);
       t->z_cc = (t->d + 0.5) / sd;
-      t->lp_score_cc = log_q (-t->z_cc);
-      t->lp_lr = log_q (-r);
+      t->lp_score_cc = tf_log_normal_upper (-t->z_cc);
+      t->lp_lr = tf_log_normal_upper (-r);
       break;
     case TF_DIRECTION_TWO_SIDED:
     default:
@@ -74,15 +60,12 @@ tf_one_proportion_tests (double k, double n, double theta0, TfDirection directio
        * the exact p-value minus half the probability of the observed outcome */
       t->lp_mid = tf_log_sub (t->lp_exact, lpmf - G_LN2);
       /* 2 Φ(−|z|), from the upper tail */
-      t->lp_score = log_double (log_q (fabs (t->z)));
+      t->lp_score = log_double (tf_log_normal_upper (fabs (t->z)));
       /* Yates's correction: |k − nθ0| less ½, not below 0 (common practice) */
       t->z_cc = copysign (MAX (0.0, fabs (t->d) - 0.5), t->d) / sd;
-      t->lp_score_cc = log_double (log_q (fabs (t->z_cc)));
+      t->lp_score_cc = log_double (tf_log_normal_upper (fabs (t->z_cc)));
       /* P(χ²₁ >= G) = erfc(√(G/2)) = erfc(√dev) */
-      {
-        gsl_sf_result er;
-        t->lp_lr = gsl_sf_log_erfc_e (sqrt (t->dev), &er) == GSL_SUCCESS ? MIN (0.0, er.val) : NAN;
-      }
+      t->lp_lr = MIN (0.0, tf_log_erfc (sqrt (t->dev)));    /* NaN where GSL fails */
       break;
     }
   t->lp_mid = MIN (0.0, t->lp_mid);

@@ -10,13 +10,12 @@
 #include "tf-fisher.h"
 #include "tf-incbeta.h"
 #include "tf-logspace.h"
+#include "tf-normal.h"
 
 #include <math.h>
 #include <float.h>
 #include <string.h>
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
 
 static double
 finite_exp (double l)
@@ -373,16 +372,16 @@ log_p_pooled_z (const TfAnalysis *an)
 {
   const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
   const double N = na + nb, m = ka + kb;
-  gsl_sf_result r;
 
   if (m == 0.0 || m == N)
     return 0.0;
   double z = tf_two_proportions_cross (ka, na, kb, nb) / sqrt (m * ((N - m) / N) * na * nb);
   double side = an->direction == TF_DIRECTION_GREATER ? z
                 : an->direction == TF_DIRECTION_LESS ? -z : fabs (z);
-  if (gsl_sf_log_erfc_e (side / G_SQRT2, &r) != GSL_SUCCESS)
+  double l = tf_log_erfc (side / G_SQRT2);      /* two-sided: ln P(|Z| >= |z|) */
+  if (isnan (l))                                /* GSL failed */
     return 0.0;
-  return MIN (0.0, r.val - (an->direction == TF_DIRECTION_TWO_SIDED ? 0.0 : G_LN2));
+  return MIN (0.0, l - (an->direction == TF_DIRECTION_TWO_SIDED ? 0.0 : G_LN2));
 }
 
 /* x = the total trials T from 2 (or where the observed z can first be reached) to

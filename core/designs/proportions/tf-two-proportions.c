@@ -19,12 +19,12 @@
 #include "tf-beta-difference.h"
 #include "tf-fisher.h"
 #include "tf-logspace.h"
+#include "tf-normal.h"
+#include "tf-normal-test.h"
 
 #include <math.h>
 #include <glib/gi18n-lib.h>
 #include <gsl/gsl_cdf.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
 
 #define TF_MAX_TRIALS 1e15
 
@@ -173,16 +173,6 @@ tf_two_proportions_newcombe (double ka, double na, double kb, double nb, double 
   *hi = MIN (1.0, d + hypot (aa, bb));
 }
 
-/* ln P(Z >= z), standard normal, far into the tail (GSL's log_erfc, Cody 1969). */
-static double
-log_normal_upper (double z)
-{
-  gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
-    return NAN;
-  return r.val - G_LN2;
-}
-
 static void
 add_p (TfResults *results, const char *id, const char *label, double log_p)
 {
@@ -246,16 +236,13 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
       double z = D / vs;
       double zy = MAX (0.0, fabs (D) - 0.5 * N) / vs;
       double lp_z;
-      gsl_sf_result er;
 
       add_p (results, "p_value_chisq", _("Pearson χ² p-value (two-sided)"),
-             G_LN2 + log_normal_upper (fabs (z)));
+             G_LN2 + tf_log_normal_upper (fabs (z)));
       add_p (results, "p_value_chisq_yates",
              _("Pearson χ² p-value with Yates' correction (two-sided)"),
-             G_LN2 + log_normal_upper (zy));
-      lp_z = dir == TF_DIRECTION_GREATER ? log_normal_upper (z)
-             : dir == TF_DIRECTION_LESS ? log_normal_upper (-z)
-             : G_LN2 + log_normal_upper (fabs (z));
+             G_LN2 + tf_log_normal_upper (zy));
+      lp_z = tf_normal_test_log_p (z, dir);
       add_p (results, "p_value_z", dir == TF_DIRECTION_TWO_SIDED ? _("z test p-value (pooled)")
                                    : _("z test p-value (pooled, one-sided)"), lp_z);
       tf_results_add (results, "z", _("z statistic (pooled)"), TF_MEASURE_STATISTIC, z);
@@ -266,9 +253,9 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
       dev = tf_bd0_delta (ka, na * (m / N), e) + tf_bd0_delta (na - ka, na * ((N - m) / N), -e)
             + tf_bd0_delta (kb, nb * (m / N), -e) + tf_bd0_delta (nb - kb, nb * ((N - m) / N), e);
       double r = (D < 0.0 ? -1.0 : 1.0) * sqrt (2.0 * dev);
-      double lp_lr = dir == TF_DIRECTION_GREATER ? log_normal_upper (r)
-                     : dir == TF_DIRECTION_LESS ? log_normal_upper (-r)
-                     : (gsl_sf_log_erfc_e (sqrt (dev), &er) == GSL_SUCCESS ? er.val : NAN);
+      /* two-sided: P(χ²₁ >= G) = erfc(√(G/2)) = erfc(√dev) */
+      double lp_lr = dir == TF_DIRECTION_TWO_SIDED ? tf_log_erfc (sqrt (dev))
+                     : tf_normal_test_log_p (r, dir);
       add_p (results, "p_value_lr", dir == TF_DIRECTION_TWO_SIDED ? _("Likelihood-ratio test p-value")
                                     : _("Likelihood-ratio test p-value (one-sided)"), lp_lr);
     }

@@ -11,6 +11,7 @@
 #include "tf-rates-curves.h"
 #include "tf-evidence.h"
 #include "tf-logspace.h"
+#include "tf-normal-test.h"
 
 #include <math.h>
 #include <float.h>
@@ -94,21 +95,19 @@ rate_tests (double k, double m, TfDirection dir, RateTests *t)
       t->lp_exact = tf_pois_log_sf (k, m);
       /* mid-p (Lancaster 1961): P(X > k) + ½ P(X = k) */
       t->lp_mid = tf_log_add (tf_pois_log_sf (k + 1.0, m), lpmf - G_LN2);
-      t->lp_score = tf_rates_log_normal_upper (t->z);
       break;
     case TF_DIRECTION_LESS:
       t->lp_exact = tf_pois_log_cdf (k, m);
       t->lp_mid = tf_log_add (tf_pois_log_cdf (k - 1.0, m), lpmf - G_LN2);
-      t->lp_score = tf_rates_log_normal_upper (-t->z);
       break;
     case TF_DIRECTION_TWO_SIDED:
     default:
       t->lp_exact = tf_pois_log_exact_two_sided (k, m);
       /* the exact p minus half the probability of the observed count (Lancaster 1961) */
       t->lp_mid = tf_log_sub (t->lp_exact, MIN (t->lp_exact, lpmf - G_LN2));
-      t->lp_score = G_LN2 + tf_rates_log_normal_upper (fabs (t->z));
       break;
     }
+  t->lp_score = tf_normal_test_log_p (t->z, dir);
 }
 
 /* ln BF01 in the analysis's hypotheses: point or interval null, side of the

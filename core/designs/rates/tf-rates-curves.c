@@ -9,8 +9,6 @@
 
 #include <math.h>
 #include <glib/gi18n-lib.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_sf_erf.h>
 
 #define TF_MAX_OUTCOMES 100001
 
@@ -75,16 +73,6 @@ tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems)
                      tf_problem_new ("Alternative", "PriorRate",
                                      _("The gamma rate PriorRate must be a finite number above 0 (it is %g)."),
                                      a->prior_rate));
-}
-
-/* GSL's log_erfc (Cody 1969). */
-double
-tf_rates_log_normal_upper (double z)
-{
-  gsl_sf_result r;
-  if (gsl_sf_log_erfc_e (z / G_SQRT2, &r) != GSL_SUCCESS)
-    return NAN;
-  return r.val - G_LN2;
 }
 
 double

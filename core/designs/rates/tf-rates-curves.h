@@ -1,6 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-rates-curves.h: what the one-rate and two-rates designs share: the checks of
- * counts, exposures and the gamma prior, the normal tail, and the sensitivity,
+ * counts, exposures and the gamma prior, and the sensitivity,
  * sample-size and null-distribution curves around a design's own Bayes factor and
  * null probabilities.
  */
@@ -27,9 +27,6 @@ void tf_rates_check_interval_null (const TfAnalysis *analysis, GPtrArray *proble
                                    gboolean ratio);
 /* The gamma prior's PriorShape and PriorRate. */
 void tf_rates_check_prior (const TfAnalysis *analysis, GPtrArray *problems);
-
-/* ln P(Z >= z), Z standard normal. */
-double tf_rates_log_normal_upper (double z);
 
 /* How a design's parameter (λ, or ρ = λA/λB) is distributed under a prior or a
  * posterior with parameters param: both ln tails at c, and the quantile whose lower

@@ -19,6 +19,7 @@
 #include "tf-incbeta.h"
 #include "tf-evidence.h"
 #include "tf-logspace.h"
+#include "tf-normal-test.h"
 
 #include <math.h>
 #include <float.h>
@@ -225,20 +226,18 @@ split_tests (double ka, double n, double p0, double q0, TfDirection dir, SplitTe
       t->lp_exact = tf_binom_log_sf (ka, n, p0, q0);
       /* mid-p (Lancaster 1961) */
       t->lp_mid = tf_log_add (tf_binom_log_sf (ka + 1.0, n, p0, q0), lpmf - G_LN2);
-      t->lp_score = tf_rates_log_normal_upper (z);
       break;
     case TF_DIRECTION_LESS:
       t->lp_exact = tf_binom_log_cdf (ka, n, p0, q0);
       t->lp_mid = tf_log_add (tf_binom_log_cdf (ka - 1.0, n, p0, q0), lpmf - G_LN2);
-      t->lp_score = tf_rates_log_normal_upper (-z);
       break;
     case TF_DIRECTION_TWO_SIDED:
     default:
       t->lp_exact = tf_binom_log_exact_two_sided (ka, n, p0);
       t->lp_mid = tf_log_sub (t->lp_exact, MIN (t->lp_exact, lpmf - G_LN2));
-      t->lp_score = G_LN2 + tf_rates_log_normal_upper (fabs (z));
       break;
     }
+  t->lp_score = tf_normal_test_log_p (z, dir);
 }
 
 void
