@@ -2,6 +2,7 @@
  * tf-binomial.c: binomial tails and exact intervals for n up to 10^12.
  */
 #include "tf-binomial.h"
+#include "tf-exact-test.h"
 #include "tf-incbeta.h"
 #include "tf-logspace.h"
 
@@ -43,50 +44,39 @@ tf_binom_log_sf (double k, double n, double p, double q)
   return tf_incbeta_log_lower (p, q, k, n - k + 1.0);
 }
 
-/* ln of the two-sided exact p-value by the minimum-likelihood rule (Sterne 1954;
- * relative tolerance 1e-7 as R's binom.test and scipy.stats.binomtest). The outcomes
- * on the other side of the mode are found by bisection on the log probability, which
- * is monotone there, so no outcome is visited one by one. */
+/* param: n, p, q = 1 − p */
+static double
+log_pmf (double j, const void *data)
+{
+  const double *param = data;
+  return tf_log_dbinom (j, param[0], param[1], param[2]);
+}
+
+/* ln of the two-sided exact p-value by the minimum-likelihood rule (Sterne 1954): the
+ * outcomes on the other side of the mode by tf_exact_test_far_end(). */
 static double
 log_exact_two_sided (double k, double n, double p0)
 {
   double q0 = 1.0 - p0;
   double m = n * p0;
-  double ld = tf_log_dbinom (k, n, p0, q0) + log1p (1e-7);
+  const double param[] = { n, p0, q0 };
+  double ld = tf_exact_test_log_threshold (tf_log_dbinom (k, n, p0, q0));
 
   if (k == m)
     return 0.0;
   if (k < m)
     {
-      /* Smallest j in [ceil(m), n] with ln P(X = j) <= ld; the probability decreases
-       * there. */
-      double lo = ceil (m), hi = n + 1.0;      /* answer in [lo, hi] */
-      while (lo < hi)
-        {
-          double mid = floor (lo + (hi - lo) / 2.0);
-          if (tf_log_dbinom (mid, n, p0, q0) <= ld)
-            hi = mid;
-          else
-            lo = mid + 1.0;
-        }
+      /* the smallest j in [ceil(m), n] no more likely than k, n + 1 when none is */
+      double j = tf_exact_test_far_end (log_pmf, param, ld, ceil (m), n + 1.0, 0.0);
       double lp = tf_log_add (tf_binom_log_cdf (k, n, p0, q0),
-                              tf_binom_log_sf (lo, n, p0, q0));
+                              tf_binom_log_sf (j, n, p0, q0));
       return MIN (lp, 0.0);
     }
   else
     {
-      /* Largest j in [0, floor(m)] with ln P(X = j) <= ld; the probability increases
-       * there. */
-      double lo = -1.0, hi = floor (m);         /* answer in [lo, hi] */
-      while (lo < hi)
-        {
-          double mid = ceil (lo + (hi - lo) / 2.0);
-          if (tf_log_dbinom (mid, n, p0, q0) <= ld)
-            lo = mid;
-          else
-            hi = mid - 1.0;
-        }
-      double lp = tf_log_add (tf_binom_log_cdf (lo, n, p0, q0),
+      /* the largest j in [0, floor(m)] no more likely than k, −1 when none is */
+      double j = tf_exact_test_far_end (log_pmf, param, ld, floor (m), -1.0, 0.0);
+      double lp = tf_log_add (tf_binom_log_cdf (j, n, p0, q0),
                               tf_binom_log_sf (k, n, p0, q0));
       return MIN (lp, 0.0);
     }

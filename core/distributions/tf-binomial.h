@@ -12,7 +12,7 @@ double tf_binom_log_cdf (double k, double n, double p, double q);
 double tf_binom_log_sf (double k, double n, double p, double q);
 
 /* Two-sided exact p-value by the minimum-likelihood rule: the probability of every
- * outcome no more likely than k, with relative tolerance 1e-7 (common practice). */
+ * outcome no more likely than k, with TF_EXACT_TEST_RELATIVE_TOLERANCE. */
 double tf_binom_exact_two_sided (double k, double n, double p0);
 /* Its logarithm, finite where the p-value itself underflows. */
 double tf_binom_log_exact_two_sided (double k, double n, double p0);

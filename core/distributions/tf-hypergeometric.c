@@ -10,6 +10,7 @@
  * none at all on the other side of the mode, is visited.
  */
 #include "tf-hypergeometric.h"
+#include "tf-exact-test.h"
 #include "tf-logspace.h"
 
 #include <math.h>
@@ -111,39 +112,23 @@ tf_hyper_log_sf (const TfHyper *h, double x)
   return tf_log1mexp (sum_outward_clamped (h, x - 1.0, -1));
 }
 
-/* Bisection on the monotone side of the mode for the outcome nearest the mode whose
- * log probability is at most ld (Sterne 1954's rule, the boundary found as in
- * tf-binomial.c). */
+static double
+log_pmf (double x, const void *h)
+{
+  return tf_hyper_log_pmf (h, x);
+}
+
+/* On each side of the mode, the outcome nearest the mode no more likely than k_a
+ * (Sterne 1954's rule, by tf_exact_test_far_end()). */
 void
 tf_hyper_two_sided_bounds (const TfHyper *h, double k_a, double *low, double *high)
 {
-  double ld = tf_hyper_log_pmf (h, k_a) + log1p (1e-7);
-  double lo, hi;
+  double ld = tf_exact_test_log_threshold (tf_hyper_log_pmf (h, k_a));
 
-  /* Largest j in [lo − 1, mode] with ln P(j) <= ld: P increases on [lo, mode]. */
-  lo = h->lo - 1.0;
-  hi = h->mode;
-  while (lo < hi)
-    {
-      double mid = ceil (lo + (hi - lo) / 2.0);
-      if (tf_hyper_log_pmf (h, mid) <= ld)
-        lo = mid;
-      else
-        hi = mid - 1.0;
-    }
-  *low = lo;
-  /* Smallest j in [mode, hi + 1] with ln P(j) <= ld. */
-  lo = h->mode;
-  hi = h->hi + 1.0;
-  while (lo < hi)
-    {
-      double mid = floor (lo + (hi - lo) / 2.0);
-      if (tf_hyper_log_pmf (h, mid) <= ld)
-        hi = mid;
-      else
-        lo = mid + 1.0;
-    }
-  *high = lo;
+  /* the largest j in [lo − 1, mode] with ln P(j) <= ld: P increases on [lo, mode] */
+  *low = tf_exact_test_far_end (log_pmf, h, ld, h->mode, h->lo - 1.0, 0.0);
+  /* the smallest j in [mode, hi + 1] with ln P(j) <= ld */
+  *high = tf_exact_test_far_end (log_pmf, h, ld, h->mode, h->hi + 1.0, 0.0);
 }
 
 /* The outcomes no more likely than k_a, summed on both sides of the mode. */

@@ -29,8 +29,8 @@ double tf_hyper_log_sf (const TfHyper *h, double x);
  * lo or *high > hi when a side has none). */
 void tf_hyper_two_sided_bounds (const TfHyper *h, double k_a, double *low, double *high);
 
-/* ln of the two-sided exact p-value of k_a by the minimum-likelihood rule (relative
- * tolerance 1e-7, as R's fisher.test). */
+/* ln of the two-sided exact p-value of k_a by the minimum-likelihood rule, with
+ * TF_EXACT_TEST_RELATIVE_TOLERANCE. */
 double tf_hyper_log_exact_two_sided (const TfHyper *h, double k_a);
 
 G_END_DECLS

@@ -3,6 +3,7 @@
  * two-sided test and the Garwood interval, built on the incomplete gamma function.
  */
 #include "tf-poisson.h"
+#include "tf-exact-test.h"
 #include "tf-incgamma.h"
 #include "tf-logspace.h"
 
@@ -128,53 +129,35 @@ tf_pois_log_sf (double k, double mu)
   return tf_gamma_inc_log_lower (k, mu);
 }
 
-/* Two-sided exact p-value by the minimum-likelihood rule (Sterne 1954; relative
- * tolerance 1e-7 as R's poisson.test): the outcomes on the far side of the mode that
- * are no more likely than k are found by bisection on the log probability, which is
- * monotone there; the upper end is bracketed by doubling. */
+static double
+log_dpois (double j, const void *mu)
+{
+  return tf_log_dpois (j, *(const double *) mu);
+}
+
+/* Two-sided exact p-value by the minimum-likelihood rule (Sterne 1954): the outcomes on
+ * the far side of the mode by tf_exact_test_far_end(), the unbounded upper side
+ * bracketed by steps from √μ. */
 double
 tf_pois_log_exact_two_sided (double k, double mu)
 {
   if (isnan (k) || isnan (mu) || k < 0.0 || !(mu > 0.0))
     return NAN;
-  double ld = tf_log_dpois (k, mu) + log1p (1e-7);
+  double ld = tf_exact_test_log_threshold (tf_log_dpois (k, mu));
 
   if (k == mu)
     return 0.0;
   if (k < mu)
     {
-      /* smallest j >= ceil(μ) with ln P(X = j) <= ld */
-      double lo = ceil (mu), step = MAX (1.0, floor (sqrt (mu)));
-      double hi = lo;
-      while (tf_log_dpois (hi, mu) > ld)
-        {
-          lo = hi + 1.0;
-          hi += step;
-          step *= 2.0;
-        }
-      while (lo < hi)
-        {
-          double mid = floor (lo + (hi - lo) / 2.0);
-          if (tf_log_dpois (mid, mu) <= ld)
-            hi = mid;
-          else
-            lo = mid + 1.0;
-        }
-      return MIN (0.0, tf_log_add (tf_pois_log_cdf (k, mu), tf_pois_log_sf (lo, mu)));
+      /* the smallest j >= ceil(μ) no more likely than k */
+      double j = tf_exact_test_far_end (log_dpois, &mu, ld, ceil (mu), INFINITY, sqrt (mu));
+      return MIN (0.0, tf_log_add (tf_pois_log_cdf (k, mu), tf_pois_log_sf (j, mu)));
     }
   else
     {
-      /* largest j in [0, floor(μ)] with ln P(X = j) <= ld, −1 when there is none */
-      double lo = -1.0, hi = floor (mu);
-      while (lo < hi)
-        {
-          double mid = ceil (lo + (hi - lo) / 2.0);
-          if (tf_log_dpois (mid, mu) <= ld)
-            lo = mid;
-          else
-            hi = mid - 1.0;
-        }
-      return MIN (0.0, tf_log_add (tf_pois_log_cdf (lo, mu), tf_pois_log_sf (k, mu)));
+      /* the largest j in [0, floor(μ)] no more likely than k, −1 when there is none */
+      double j = tf_exact_test_far_end (log_dpois, &mu, ld, floor (mu), -1.0, 0.0);
+      return MIN (0.0, tf_log_add (tf_pois_log_cdf (j, mu), tf_pois_log_sf (k, mu)));
     }
 }
 

@@ -40,8 +40,8 @@ double tf_pois_log_heterogeneity_change (const TfPoisSample *p, const TfPoisSamp
 double tf_pois_log_cdf (double k, double mu);
 double tf_pois_log_sf (double k, double mu);
 
-/* ln of the two-sided exact p-value by the minimum-likelihood rule, relative
- * tolerance 1e-7 (common practice). */
+/* ln of the two-sided exact p-value by the minimum-likelihood rule, with
+ * TF_EXACT_TEST_RELATIVE_TOLERANCE. */
 double tf_pois_log_exact_two_sided (double k, double mu);
 
 /* Garwood (1936) exact interval for the Poisson mean at level, two-sided. */

@@ -10,7 +10,7 @@
 G_BEGIN_DECLS
 
 /* ln of Fisher's exact p-value for kA: two-sided by the minimum-likelihood rule with
- * relative tolerance 1e-7 (as R's fisher.test), or one-sided (greater: large kA, that
+ * TF_EXACT_TEST_RELATIVE_TOLERANCE, or one-sided (greater: large kA, that
  * is θA > θB). */
 double tf_fisher_log_p (const TfHyper *h, double k_a, TfDirection direction);
 

@@ -5,6 +5,7 @@
 #include "tf-one-proportion.h"
 #include "tf-one-proportion-private.h"
 #include "tf-logspace.h"
+#include "tf-exact-test.h"
 
 #include <math.h>
 #include "tf-evidence.h"
@@ -89,7 +90,7 @@ tf_one_proportion_sample_size (const TfAnalysis *an, TfEvidenceCurve *curve, cha
  * less than 1e-12 of the mass, by Hoeffding 1963), and the observed count when near;
  * beyond 2000 outcomes every m-th is kept (the x label says so). in_tail marks the
  * outcomes counted in the exact p-value: j >= k (greater), j <= k (less), or no more
- * likely than k by the minimum-likelihood rule, relative tolerance 1e-7 (two-sided). */
+ * likely than k by the minimum-likelihood rule (two-sided). */
 gboolean
 tf_one_proportion_null_distribution (const TfAnalysis *an, TfNullDistribution *dist,
                                      char **why_not)
@@ -115,7 +116,7 @@ tf_one_proportion_null_distribution (const TfAnalysis *an, TfNullDistribution *d
   guint np = (guint) floor ((hi - lo) / step) + 1;
 
   tf_one_proportion_tests (k, n, t, an->direction, &tests);
-  double ld = tf_log_dbinom (k, n, t, u) + log1p (1e-7);
+  double ld = tf_exact_test_log_threshold (tf_log_dbinom (k, n, t, u));
   tf_null_distribution_allocate (dist, np);
   for (guint i = 0; i < np; i++)
     {

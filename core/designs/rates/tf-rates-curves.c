@@ -6,6 +6,7 @@
 #include "tf-evidence.h"
 #include "tf-results.h"
 #include "tf-logspace.h"
+#include "tf-exact-test.h"
 
 #include <math.h>
 #include <glib/gi18n-lib.h>
@@ -305,8 +306,7 @@ tf_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist
       *why_not = g_strdup (_("The null distribution has too many likely outcomes to draw one by one."));
       return FALSE;
     }
-  /* the minimum-likelihood rule's relative tolerance 1e-7 (common practice) */
-  double ld = log_pmf (k, param) + log1p (1e-7);
+  double ld = tf_exact_test_log_threshold (log_pmf (k, param));
   tf_null_distribution_allocate (dist, (guint) (hi - lo + 1.0));
   for (guint i = 0; i < dist->n; i++)
     {
