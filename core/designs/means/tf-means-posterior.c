@@ -10,16 +10,14 @@
  * last coefficients are below 1e-13 of the panel's largest value) down to 1e-17 of the
  * mode's density; masses, quantiles (Newton within a panel on the integrated series),
  * the HDI and the density all come from that one table. Masses the table cannot give
- * to 1e-9 are done by adaptive Gauss–Kronrod quadrature (QUADPACK QAG/QAGIU/QAGIL).
+ * to 1e-9 are done by quadrature (tf_delta_quadrature_log_mass, tf-means-delta.c).
  */
-#include "tf-means.h"
+#include "tf-means-posterior.h"
 #include "tf-logspace.h"
 #include "tf-chebyshev.h"
 
 #include <math.h>
 #include <string.h>
-#include <gsl/gsl_errno.h>
-#include <gsl/gsl_integration.h>
 
 #define CHEB_K TF_CHEB_N         /* Chebyshev–Lobatto nodes a panel */
 #define MAX_DROP 8.0            /* largest fall of the log density across a panel */
@@ -55,80 +53,8 @@ struct TfDeltaPosterior {
 static double
 log_post (const TfDeltaPosterior *p, double delta)
 {
-  double v = tf_delta_log_likelihood (p->t, p->n_eff, p->df, delta)
-             + tf_delta_log_prior (&p->prior, delta) - p->shift;
-  return isnan (v) ? -INFINITY : v;
-}
-
-static double
-post_integrand (double delta, void *data)
-{
-  const TfDeltaPosterior *p = data;
-  double v = exp (log_post (p, delta));
-  return isfinite (v) ? v : 0.0;
-}
-
-/* ∫_a^b exp(lp − shift) on one piece, a < b, either end possibly infinite, to the
- * absolute error eps or 1e-11 relative. */
-static double
-piece (TfDeltaPosterior *p, double a, double b, double eps, gsl_integration_workspace *w)
-{
-  gsl_function f = { post_integrand, p };
-  double res = 0.0, err = 0.0;
-
-  if (!(a < b))
-    return 0.0;
-  if (isinf (b))
-    gsl_integration_qagiu (&f, a, eps, 1e-11, 300, w, &res, &err);
-  else if (isinf (a))
-    gsl_integration_qagil (&f, b, eps, 1e-11, 300, w, &res, &err);
-  else
-    gsl_integration_qag (&f, a, b, eps, 1e-11, 300, GSL_INTEG_GAUSS21, w, &res, &err);
-  return res;
-}
-
-static int
-compare_doubles (const void *a, const void *b)
-{
-  double x = *(const double *) a, y = *(const double *) b;
-  return (x > y) - (x < y);
-}
-
-/* ln of the mass on [a, b] by adaptive quadrature of the density itself, for masses the
- * table does not hold: the integrand scaled by its value at the end nearer the mode (a
- * mass far in a tail does not underflow), split at the bulk and at 1, 4, 16 and 64
- * decay lengths from that end. */
-static double
-quadrature_log_mass (TfDeltaPosterior *p, double a, double b)
-{
-  double m = p->mode, s = p->width;
-  double near = a >= m ? a : (b <= m ? b : m), into = near == a ? 1.0 : -1.0;
-  double local = isfinite (near) ? log_post (p, near) : 0.0;
-  if (!isfinite (local))
-    local = 0.0;
-  double hh = 1e-7 * (fabs (near) + s);
-  double slope = isfinite (near) ? fabs (log_post (p, near + into * hh) - local) / hh : 0.0;
-  double len = slope > 0.0 && isfinite (slope) ? 1.0 / slope : s;
-  double cuts[] = { m - 40.0 * s, m - 12.0 * s, m - 4.0 * s, m, m + 4.0 * s, m + 12.0 * s,
-                    m + 40.0 * s, near + into * len, near + into * 4.0 * len,
-                    near + into * 16.0 * len, near + into * 64.0 * len };
-  double sum = 0.0, left = a, keep = p->shift;
-  gsl_integration_workspace *w = gsl_integration_workspace_alloc (300);
-
-  qsort (cuts, G_N_ELEMENTS (cuts), sizeof cuts[0], compare_doubles);
-  p->shift += local;
-  /* the scaled integrand is 1 at the near end, so its integral is about len or more */
-  double eps = 1e-13 * MIN (len, s);
-  for (guint i = 0; i < G_N_ELEMENTS (cuts); i++)
-    if (cuts[i] > left && cuts[i] < b)
-      {
-        sum += piece (p, left, cuts[i], eps, w);
-        left = cuts[i];
-      }
-  sum += piece (p, left, b, eps, w);
-  p->shift = keep;
-  gsl_integration_workspace_free (w);
-  return log (sum) + local;
+  const TfDeltaTarget target = { &p->prior, p->t, p->n_eff, p->df, p->shift };
+  return tf_delta_log_target (&target, delta);
 }
 
 /* --- one panel --------------------------------------------------------------------- */
@@ -417,7 +343,9 @@ tf_delta_posterior_log_mass (TfDeltaPosterior *post, double a, double b)
   double m = table_mass (post, a, b);
   if (m >= 1e-9 * post->total)
     return log (m) - post->log_total;
-  return quadrature_log_mass (post, MAX (a, post->dom_lo), MIN (b, post->dom_hi))
+  const TfDeltaTarget target = { &post->prior, post->t, post->n_eff, post->df, post->shift };
+  return tf_delta_quadrature_log_mass (&target, post->mode, post->width,
+                                       MAX (a, post->dom_lo), MIN (b, post->dom_hi))
          - post->log_total;
 }
 

@@ -90,35 +90,6 @@ tf_means_validate_common (const TfAnalysis *analysis, GPtrArray *problems)
     }
 }
 
-double
-tf_delta_log_prior (const TfDeltaPrior *prior, double delta)
-{
-  double u = delta / prior->r;
-  if (prior->prior == TF_PRIOR_NORMAL)
-    return -0.5 * u * u - log (prior->r) - 0.5 * log (2.0 * G_PI);
-  return -log (G_PI * prior->r) - log1p (u * u);
-}
-
-double
-tf_delta_log_likelihood (double t, double n_eff, double df, double delta)
-{
-  double lambda = sqrt (n_eff) * delta;
-  if (isinf (df))
-    return -0.5 * (t - lambda) * (t - lambda);
-  return tf_nct_log_pdf (t, df, lambda);
-}
-
-void
-tf_delta_prior_from_analysis (const TfAnalysis *analysis, TfDeltaPrior *prior)
-{
-  prior->prior = analysis->prior == TF_PRIOR_NORMAL ? TF_PRIOR_NORMAL : TF_PRIOR_CAUCHY;
-  prior->r = analysis->prior_scale;
-  prior->direction = analysis->direction;
-  prior->interval = analysis->null_kind == TF_NULL_INTERVAL;
-  prior->low = analysis->null_low;
-  prior->high = analysis->null_high;
-}
-
 /* ln of the prior mass of δ on [a, b]: Cauchy or normal distribution function. */
 static double
 log_prior_mass (const TfDeltaPrior *prior, double a, double b)

@@ -1,13 +1,17 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-means.h: what the three means designs share: the statistics of a t (or z) test,
  * the Bayes factors and the posterior of the standardised effect δ, the numbers and
- * the curves. tf-one-mean.c and tf-two-means.c turn an analysis into TfMeansStats.
+ * the curves. tf-one-mean.c and tf-two-means.c turn an analysis into TfMeansStats; the
+ * prior and likelihood of δ are in tf-means-delta.h, its posterior in
+ * tf-means-posterior.h.
  */
 #pragma once
 
 #include "tf-analysis.h"
 #include "tf-curves.h"
 #include "tf-results.h"
+#include "tf-means-delta.h"
+#include "tf-means-posterior.h"
 
 G_BEGIN_DECLS
 
@@ -29,21 +33,10 @@ typedef struct {
   double n_eff_per_n, df_offset;
 } TfMeansStats;
 
-/* Prior on δ and the evidence against the null, for one (t, n_eff, df). */
-typedef struct {
-  TfPriorFamily prior;          /* cauchy or normal */
-  double r;
-  TfDirection direction;
-  gboolean interval;
-  double low, high;             /* interval null on δ */
-} TfDeltaPrior;
-
-void tf_delta_prior_from_analysis (const TfAnalysis *analysis, TfDeltaPrior *prior);
 
 /* ln BF01 of the analysis's hypotheses for the statistic t with n_eff and df; the
  * second form takes the posterior under the same prior (an interval null uses it). */
 double tf_means_log_bf01 (const TfDeltaPrior *prior, double t, double n_eff, double df);
-typedef struct TfDeltaPosterior TfDeltaPosterior;
 double tf_means_log_bf01_with (const TfDeltaPrior *prior, double t, double n_eff, double df,
                                TfDeltaPosterior *post);
 
@@ -71,27 +64,5 @@ gboolean tf_means_sample_size (const TfAnalysis *analysis, const TfMeansStats *s
                                TfEvidenceCurve *curve, char **why_not);
 gboolean tf_means_null_distribution (const TfAnalysis *analysis, const TfMeansStats *stats,
                                      TfNullDistribution *dist, char **why_not);
-
-/* The posterior of δ under the alternative (untruncated prior). */
-TfDeltaPosterior *tf_delta_posterior_new (const TfDeltaPrior *prior, double t, double n_eff,
-                                          double df);
-void tf_delta_posterior_free (TfDeltaPosterior *post);
-/* ln of the untruncated posterior mass on [a, b] (either may be infinite), and outside it. */
-double tf_delta_posterior_log_mass (TfDeltaPosterior *post, double a, double b);
-double tf_delta_posterior_log_mass_outside (TfDeltaPosterior *post, double a, double b);
-/* Posterior density at δ (normalised; from the table inside it) and its ln, and its mode. */
-double tf_delta_posterior_density (TfDeltaPosterior *post, double delta);
-double tf_delta_posterior_log_density (TfDeltaPosterior *post, double delta);
-double tf_delta_posterior_mode (TfDeltaPosterior *post);
-double tf_delta_posterior_width (TfDeltaPosterior *post);
-/* Quantile u of the posterior truncated to [a, b] (bulk-tabulated, ~1e-9), and the
- * highest-density interval of mass level on [a, b]. */
-double tf_delta_posterior_quantile (TfDeltaPosterior *post, double u, double a, double b);
-void tf_delta_posterior_hdi (TfDeltaPosterior *post, double level, double a, double b,
-                             double *lo, double *hi);
-/* ln prior density of δ and ln likelihood of δ (up to a constant). */
-double tf_delta_log_prior (const TfDeltaPrior *prior, double delta);
-double tf_delta_log_likelihood (double t, double n_eff, double df, double delta);
-G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfDeltaPosterior, tf_delta_posterior_free)
 
 G_END_DECLS
