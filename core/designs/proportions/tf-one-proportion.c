@@ -119,68 +119,6 @@ tf_one_proportion_validate (const TfAnalysis *analysis, GPtrArray *problems)
   validate_models (analysis, problems);
 }
 
-/* x − (x + y) θ computed without cancellation for whole k, n and real a, b:
- * (k − nθ) + (a − (a + b) θ). */
-static double
-count_minus_expected (double k, double n, double a, double b, double t, double u)
-{
-  return tf_incbeta_lambda (k, n - k, t, u) + tf_incbeta_lambda (a, b, t, u);
-}
-
-/* x1 y1 − x2 y2 with the rounding errors of both products recovered by fma
- * (Ogita, Rump & Oishi 2005, TwoProduct). */
-static double
-diff_of_products (double x1, double y1, double x2, double y2)
-{
-  double p1 = x1 * y1, p2 = x2 * y2;
-  return (p1 - p2) + (fma (x1, y1, -p1) - fma (x2, y2, -p2));
-}
-
-/* bd0(c + h, (s + n) θ) − bd0(c, s θ) for a prior shape c that outweighs its count h:
- * c ln(1 + e) + h ln((c + h) / (S θ)) − (h − n θ), e = (h s − n c) / (S c), s = c + other,
- * S = s + n,
- * free of the cancellation between two large deviances (Loader 2000, rearranged). */
-static double
-bd0_change (double c, double other, double h, double n, double theta, double dh, double dch)
-{
-  double S = c + other + n;
-  double e = diff_of_products (h, other, n - h, c) / (S * c);
-  double l = fabs (e) < 0.5 ? log1p (e) : log1p (h / c) - log1p (n / (c + other));
-  double r = dch / (S * theta);
-  double lr = fabs (r) < 0.5 ? log1p (r) : log ((c + h) / (S * theta));
-  return c * l + h * lr - dh;
-}
-
-/* ln BF01 for a point null against Beta(a, b), every ln Γ written by Stirling's formula
- * with its remainder so that it holds for huge counts and shapes (Loader 2000, deviance
- * form); where the prior outweighs the data (a + b >= n, or a shape >= its count), the
- * two deviances of that side are taken together so that a huge prior far from θ0 loses nothing either. */
-double
-tf_one_proportion_log_bf01 (double k, double n, double theta0, double a, double b)
-{
-  double t = theta0, u = 1.0 - theta0;
-  double P = k + a, Q = n - k + b, S = n + a + b, s = a + b;
-  double dP = count_minus_expected (k, n, a, b, t, u);   /* P − Sθ0 */
-  double da = tf_incbeta_lambda (a, b, t, u);             /* a − sθ0 */
-  double dk = tf_incbeta_lambda (k, n - k, t, u);         /* k − nθ0 */
-  double side_a, side_b;
-
-  if (s >= n || a >= k)
-    side_a = -bd0_change (a, b, k, n, t, dk, dP);
-  else
-    side_a = -tf_bd0_delta (P, S * t, dP) + tf_bd0_delta (a, s * t, da);
-  if (s >= n || b >= n - k)
-    side_b = -bd0_change (b, a, n - k, n, u, -dk, -dP);
-  else
-    side_b = -tf_bd0_delta (Q, S * u, -dP) + tf_bd0_delta (b, s * u, -da);
-
-  return side_a + side_b
-         + 0.5 * (log (P) + log (Q) + log (s) - log (S) - log (a) - log (b))
-         + tf_stirling_remainder (a) + tf_stirling_remainder (b)
-         - tf_stirling_remainder (s) - tf_stirling_remainder (P)
-         - tf_stirling_remainder (Q) + tf_stirling_remainder (S);
-}
-
 /* A quantile u of the posterior Beta(P, Q) truncated to θ > θ0 (greater), θ < θ0
  * (less), or not truncated (two-sided), through the log-space inverse. */
 static double
@@ -301,22 +239,16 @@ posterior_mode (double P, double Q, double cut, TfDirection side, double *mode)
   return TRUE;
 }
 
-void
-tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
+/* The classical tests of the null in its direction (t: their p-values and statistics),
+ * and for an interval null the equivalence test. */
+static void
+add_tests (const TfAnalysis *analysis, double L, double H, TfOneProportionTests *tests,
+           TfResults *results)
 {
   const double k = analysis->successes, n = analysis->trials;
-  const double a = analysis->prior_a, b = analysis->prior_b;
-  const double level = analysis->level, pi0 = analysis->prior_null;
-  const TfDirection dir = analysis->direction;
   const gboolean point = analysis->null_kind == TF_NULL_POINT;
-  const double P = k + a, Q = n - k + b;
-  double L, H;
   TfOneProportionTests t;
 
-  tf_one_proportion_null_ends (analysis, &L, &H);
-  tf_results_add (results, "estimate", _("Observed proportion"), TF_MEASURE_ESTIMATE, k / n);
-
-  /* Classical tests in the chosen direction. */
   null_tests (analysis, &t);
   add_p (results, "p_value", _("p-value (exact)"), t.lp_exact);
   add_p (results, "p_value_exact", _("Exact binomial p-value"), t.lp_exact);
@@ -336,8 +268,13 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
       add_p (results, "p_value_equivalence", _("Equivalence p-value (θ inside the interval)"),
              MAX (lp_up, lp_down));
     }
+  *tests = t;
+}
 
-  /* Intervals, always two-sided at level, whatever the direction of the test. */
+/* Intervals, always two-sided at level, whatever the direction of the test. */
+static void
+add_intervals (double k, double n, double level, TfResults *results)
+{
   double lo, hi;
   tf_binom_clopper_pearson (k, n, level, &lo, &hi);
   add_interval (results, "ci_low", _("Confidence interval, lower"),
@@ -355,14 +292,20 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
   add_interval (results, "agresti_coull_low", _("Agresti–Coull interval, lower"),
                 "agresti_coull_high", _("Agresti–Coull interval, upper"), lo, hi);
 
-  /* Bayes factors: the null (point or interval) against Beta(a, b) on the rest, or
-   * truncated to the side for a one-sided alternative. */
-  double lbf01 = tf_one_proportion_analysis_log_bf01 (analysis, k, n, a, b);
-  tf_results_add_bayes_factors (results, lbf01, pi0,
-                                _("the posterior or prior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
+}
 
-  /* The posterior under the alternative, truncated to its side when one-sided (above
-   * H, below L); for an interval null against both sides, the whole Beta posterior. */
+/* The posterior under the alternative, truncated to its side when one-sided (above H,
+ * below L); for an interval null against both sides, the whole Beta posterior. */
+static void
+add_posterior (const TfAnalysis *analysis, double L, double H, TfResults *results)
+{
+  const double k = analysis->successes, n = analysis->trials;
+  const double a = analysis->prior_a, b = analysis->prior_b;
+  const double level = analysis->level;
+  const TfDirection dir = analysis->direction;
+  const gboolean point = analysis->null_kind == TF_NULL_POINT;
+  const double P = k + a, Q = n - k + b;
+  double lo, hi;
   TfIncbetaShape post;
   tf_incbeta_shape_init (&post, P, Q);
   double cut = dir == TF_DIRECTION_LESS ? L : H;
@@ -409,6 +352,20 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
                         : _("Posterior probability that θ lies above the null interval"),
                   TF_MEASURE_POSTERIOR_PROBABILITY, exp (upper_at_h));
 
+}
+
+/* The bounds on the evidence and the Savage–Dickey check of bf01. */
+static void
+add_bounds (const TfAnalysis *analysis, double L, double H, const TfOneProportionTests *tests,
+            TfResults *results)
+{
+  const double k = analysis->successes, n = analysis->trials;
+  const double a = analysis->prior_a, b = analysis->prior_b;
+  const TfDirection dir = analysis->direction;
+  const gboolean point = analysis->null_kind == TF_NULL_POINT;
+  const double P = k + a, Q = n - k + b;
+  const TfOneProportionTests t = *tests;
+
   /* Bounds: −e p ln p (Sellke, Bayarri & Berger 2001) from ln p, and
    * L(θ0) / L(k/n) = exp(−G/2) (Edwards, Lindman & Savage 1963) at the null's end
    * nearer the data, 1 when k/n lies in the null or on its side of a one-sided test. */
@@ -425,7 +382,27 @@ tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
     tf_results_add_undefined (results, "savage_dickey_bf01", _("Savage–Dickey BF01"),
                               TF_MEASURE_BAYES_FACTOR,
                               _("the density ratio is reported for a point null against the two-sided alternative only"));
+}
 
+void
+tf_one_proportion_compute (const TfAnalysis *analysis, TfResults *results)
+{
+  const double k = analysis->successes, n = analysis->trials;
+  const double a = analysis->prior_a, b = analysis->prior_b;
+  double L, H;
+  TfOneProportionTests t;
+
+  tf_one_proportion_null_ends (analysis, &L, &H);
+  tf_results_add (results, "estimate", _("Observed proportion"), TF_MEASURE_ESTIMATE, k / n);
+  add_tests (analysis, L, H, &t, results);
+  add_intervals (k, n, analysis->level, results);
+  /* Bayes factors: the null (point or interval) against Beta(a, b) on the rest, or
+   * truncated to the side for a one-sided alternative. */
+  double lbf01 = tf_one_proportion_analysis_log_bf01 (analysis, k, n, a, b);
+  tf_results_add_bayes_factors (results, lbf01, analysis->prior_null,
+                                _("the posterior or prior mass of a hypothesis underflows, so the Bayes factor cannot be represented"));
+  add_posterior (analysis, L, H, results);
+  add_bounds (analysis, L, H, &t, results);
   tf_one_proportion_compute_models (analysis, results);
 }
 
