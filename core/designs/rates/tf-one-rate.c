@@ -8,7 +8,7 @@
  */
 #include "tf-one-rate.h"
 #include "tf-poisson.h"
-#include "tf-rates-curves.h"
+#include "tf-rates.h"
 #include "tf-evidence.h"
 #include "tf-logspace.h"
 #include "tf-normal-test.h"

@@ -8,6 +8,7 @@
 #include "tf-results.h"
 #include "tf-curves.h"
 #include "tf-design-class.h"
+#include "tf-rates.h"
 
 G_BEGIN_DECLS
 
@@ -26,6 +27,9 @@ gboolean tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistri
  * shape up to 10^12 and E, rate from 1e-6 to 10^12. k may be real. */
 double tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double shape,
                              double rate);
+
+/* ln BF01 in the analysis's hypotheses at a curve's point (TfRatesLogBf01). */
+double tf_one_rate_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint *at);
 
 /* The design's entry for tf_design_class(). */
 extern const TfDesignClass tf_one_rate_class;

@@ -14,7 +14,7 @@
  */
 #include "tf-two-rates.h"
 #include "tf-poisson.h"
-#include "tf-rates-curves.h"
+#include "tf-rates.h"
 #include "tf-binomial.h"
 #include "tf-incbeta.h"
 #include "tf-evidence.h"

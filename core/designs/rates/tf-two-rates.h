@@ -8,6 +8,7 @@
 #include "tf-results.h"
 #include "tf-curves.h"
 #include "tf-design-class.h"
+#include "tf-rates.h"
 
 G_BEGIN_DECLS
 
@@ -40,6 +41,9 @@ double tf_two_rates_log_bf01 (double ka, double ea, double kb, double eb, double
  * (sa, sb) (Johnson, Kotz & Balakrishnan 1995, §25.8). */
 double tf_two_rates_ratio_quantile_log (double log_p, double sa, double ra, double sb,
                                         double rb, gboolean lower);
+
+/* ln BF01 in the analysis's hypotheses at a curve's point (TfRatesLogBf01). */
+double tf_two_rates_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint *at);
 
 /* The design's entry for tf_design_class(). */
 extern const TfDesignClass tf_two_rates_class;
