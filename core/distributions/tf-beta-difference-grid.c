@@ -88,13 +88,6 @@ dens_log (const Dens *ds, double x)
   return isnan (l) ? -INFINITY : l;
 }
 
-static double
-beta_sd (double p, double q)
-{
-  double s = p + q;
-  return sqrt (p / s * (q / s) / (s + 1.0));
-}
-
 /* The nodes k h, k in [k0, k1] within [lim0, lim1] ∩ [0, K], where the density has
  * mass, scanned out from the mode (from the window's end nearest it; over the whole
  * window when both shapes are below 1). Fills vals[k − k0] with e^(ln f − max) and
@@ -117,7 +110,7 @@ mass_nodes (const Dens *ds, gint64 K, gint64 lim0, gint64 lim1, guint cap,
   /* more nodes in the window than allowed, and a mass wider than that: give up early
    * (a log-concave density falls by e^−34 within 36 standard deviations of its mode:
    * the exponential is the slowest) */
-  if ((guint64) (hi - lo) > cap && p >= 1.0 && q >= 1.0 && 72.0 * beta_sd (p, q) * K > cap)
+  if ((guint64) (hi - lo) > cap && p >= 1.0 && q >= 1.0 && 72.0 * tf_beta_sd (p, q) * K > cap)
     return NAN;
   gint64 start = CLAMP ((gint64) llround (mode * K), lo, hi);
   gint64 a = start, b = start;
@@ -298,7 +291,7 @@ spike (double pv, double qv, double po, double qo, gint64 sign, gint64 S, gint64
        double *out)
 {
   Dens dn;
-  double s = pv + qv, mean = pv / s, sd = beta_sd (pv, qv);
+  double s = pv + qv, mean = pv / s, sd = tf_beta_sd (pv, qv);
   double mu3 = 2.0 * (qv - pv) * sqrt (s + 1.0) / ((s + 2.0) * sqrt (pv * qv)) * sd * sd * sd;
 
   dens_init (&dn, po, qo);
@@ -346,9 +339,9 @@ tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n
     out[i] = NAN;
   if (S < 1)
     return FALSE;
-  if (beta_sd (pv, qv) < SPIKE * beta_sd (po, qo))
+  if (tf_beta_sd (pv, qv) < SPIKE * tf_beta_sd (po, qo))
     return spike (pv, qv, po, qo, sign, S, L, n, out);
-  double m_real = MAX (1.0, ceil (10.0 / ((double) S * beta_sd (pv, qv))));
+  double m_real = MAX (1.0, ceil (10.0 / ((double) S * tf_beta_sd (pv, qv))));
   if (!(m_real * S < 1e15))
     return FALSE;
   const gint64 m = (gint64) m_real, K = S * m;

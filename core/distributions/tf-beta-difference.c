@@ -36,17 +36,10 @@
 #define WALK_MAX 400            /* nodes each side of the peak at the first step */
 #define LEVELS 4                /* halvings of the step */
 
-static double
-beta_sd (double p, double q)
-{
-  double s = p + q;
-  return sqrt (p / s * (q / s) / (s + 1.0));
-}
-
 void
 tf_beta_diff_init (TfBetaDiff *bd, double pa, double qa, double pb, double qb)
 {
-  double sa = beta_sd (pa, qa), sb = beta_sd (pb, qb);
+  double sa = tf_beta_sd (pa, qa), sb = tf_beta_sd (pb, qb);
 
   bd->pa = pa;
   bd->qa = qa;
@@ -377,7 +370,7 @@ integrate_line (const TfBetaDiff *bd, gboolean over_a, double d, TfBdKind kind, 
     }
 
   /* start at V's mean on the line, with V's own width there */
-  double mv = ln.pv / (ln.pv + ln.qv), sv = beta_sd (ln.pv, ln.qv);
+  double mv = ln.pv / (ln.pv + ln.qv), sv = tf_beta_sd (ln.pv, ln.qv);
   double s0 = (mv - ln.cp) / ln.len;
   s0 = CLAMP (s0, 1e-12, 1.0 - 1e-12);
   double u0 = log (s0) - log1p (-s0);
@@ -457,7 +450,7 @@ tf_beta_diff_log_density (TfBetaDiff *bd, double d)
 static double
 beta_mu3 (double p, double q)
 {
-  double s = p + q, sd = beta_sd (p, q);
+  double s = p + q, sd = tf_beta_sd (p, q);
   return 2.0 * (q - p) * sqrt (s + 1.0) / ((s + 2.0) * sqrt (p * q)) * sd * sd * sd;
 }
 

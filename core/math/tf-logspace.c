@@ -12,7 +12,6 @@
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_sf_gamma.h>
 
-#define TF_LN_SQRT_2PI 0.918938533204672741780329736406 /* ½ ln 2π */
 
 /* Bernoulli-number coefficients B_2k / (2k (2k − 1)) of the Stirling series
  * (Abramowitz & Stegun 1964, 6.1.40). */
@@ -280,4 +279,11 @@ tf_log_dnbinom (double k, double shape, double p, double q)
   if (k == 0.0)
     return shape * (p <= q ? log (p) : log1p (-q));
   return log (shape) - log (shape + k) + tf_log_dbinom (shape, shape + k, p, q);
+}
+
+double
+tf_beta_sd (double p, double q)
+{
+  double s = p + q;
+  return sqrt (p / s * (q / s) / (s + 1.0));
 }

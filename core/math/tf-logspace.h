@@ -9,6 +9,7 @@ G_BEGIN_DECLS
 
 /* ln 2π. */
 #define TF_LN_2PI 1.83787706640934548356065947281
+#define TF_LN_SQRT_2PI 0.918938533204672741780329736406     /* ½ ln 2π */
 
 /* ln Γ(x) − [(x − ½) ln x − x + ½ ln 2π], x > 0: the Stirling remainder
  * (Loader 2000, "stirlerr", extended to real x). */
@@ -29,6 +30,10 @@ double tf_log_beta (double a, double b);
 
 /* ln of the Beta(a, b) density at x, with 1 − x given as y (Loader-style deviance). */
 double tf_log_dbeta (double x, double y, double a, double b);
+
+/* The SD of Beta(p, q): √(pq / (s²(s + 1))), s = p + q, as (p/s)(q/s)/(s + 1) so that
+ * huge shapes do not overflow (Johnson, Kotz & Balakrishnan 1995, §25.1). */
+double tf_beta_sd (double p, double q);
 
 /* ln of x^a e^−x / Γ(a + 1) for real a >= 0, x >= 0: the Poisson probability of a at
  * mean x, in Loader's saddle-point form. */

@@ -71,8 +71,8 @@ tf_model_from_string (const char *s, TfModel *model)
   return FALSE;
 }
 
-/* Counts are held as doubles with integer values: exact up to 2^53, which covers the
- * documented range n <= 10^12 with room to spare. */
+/* Counts are held as doubles with integer values: exact up to 2^53, which covers every
+ * limit below (TF_ANALYSIS_MAX_TRIALS) with room to spare. */
 typedef struct {
   TfDesign design;
   char *title;                  /* may be NULL */
@@ -154,6 +154,11 @@ void tf_sample_summarise (const double *x, guint n, double *count, double *mean,
 
 /* Appends a problem for each field every design shares that is wrong: PriorNull, Level. */
 void tf_analysis_validate_shared (const TfAnalysis *analysis, GPtrArray *problems);
+
+/* The limit on the number of trials validation accepts: Trials, TrialsA and TrialsB
+ * are whole numbers from 1 to 10^15 (the rates' event counts are limited alike,
+ * TF_RATES_MAX_COUNT; the means designs' sample sizes to 10^12). */
+#define TF_ANALYSIS_MAX_TRIALS 1e15
 
 /* The largest beta shape the proportions designs compute to full accuracy. */
 #define TF_ANALYSIS_MAX_BETA_SHAPE 1e15

@@ -4,6 +4,8 @@
  */
 #include "tf-curves.h"
 
+#include <math.h>
+
 void
 tf_density_curves_free (TfDensityCurves *curves)
 {
@@ -75,4 +77,11 @@ tf_model_probabilities_free (TfModelProbabilities *models)
   g_free (models->prior);
   g_free (models->posterior);
   g_free (models);
+}
+
+double
+tf_sensitivity_grid (guint i, guint n)
+{
+  return pow (10.0, TF_SENSITIVITY_LOG10_LOW
+                    + (TF_SENSITIVITY_LOG10_HIGH - TF_SENSITIVITY_LOG10_LOW) * i / (n - 1));
 }

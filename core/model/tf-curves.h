@@ -79,6 +79,12 @@ G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfEvidenceCurve, tf_evidence_curve_free)
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfNullDistribution, tf_null_distribution_free)
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (TfModelProbabilities, tf_model_probabilities_free)
 
+/* The grid of the sensitivity curves of the proportions and rates: the prior's
+ * concentration (a + b) or shape from 10^-2 to 10^4, log-spaced; point i of n. */
+#define TF_SENSITIVITY_LOG10_LOW -2.0
+#define TF_SENSITIVITY_LOG10_HIGH 4.0
+double tf_sensitivity_grid (guint i, guint n);
+
 /* For a design's null-distribution hook: allocates x, mass and in_tail for n points. */
 void tf_null_distribution_allocate (TfNullDistribution *dist, guint n);
 /* For a design's model-probabilities hook: allocates the arrays for n models. */

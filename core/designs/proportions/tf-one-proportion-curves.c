@@ -30,7 +30,7 @@ tf_one_proportion_sensitivity (const TfAnalysis *an, TfEvidenceCurve *curve,
 
   for (guint i = 0; i < curve->n; i++)
     {
-      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      double s = tf_sensitivity_grid (i, curve->n);
       curve->x[i] = s;
       curve->log_bf01[i] = tf_one_proportion_analysis_log_bf01 (an, an->successes, an->trials,
                                                                 s * mean, s * (1.0 - mean));

@@ -15,8 +15,6 @@
 #include <float.h>
 #include <glib/gi18n-lib.h>
 
-#define TF_MAX_TRIALS 1e15
-
 static gboolean
 is_whole (double v)
 {
@@ -71,7 +69,7 @@ void
 tf_one_proportion_validate (const TfAnalysis *analysis, GPtrArray *problems)
 {
   double n = analysis->trials, k = analysis->successes;
-  gboolean n_ok = is_whole (n) && n >= 1.0 && n <= TF_MAX_TRIALS;
+  gboolean n_ok = is_whole (n) && n >= 1.0 && n <= TF_ANALYSIS_MAX_TRIALS;
 
   if (!n_ok)
     g_ptr_array_add (problems,

@@ -314,7 +314,7 @@ tf_two_proportions_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *cur
 
   for (guint i = 0; i < curve->n; i++)
     {
-      double c = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      double c = tf_sensitivity_grid (i, curve->n);
       double l = tf_two_proportions_log_bf01_directed (an->successes_a, an->trials_a,
                                                        an->successes_b, an->trials_b,
                                                        c * mean, c * (1.0 - mean), an->direction);

@@ -32,7 +32,6 @@
 #include <gsl/gsl_errno.h>
 #include <gsl/gsl_integration.h>
 
-#define TF_LN_SQRT_2PI 0.918938533204672741780329736406
 #define TF_GH_NODES 40
 #define TF_GH_MIN_SD 30.0
 /* Beyond this 1/σ² underflows beside the curvature of a flat likelihood. */

@@ -26,8 +26,6 @@
 #include <glib/gi18n-lib.h>
 #include <gsl/gsl_cdf.h>
 
-#define TF_MAX_TRIALS 1e15
-
 static gboolean
 is_whole (double v)
 {
@@ -38,7 +36,7 @@ static void
 check_group (GPtrArray *problems, const char *k_key, const char *n_key, double k, double n,
              const char *group)
 {
-  gboolean n_ok = is_whole (n) && n >= 1.0 && n <= TF_MAX_TRIALS;
+  gboolean n_ok = is_whole (n) && n >= 1.0 && n <= TF_ANALYSIS_MAX_TRIALS;
 
   if (!n_ok)
     g_ptr_array_add (problems,

@@ -246,7 +246,7 @@ tf_rates_sensitivity_of (const TfAnalysis *analysis, TfEvidenceCurve *curve,
 
   for (guint i = 0; i < curve->n; i++)
     {
-      double s = pow (10.0, -2.0 + 6.0 * i / (curve->n - 1));
+      double s = tf_sensitivity_grid (i, curve->n);
       TfRatesPoint at = { s, s / mean, 1.0, NAN };
       curve->x[i] = s;
       curve->log_bf01[i] = log_bf01 (a, &at);
