@@ -187,23 +187,15 @@ add_ratio (TfResults *results, const char *id, const char *lo_id, const char *hi
   tf_results_add (results, hi_id, hi_label, TF_MEASURE_CONFIDENCE_LIMIT, exp (log_est + z * se));
 }
 
-void
-tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
+/* Fisher's exact test (Fisher 1935), the main p-value; returns its ln. */
+static double
+add_fisher (const TfAnalysis *an, TfResults *results)
 {
-  const TfAnalysis *an = analysis;
   const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
-  const double a = an->prior_a, b = an->prior_b, level = an->level, pi0 = an->prior_null;
   const TfDirection dir = an->direction;
-  const double N = na + nb, m = ka + kb;
-  const double D = tf_two_proportions_cross (ka, na, kb, nb);
-  const double z_level = gsl_cdf_ugaussian_Qinv (0.5 * (1.0 - level));
-  const char *flat = _("no successes, or no failures, in either group: the tests that divide by the pooled variance are not defined");
+  const double m = ka + kb;
   TfHyper h;
 
-  tf_results_add (results, "estimate", _("Difference of proportions θA − θB"), TF_MEASURE_ESTIMATE,
-                  D / na / nb);
-
-  /* Fisher's exact test (Fisher 1935), the main p-value. */
   tf_hyper_init (&h, na, nb, m);
   double lp_fisher = tf_fisher_log_p (&h, ka, dir);
   const char *fisher_label = dir == TF_DIRECTION_TWO_SIDED ? _("Fisher's exact p-value")
@@ -212,8 +204,20 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
   add_p (results, "p_value", _("p-value (Fisher's exact test)"), lp_fisher);
   add_p (results, "p_value_fisher", fisher_label, lp_fisher);
 
-  /* Pearson's χ² (Pearson 1900) with and without Yates' correction (Yates 1934),
-   * always two-sided; the pooled z and the signed root of G follow the direction. */
+  return lp_fisher;
+}
+
+/* Pearson's χ² (Pearson 1900) with and without Yates' correction (Yates 1934), always
+ * two-sided; the pooled z and the signed root of G follow the direction. Returns G / 2. */
+static double
+add_large_sample_tests (const TfAnalysis *an, TfResults *results)
+{
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const TfDirection dir = an->direction;
+  const double N = na + nb, m = ka + kb;
+  const double D = tf_two_proportions_cross (ka, na, kb, nb);
+  const char *flat = _("no successes, or no failures, in either group: the tests that divide by the pooled variance are not defined");
+
   double dev = 0.0;             /* G / 2 */
   if (m == 0.0 || m == N)
     {
@@ -258,9 +262,16 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
                                     : _("Likelihood-ratio test p-value (one-sided)"), lp_lr);
     }
 
-  /* The difference: Newcombe's hybrid score interval, also the main interval. */
+  return dev;
+}
+
+/* The difference: Newcombe's hybrid score interval, also the main interval. */
+static void
+add_difference_interval (const TfAnalysis *an, TfResults *results)
+{
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
   double dlo, dhi;
-  tf_two_proportions_newcombe (ka, na, kb, nb, level, &dlo, &dhi);
+  tf_two_proportions_newcombe (ka, na, kb, nb, an->level, &dlo, &dhi);
   tf_results_add (results, "ci_low", _("Confidence interval for θA − θB, lower (Newcombe)"),
                   TF_MEASURE_CONFIDENCE_LIMIT, dlo);
   tf_results_add (results, "ci_high", _("Confidence interval for θA − θB, upper (Newcombe)"),
@@ -270,50 +281,61 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
   tf_results_add (results, "diff_ci_high", _("Newcombe interval for θA − θB, upper"),
                   TF_MEASURE_CONFIDENCE_LIMIT, dhi);
 
-  /* Odds ratio, Woolf's log interval (Woolf 1955); 0.5 added to every cell when a
-   * cell is 0 (Haldane 1956). */
-  {
-    double c[4] = { ka, na - ka, kb, nb - kb };
-    gboolean zero = c[0] == 0.0 || c[1] == 0.0 || c[2] == 0.0 || c[3] == 0.0;
-    double add = zero ? 0.5 : 0.0;
-    for (int i = 0; i < 4; i++)
-      c[i] += add;
-    double lor = log (c[0]) + log (c[3]) - log (c[1]) - log (c[2]);
-    double se = sqrt (1.0 / c[0] + 1.0 / c[1] + 1.0 / c[2] + 1.0 / c[3]);
-    if (zero)
-      add_ratio (results, "odds_ratio", "or_ci_low", "or_ci_high",
-                 _("Odds ratio (0.5 added to every cell: a cell is 0)"),
-                 _("Odds ratio interval, lower (0.5 added to every cell)"),
-                 _("Odds ratio interval, upper (0.5 added to every cell)"), lor, se, z_level);
-    else
-      add_ratio (results, "odds_ratio", "or_ci_low", "or_ci_high", _("Odds ratio"),
-                 _("Odds ratio interval, lower (Woolf)"), _("Odds ratio interval, upper (Woolf)"),
-                 lor, se, z_level);
+}
 
-    /* Risk ratio θA/θB, the log interval of Katz et al. (1978); 0.5 added to every
-     * cell when a group has no successes. */
-    gboolean rzero = ka == 0.0 || kb == 0.0;
-    double ra = ka + (rzero ? 0.5 : 0.0), rb = kb + (rzero ? 0.5 : 0.0);
-    double fa = na - ka + (rzero ? 0.5 : 0.0), fb = nb - kb + (rzero ? 0.5 : 0.0);
-    double lrr = log (ra) - log (ra + fa) - log (rb) + log (rb + fb);
-    double rse = sqrt (fa / (ra * (ra + fa)) + fb / (rb * (rb + fb)));
-    if (rzero)
-      add_ratio (results, "risk_ratio", "rr_ci_low", "rr_ci_high",
-                 _("Risk ratio θA/θB (0.5 added to every cell: a group has no successes)"),
-                 _("Risk ratio interval, lower (0.5 added to every cell)"),
-                 _("Risk ratio interval, upper (0.5 added to every cell)"), lrr, rse, z_level);
-    else
-      add_ratio (results, "risk_ratio", "rr_ci_low", "rr_ci_high", _("Risk ratio θA/θB"),
-                 _("Risk ratio interval, lower (Katz)"), _("Risk ratio interval, upper (Katz)"),
-                 lrr, rse, z_level);
-  }
+/* Odds ratio, Woolf's log interval (Woolf 1955); 0.5 added to every cell when a cell is
+ * 0 (Haldane 1956). */
+static void
+add_ratios (const TfAnalysis *an, TfResults *results)
+{
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double z_level = gsl_cdf_ugaussian_Qinv (0.5 * (1.0 - an->level));
 
-  /* Bayes factors and the posterior of the difference under the alternative. */
-  TfBetaDiff bd;
-  double lg0, ls0;
-  tf_beta_diff_init (&bd, ka + a, na - ka + b, kb + a, nb - kb + b);
-  gboolean post_ok = tf_beta_diff_log_cdf (&bd, 0.0, &lg0, &ls0);
-  const char *why_int = _("the integral over the posterior of the difference did not converge");
+  double c[4] = { ka, na - ka, kb, nb - kb };
+  gboolean zero = c[0] == 0.0 || c[1] == 0.0 || c[2] == 0.0 || c[3] == 0.0;
+  double add = zero ? 0.5 : 0.0;
+  for (int i = 0; i < 4; i++)
+    c[i] += add;
+  double lor = log (c[0]) + log (c[3]) - log (c[1]) - log (c[2]);
+  double se = sqrt (1.0 / c[0] + 1.0 / c[1] + 1.0 / c[2] + 1.0 / c[3]);
+  if (zero)
+    add_ratio (results, "odds_ratio", "or_ci_low", "or_ci_high",
+               _("Odds ratio (0.5 added to every cell: a cell is 0)"),
+               _("Odds ratio interval, lower (0.5 added to every cell)"),
+               _("Odds ratio interval, upper (0.5 added to every cell)"), lor, se, z_level);
+  else
+    add_ratio (results, "odds_ratio", "or_ci_low", "or_ci_high", _("Odds ratio"),
+               _("Odds ratio interval, lower (Woolf)"), _("Odds ratio interval, upper (Woolf)"),
+               lor, se, z_level);
+
+  /* Risk ratio θA/θB, the log interval of Katz et al. (1978); 0.5 added to every
+   * cell when a group has no successes. */
+  gboolean rzero = ka == 0.0 || kb == 0.0;
+  double ra = ka + (rzero ? 0.5 : 0.0), rb = kb + (rzero ? 0.5 : 0.0);
+  double fa = na - ka + (rzero ? 0.5 : 0.0), fb = nb - kb + (rzero ? 0.5 : 0.0);
+  double lrr = log (ra) - log (ra + fa) - log (rb) + log (rb + fb);
+  double rse = sqrt (fa / (ra * (ra + fa)) + fb / (rb * (rb + fb)));
+  if (rzero)
+    add_ratio (results, "risk_ratio", "rr_ci_low", "rr_ci_high",
+               _("Risk ratio θA/θB (0.5 added to every cell: a group has no successes)"),
+               _("Risk ratio interval, lower (0.5 added to every cell)"),
+               _("Risk ratio interval, upper (0.5 added to every cell)"), lrr, rse, z_level);
+  else
+    add_ratio (results, "risk_ratio", "rr_ci_low", "rr_ci_high", _("Risk ratio θA/θB"),
+               _("Risk ratio interval, lower (Katz)"), _("Risk ratio interval, upper (Katz)"),
+               lrr, rse, z_level);
+}
+
+/* The Bayes factors, from the posterior of the difference under the alternative bd
+ * (ln P(θA − θB <= 0) lg0 and ln P(θA − θB >= 0) ls0 when post_ok). */
+static void
+add_bayes_factors (const TfAnalysis *analysis, gboolean post_ok, double lg0, double ls0,
+                   const char *why_int, TfResults *results)
+{
+  const TfAnalysis *an = analysis;
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double a = an->prior_a, b = an->prior_b, pi0 = an->prior_null;
+  const TfDirection dir = an->direction;
 
   double lbf01 = tf_two_proportions_log_bf01 (ka, na, kb, nb, a, b);
   if (dir != TF_DIRECTION_TWO_SIDED)
@@ -340,25 +362,32 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
                                 TF_MEASURE_POSTERIOR_PROBABILITY, why);
     }
   tf_two_proportions_add_log_or_bf (analysis, results);
+}
 
-  /* Equal-tailed credible interval for θA − θB, truncated to the side of a one-sided
-   * alternative. */
+/* Equal-tailed credible interval for θA − θB, truncated to the side of a one-sided
+ * alternative, and P(θA > θB) under the untruncated posterior. */
+static void
+add_credible (const TfAnalysis *an, TfBetaDiff *bd, gboolean post_ok, double lg0, double ls0,
+              const char *why_int, TfResults *results)
+{
+  const TfDirection dir = an->direction;
+  const double level = an->level;
   double alpha2 = 0.5 * (1.0 - level), clo = NAN, chi = NAN;
   if (post_ok)
     switch (dir)
       {
       case TF_DIRECTION_GREATER:
-        clo = tf_beta_diff_quantile_log (&bd, log1p (-alpha2) + ls0, FALSE);
-        chi = tf_beta_diff_quantile_log (&bd, log (alpha2) + ls0, FALSE);
+        clo = tf_beta_diff_quantile_log (bd, log1p (-alpha2) + ls0, FALSE);
+        chi = tf_beta_diff_quantile_log (bd, log (alpha2) + ls0, FALSE);
         break;
       case TF_DIRECTION_LESS:
-        clo = tf_beta_diff_quantile_log (&bd, log (alpha2) + lg0, TRUE);
-        chi = tf_beta_diff_quantile_log (&bd, log1p (-alpha2) + lg0, TRUE);
+        clo = tf_beta_diff_quantile_log (bd, log (alpha2) + lg0, TRUE);
+        chi = tf_beta_diff_quantile_log (bd, log1p (-alpha2) + lg0, TRUE);
         break;
       case TF_DIRECTION_TWO_SIDED:
       default:
-        clo = tf_beta_diff_quantile_log (&bd, log (alpha2), TRUE);
-        chi = tf_beta_diff_quantile_log (&bd, log (alpha2), FALSE);
+        clo = tf_beta_diff_quantile_log (bd, log (alpha2), TRUE);
+        chi = tf_beta_diff_quantile_log (bd, log (alpha2), FALSE);
         break;
       }
   if (isfinite (clo) && isfinite (chi))
@@ -383,8 +412,17 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
     tf_results_add_undefined (results, "prob_greater", _("Posterior probability that θA > θB"),
                               TF_MEASURE_POSTERIOR_PROBABILITY, why_int);
 
-  /* Bounds: −e p ln p (Sellke, Bayarri & Berger 2001) from Fisher's p, and the
-   * likelihood ratio at its maximum, exp(−G/2) (Edwards, Lindman & Savage 1963). */
+}
+
+/* Bounds: −e p ln p (Sellke, Bayarri & Berger 2001) from Fisher's p, and the likelihood
+ * ratio at its maximum, exp(−G/2) (Edwards, Lindman & Savage 1963). */
+static void
+add_bounds (const TfAnalysis *an, double lp_fisher, double dev, TfResults *results)
+{
+  const TfDirection dir = an->direction;
+  const double D = tf_two_proportions_cross (an->successes_a, an->trials_a, an->successes_b,
+                                             an->trials_b);
+
   if (lp_fisher >= -1.0)
     tf_results_add (results, "min_bf01", _("Smallest BF01 from the p-value"), TF_MEASURE_BOUND, 1.0);
   else
@@ -406,4 +444,30 @@ tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
     tf_results_add_undefined (results, "min_bf01_lr", _("Smallest BF01 over all priors"),
                               TF_MEASURE_BOUND,
                               _("the likelihood ratio is so small that it underflows to 0"));
+}
+
+void
+tf_two_proportions_compute (const TfAnalysis *analysis, TfResults *results)
+{
+  const TfAnalysis *an = analysis;
+  const double ka = an->successes_a, na = an->trials_a, kb = an->successes_b, nb = an->trials_b;
+  const double a = an->prior_a, b = an->prior_b;
+  const double D = tf_two_proportions_cross (ka, na, kb, nb);
+
+  tf_results_add (results, "estimate", _("Difference of proportions θA − θB"), TF_MEASURE_ESTIMATE,
+                  D / na / nb);
+  double lp_fisher = add_fisher (an, results);
+  double dev = add_large_sample_tests (an, results);
+  add_difference_interval (an, results);
+  add_ratios (an, results);
+
+  /* Bayes factors and the posterior of the difference under the alternative. */
+  TfBetaDiff bd;
+  double lg0, ls0;
+  tf_beta_diff_init (&bd, ka + a, na - ka + b, kb + a, nb - kb + b);
+  gboolean post_ok = tf_beta_diff_log_cdf (&bd, 0.0, &lg0, &ls0);
+  const char *why_int = _("the integral over the posterior of the difference did not converge");
+  add_bayes_factors (an, post_ok, lg0, ls0, why_int, results);
+  add_credible (an, &bd, post_ok, lg0, ls0, why_int, results);
+  add_bounds (an, lp_fisher, dev, results);
 }
