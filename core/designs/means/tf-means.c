@@ -184,42 +184,12 @@ add_bf (TfResults *results, const char *id, const char *label, double lbf)
                               _("the Bayes factor is too large or too small to be represented"));
 }
 
-void
-tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *results)
+/* Effect size: Cohen's d = t / √n_eff; Hedges's g = J(ν) d with
+ * J(ν) = Γ(ν/2) / (√(ν/2) Γ((ν − 1)/2)) (Hedges 1981); the interval of δ at level
+ * 1 − 2 alpha2. */
+static void
+add_effect_size (const TfMeansStats *s, double alpha2, TfResults *results)
 {
-  const double level = analysis->level, alpha2 = 0.5 * (1.0 - level);
-  const TfDirection dir = analysis->direction;
-  TfDeltaPrior prior;
-  double p_value = tf_means_p_value (s->t, s->df, dir);
-
-  tf_delta_prior_from_analysis (analysis, &prior);
-  tf_results_add (results, "estimate", s->two_samples || analysis->design == TF_DESIGN_PAIRED_MEANS
-                  ? _("Observed difference") : _("Observed mean"),
-                  TF_MEASURE_ESTIMATE, s->estimate);
-  double q = quantile_upper (alpha2, s->df);
-  tf_results_add (results, "ci_low", _("Confidence interval, lower"), TF_MEASURE_CONFIDENCE_LIMIT,
-                  s->estimate - q * s->se);
-  tf_results_add (results, "ci_high", _("Confidence interval, upper"), TF_MEASURE_CONFIDENCE_LIMIT,
-                  s->estimate + q * s->se);
-  if (s->known_sd)
-    tf_results_add (results, "z", _("z statistic"), TF_MEASURE_STATISTIC, s->t);
-  else
-    {
-      tf_results_add (results, "t", _("t statistic"), TF_MEASURE_STATISTIC, s->t);
-      tf_results_add (results, "df", _("Degrees of freedom"), TF_MEASURE_STATISTIC, s->df);
-    }
-  tf_results_add (results, "p_value", s->known_sd ? _("p-value (z test)") : _("p-value (t test)"),
-                  TF_MEASURE_TAIL_PROBABILITY, p_value);
-  if (s->two_samples)
-    {
-      tf_results_add (results, "p_value_student", _("p-value (Student)"),
-                      TF_MEASURE_TAIL_PROBABILITY, s->p_student);
-      tf_results_add (results, "p_value_welch", _("p-value (Welch)"),
-                      TF_MEASURE_TAIL_PROBABILITY, s->p_welch);
-    }
-
-  /* Effect size: Cohen's d = t / √n_eff; Hedges's g = J(ν) d with
-   * J(ν) = Γ(ν/2) / (√(ν/2) Γ((ν − 1)/2)) (Hedges 1981). */
   double d = s->t_delta / sqrt (s->n_eff);
   tf_results_add (results, "effect_size", _("Cohen's d"), TF_MEASURE_ESTIMATE, d);
   if (s->known_sd)
@@ -259,6 +229,43 @@ tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *
                   TF_MEASURE_CONFIDENCE_LIMIT, lam_lo / sqrt (s->n_eff));
   tf_results_add (results, "effect_ci_high", _("Effect size interval, upper"),
                   TF_MEASURE_CONFIDENCE_LIMIT, lam_hi / sqrt (s->n_eff));
+}
+
+void
+tf_means_compute (const TfAnalysis *analysis, const TfMeansStats *s, TfResults *results)
+{
+  const double level = analysis->level, alpha2 = 0.5 * (1.0 - level);
+  const TfDirection dir = analysis->direction;
+  TfDeltaPrior prior;
+  double p_value = tf_means_p_value (s->t, s->df, dir);
+
+  tf_delta_prior_from_analysis (analysis, &prior);
+  tf_results_add (results, "estimate", s->two_samples || analysis->design == TF_DESIGN_PAIRED_MEANS
+                  ? _("Observed difference") : _("Observed mean"),
+                  TF_MEASURE_ESTIMATE, s->estimate);
+  double q = quantile_upper (alpha2, s->df);
+  tf_results_add (results, "ci_low", _("Confidence interval, lower"), TF_MEASURE_CONFIDENCE_LIMIT,
+                  s->estimate - q * s->se);
+  tf_results_add (results, "ci_high", _("Confidence interval, upper"), TF_MEASURE_CONFIDENCE_LIMIT,
+                  s->estimate + q * s->se);
+  if (s->known_sd)
+    tf_results_add (results, "z", _("z statistic"), TF_MEASURE_STATISTIC, s->t);
+  else
+    {
+      tf_results_add (results, "t", _("t statistic"), TF_MEASURE_STATISTIC, s->t);
+      tf_results_add (results, "df", _("Degrees of freedom"), TF_MEASURE_STATISTIC, s->df);
+    }
+  tf_results_add (results, "p_value", s->known_sd ? _("p-value (z test)") : _("p-value (t test)"),
+                  TF_MEASURE_TAIL_PROBABILITY, p_value);
+  if (s->two_samples)
+    {
+      tf_results_add (results, "p_value_student", _("p-value (Student)"),
+                      TF_MEASURE_TAIL_PROBABILITY, s->p_student);
+      tf_results_add (results, "p_value_welch", _("p-value (Welch)"),
+                      TF_MEASURE_TAIL_PROBABILITY, s->p_welch);
+    }
+
+  add_effect_size (s, alpha2, results);
 
   /* Bayes factors on δ; the posterior of δ under the alternative (untruncated prior) */
   g_autoptr (TfDeltaPosterior) post = tf_delta_posterior_new (&prior, s->t_delta, s->n_eff,
