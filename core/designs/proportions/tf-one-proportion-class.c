@@ -4,6 +4,7 @@
  */
 #include "tf-one-proportion.h"
 #include "tf-one-proportion-private.h"
+#include "tf-logspace.h"
 #include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
@@ -43,13 +44,6 @@ data_words (const TfAnalysis *a)
 #define PRECISE_NULL 0.1
 #define DIFFUSE_PRIOR 10.0
 
-static double
-beta_sd (double a, double b)
-{
-  double s = a + b;
-  return sqrt (a * b / (s * s * (s + 1.0)));
-}
-
 /* Lindley's paradox (Lindley 1957) and its kin: large n, small effect, precise null,
  * diffuse prior. */
 static guint
@@ -60,8 +54,8 @@ disagreement_conditions (const TfAnalysis *an, GString *text)
   double H = an->null_kind == TF_NULL_POINT ? an->null_value : an->null_high;
   double est = k / n;
   double effect = est < L ? L - est : est > H ? est - H : 0.0;
-  double prior_sd = beta_sd (an->prior_a, an->prior_b);
-  double post_sd = beta_sd (k + an->prior_a, n - k + an->prior_b);
+  double prior_sd = tf_beta_sd (an->prior_a, an->prior_b);
+  double post_sd = tf_beta_sd (k + an->prior_a, n - k + an->prior_b);
   guint held = 0;
 
   if (n >= LARGE_N)
