@@ -1,7 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
  * tf-form-field.h: a field of a design's form. Each design's class lists its fields
  * (TfDesignClass.fields); the form widget builds the same kind of row for each. A field
- * is named by its group and key in the analysis file (DESIGN.md), so that a TfProblem
+ * is named by its group and key in the analysis file (DEVELOPERS.md), so that a TfProblem
  * finds the field it is about.
  */
 #pragma once

@@ -1,5 +1,5 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-analysis-file.c: reading and writing *.twofold analysis files (DESIGN.md).
+ * tf-analysis-file.c: reading and writing *.twofold analysis files (DEVELOPERS.md).
  */
 #include "tf-analysis-file-private.h"
 
@@ -260,7 +260,7 @@ tf_analysis_to_key_file (const TfAnalysis *a)
 {
   GKeyFile *key_file = g_key_file_new ();
 
-  /* The groups come first in the order of DESIGN.md, then whatever else the source had. */
+  /* The groups come first in the order of DEVELOPERS.md, then whatever else the source had. */
   g_key_file_set_integer (key_file, "Analysis", "Format", TF_ANALYSIS_FORMAT);
   g_key_file_set_value (key_file, "Analysis", "Design", tf_design_to_string (a->design));
   if (a->title)

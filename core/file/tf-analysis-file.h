@@ -1,5 +1,5 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * tf-analysis-file.h: the *.twofold analysis file (a GLib key file, see DESIGN.md).
+ * tf-analysis-file.h: the *.twofold analysis file (a GLib key file, see DEVELOPERS.md).
  */
 #pragma once
 

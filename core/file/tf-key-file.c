@@ -67,7 +67,7 @@ tf_reader_number (TfReader *r, const char *group, const char *key, gboolean requ
   return value;
 }
 
-/* A list of numbers separated by ';' (DESIGN.md), each item checked like a number. */
+/* A list of numbers separated by ';' (DEVELOPERS.md), each item checked like a number. */
 GArray *
 tf_reader_list (TfReader *r, const char *group, const char *key)
 {

@@ -28,7 +28,7 @@ typedef enum {
 } TfMeasure;
 
 typedef struct {
-  char *id;                     /* as in DESIGN.md: "p_value", "bf01", ... */
+  char *id;                     /* as in DEVELOPERS.md: "p_value", "bf01", ... */
   char *label;                  /* translated, short */
   double value;                 /* finite when status is OK; 0 otherwise */
   TfStatus status;
@@ -75,7 +75,7 @@ char *tf_format_value (double value, TfMeasure measure);
 /* Locale-independent shortest round-trip form of a double ("0.5", "1e+12"). */
 char *tf_format_double (double value);
 
-/* JSON of DESIGN.md: {"format":1,"design":...,"results":{...},"numbers":[...],"problems":[...]};
+/* JSON of DEVELOPERS.md: {"format":1,"design":...,"results":{...},"numbers":[...],"problems":[...]};
  * design_name is the file's word for the design, title may be NULL. */
 char *tf_results_to_json (const char *design_name, const char *title, const TfResults *results,
                           GPtrArray *problems);

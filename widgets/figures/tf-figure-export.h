@@ -39,7 +39,7 @@ gboolean tf_figure_format_from_filename (const char *filename, TfFigureFormat *f
 cairo_status_t tf_figure_append_bytes (void *closure, const unsigned char *data,
                                        unsigned int length);
 
-/* The figure kinds of DESIGN.md, and whether this version draws one. */
+/* The figure kinds of DEVELOPERS.md, and whether this version draws one. */
 gboolean tf_figure_kind_is_known (const char *kind);
 
 /* Draws the figure and writes it atomically (a temporary file renamed over the target):

@@ -29,7 +29,7 @@ typedef enum {
   TF_EVIDENCE_SCALE_NONE
 } TfEvidenceScale;
 
-/* The figure kinds of DESIGN.md, in that order. */
+/* The figure kinds of DEVELOPERS.md, in that order. */
 typedef enum {
   TF_FIGURE_DENSITIES,
   TF_FIGURE_SENSITIVITY,

@@ -9,7 +9,7 @@
  * alternative, ρ rA / rB is beta-prime, so its intervals and tails are incomplete betas.
  *
  * [Null] Value is the null ratio. Its default, 0, cannot be a ratio: it is read as
- * "no difference", ρ0 = 1 (DESIGN.md: two-sample nulls are A = B unless Value says
+ * "no difference", ρ0 = 1 (DEVELOPERS.md: two-sample nulls are A = B unless Value says
  * otherwise).
  */
 #include "tf-two-rates.h"
