@@ -4,13 +4,11 @@
  * (closing, or opening another analysis over them). Export Figure… is in
  * tf-window-figure.c, Export Report… in tf-window-report.c.
  */
-#include <string.h>
 #include <glib/gi18n.h>
 #include "tf-window-actions.h"
-#include "tf-window-report.h"
-#include "tf-window-figure.h"
+#include "tf-window-document.h"
+#include "tf-window-files.h"
 #include "tf-analysis-file.h"
-#include "tf-figure-export.h"
 
 #define FILE_SUFFIX ".twofold"
 
@@ -26,116 +24,13 @@ twofold_filter_new (void)
 }
 
 static void
-chooser_set_folder (TfWindow *self, GtkFileChooser *chooser)
-{
-  g_autofree char *folder = NULL;
-
-  if (self->file)
-    {
-      g_autoptr (GFile) parent = g_file_get_parent (self->file);
-      if (parent)
-        gtk_file_chooser_set_current_folder (chooser, parent, NULL);
-      return;
-    }
-  if (self->settings)
-    folder = g_settings_get_string (self->settings, "last-folder");
-  if (folder && *folder)
-    {
-      g_autoptr (GFile) dir = g_file_new_for_path (folder);
-      gtk_file_chooser_set_current_folder (chooser, dir, NULL);
-    }
-}
-
-/* A file chooser of the window (one at a time: FALSE when one is already shown), opening
- * in the analysis's folder or the last one used, with the filter and, for a save, the
- * suggested name; response gets the window. */
-gboolean
-tf_window_chooser_show (TfWindow *self, GtkFileChooserAction action, const char *title,
-                        const char *accept, GtkFileFilter *filter, const char *name,
-                        GCallback response)
-{
-  if (self->chooser)
-    return FALSE;
-  self->chooser = gtk_file_chooser_native_new (title, GTK_WINDOW (self), action, accept,
-                                               _("_Cancel"));
-  gtk_native_dialog_set_modal (GTK_NATIVE_DIALOG (self->chooser), TRUE);
-  gtk_file_chooser_add_filter (GTK_FILE_CHOOSER (self->chooser), filter);
-  chooser_set_folder (self, GTK_FILE_CHOOSER (self->chooser));
-  if (name)
-    gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (self->chooser), name);
-  g_signal_connect (self->chooser, "response", response, self);
-  gtk_native_dialog_show (GTK_NATIVE_DIALOG (self->chooser));
-  return TRUE;
-}
-
-/* What Export Figure… and Export Report… share: a file on this computer and an analysis
- * that computes, else a dialog that names the file and says why; then write, then a
- * toast, or the writer's error in the dialog. */
-gboolean
-tf_window_export_to (TfWindow *self, GFile *file, TfWindowWriter write, gconstpointer data)
-{
-  g_autoptr (GError) error = NULL;
-  g_autofree char *path = NULL;
-  g_autofree char *name = NULL;
-  g_autofree char *heading = NULL;
-
-  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
-  g_return_val_if_fail (G_IS_FILE (file), FALSE);
-
-  path = g_file_get_path (file);
-  name = tf_window_file_display_name (file);
-  /* TRANSLATORS: heading of the dialog when a figure or report could not be written */
-  heading = g_strdup_printf (_("Could Not Export “%s”"), name);
-  if (path == NULL)
-    {
-      tf_window_show_error (self, heading, _("Only files on this computer can be written."));
-      return FALSE;
-    }
-  if (self->results == NULL)
-    {
-      tf_window_show_error (self, heading,
-                            _("The analysis has a field that needs fixing, marked in the form. Fix it, then export again."));
-      return FALSE;
-    }
-  if (!write (self, path, data, &error))
-    {
-      tf_window_show_error (self, heading, error->message);
-      return FALSE;
-    }
-  tf_window_remember_folder (self, file);
-  {
-    g_autofree char *basename = g_file_get_basename (file);
-    g_autofree char *message = g_strdup_printf (_("Exported “%s”"), basename);
-
-    adw_toast_overlay_add_toast (self->toast_overlay, adw_toast_new (message));
-  }
-  return TRUE;
-}
-
-/* file, or when its name has no ending at all, the same name with suffix added. */
-GFile *
-tf_window_file_with_suffix (GFile *file, const char *suffix)
-{
-  g_autofree char *basename = g_file_get_basename (file);
-
-  if (basename && strchr (basename, '.') == NULL)
-    {
-      g_autofree char *with_suffix = g_strconcat (basename, suffix, NULL);
-      g_autoptr (GFile) parent = g_file_get_parent (file);
-
-      return g_file_get_child (parent, with_suffix);
-    }
-  return g_object_ref (file);
-}
-
-static void
 on_open_response (GtkNativeDialog *dialog, int response, TfWindow *self)
 {
   if (response == GTK_RESPONSE_ACCEPT)
     {
       g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
       if (file)
-        tf_window_open_file (self, file);
+        tf_window_document_open (self, file);
     }
   g_clear_object (&self->chooser);
 }
@@ -152,7 +47,7 @@ show_open_chooser (TfWindow *self)
 static void
 open_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
 {
-  TfWindow *self = TF_WINDOW (widget);
+  TfWindow *self = (TfWindow *) widget;    /* the action is the window class's */
 
   if (self->chooser)
     return;
@@ -186,7 +81,7 @@ save_to (TfWindow *self, GFile *file)
   g_set_object (&self->file, file);
   self->is_demo = FALSE;
   self->modified = FALSE;
-  tf_window_update_title (self);
+  tf_window_document_update_title (self);
   {
     g_autofree char *message = g_strdup_printf (_("Saved “%s”"), basename);
     adw_toast_overlay_add_toast (self->toast_overlay, adw_toast_new (message));
@@ -243,31 +138,10 @@ on_save_response (GtkNativeDialog *dialog, int response, TfWindow *self)
   continue_pending (self, saved);
 }
 
-/* The name a save dialog suggests: the analysis's file name without its ending (or the
- * demo's, or "analysis"), then tail: ".twofold", "-densities.png", "-report.pdf". */
-char *
-tf_window_suggested_name (TfWindow *self, const char *tail)
-{
-  g_autofree char *stem = NULL;
-
-  if (self->file)
-    {
-      char *dot;
-
-      stem = g_file_get_basename (self->file);
-      dot = strrchr (stem, '.');
-      if (dot && dot != stem)
-        *dot = '\0';
-    }
-  else
-    stem = g_strdup (self->is_demo ? "seed-germination" : _("analysis"));
-  return g_strconcat (stem, tail, NULL);
-}
-
 static void
 save_as_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
 {
-  TfWindow *self = TF_WINDOW (widget);
+  TfWindow *self = (TfWindow *) widget;    /* the action is the window class's */
   g_autoptr (GtkFileFilter) filter = twofold_filter_new ();
   g_autofree char *name = tf_window_suggested_name (self, FILE_SUFFIX);
 
@@ -279,7 +153,7 @@ save_as_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
 static void
 save_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
 {
-  TfWindow *self = TF_WINDOW (widget);
+  TfWindow *self = (TfWindow *) widget;    /* the action is the window class's */
 
   if (self->file == NULL)
     save_as_action (widget, "win.save-as", NULL);
@@ -357,20 +231,6 @@ tf_window_ask_save_changes (TfWindow *self, TfPendingAction then)
   gtk_window_present (GTK_WINDOW (dialog));
 }
 
-
-void
-tf_window_actions_update (TfWindow *self)
-{
-  tf_window_figure_update (self);
-  tf_window_report_update (self);
-}
-
-static void
-on_plot_kind_changed (TfPlotView *view, GParamSpec *pspec, TfWindow *self)
-{
-  tf_window_actions_update (self);
-}
-
 /* GObject */
 
 void
@@ -379,15 +239,6 @@ tf_window_actions_class_init (GtkWidgetClass *widget_class)
   gtk_widget_class_install_action (widget_class, "win.open", NULL, open_action);
   gtk_widget_class_install_action (widget_class, "win.save", NULL, save_action);
   gtk_widget_class_install_action (widget_class, "win.save-as", NULL, save_as_action);
-  tf_window_figure_class_init (widget_class);
-  tf_window_report_class_init (widget_class);
-}
-
-void
-tf_window_actions_init (TfWindow *self)
-{
-  tf_window_figure_init (self);
-  g_signal_connect (self->plot_view, "notify::kind", G_CALLBACK (on_plot_kind_changed), self);
 }
 
 void
@@ -399,11 +250,5 @@ tf_window_actions_dispose (TfWindow *self)
 
       g_signal_handlers_disconnect_by_func (dialog, on_save_changes_response, self);
       gtk_window_destroy (GTK_WINDOW (dialog));
-    }
-  tf_window_figure_dispose (self);
-  if (self->chooser)
-    {
-      gtk_native_dialog_destroy (GTK_NATIVE_DIALOG (self->chooser));
-      g_clear_object (&self->chooser);
     }
 }

@@ -6,7 +6,7 @@
 #include <string.h>
 #include <glib/gi18n.h>
 #include "tf-window-figure.h"
-#include "tf-window-actions.h"
+#include "tf-window-files.h"
 #include "tf-figure-export.h"
 
 static GtkFileFilter *
@@ -47,7 +47,7 @@ write_figure (TfWindow *self, const char *path, gconstpointer data, GError **err
 }
 
 gboolean
-tf_window_export_figure (TfWindow *self, GFile *file, double width_mm, double height_mm,
+tf_window_figure_export (TfWindow *self, GFile *file, double width_mm, double height_mm,
                          double dpi, const TfFigureOptions *options)
 {
   TfFigureSize size = { width_mm, height_mm, dpi, options };
@@ -128,13 +128,13 @@ on_export_response (AdwMessageDialog *dialog, const char *response, TfWindow *se
   gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
   gtk_window_destroy (GTK_WINDOW (dialog));
   if (g_strcmp0 (response, "export") == 0 && file)
-    tf_window_export_figure (self, file, self->export_width_mm, self->export_height_mm,
+    tf_window_figure_export (self, file, self->export_width_mm, self->export_height_mm,
                              self->export_dpi, &self->export_options);
 }
 
 /* The figure's size, resolution and style, for file, in a dialog. */
 void
-tf_window_show_export_options (TfWindow *self, GFile *file)
+tf_window_figure_show_options (TfWindow *self, GFile *file)
 {
   static const char *const styles[] = { N_("Light"), N_("Dark"), N_("Print (greyscale)"), NULL };
   static const char *const scales[] = { N_("Kass and Raftery (1995)"), N_("Jeffreys (1961)"),
@@ -145,7 +145,6 @@ tf_window_show_export_options (TfWindow *self, GFile *file)
   TfFigureFormat format = TF_FIGURE_FORMAT_PNG;
   GtkWidget *dialog, *grid, *width, *height, *dpi, *style, *scale;
 
-  g_return_if_fail (TF_IS_WINDOW (self));
   if (self->export_dialog)
     gtk_window_destroy (GTK_WINDOW (g_steal_pointer (&self->export_dialog)));
   for (guint i = 0; i < G_N_ELEMENTS (styles); i++)
@@ -195,13 +194,6 @@ tf_window_show_export_options (TfWindow *self, GFile *file)
   gtk_window_present (GTK_WINDOW (dialog));
 }
 
-AdwMessageDialog *
-tf_window_get_export_dialog (TfWindow *self)
-{
-  g_return_val_if_fail (TF_IS_WINDOW (self), NULL);
-  return self->export_dialog;
-}
-
 static void
 on_export_chooser_response (GtkNativeDialog *dialog, int response, TfWindow *self)
 {
@@ -216,14 +208,14 @@ on_export_chooser_response (GtkNativeDialog *dialog, int response, TfWindow *sel
     /* a name with no ending at all is a PNG; any other ending is checked on export */
     g_autoptr (GFile) named = tf_window_file_with_suffix (file, ".png");
 
-    tf_window_show_export_options (self, named);
+    tf_window_figure_show_options (self, named);
   }
 }
 
 static void
 export_figure_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
 {
-  TfWindow *self = TF_WINDOW (widget);
+  TfWindow *self = (TfWindow *) widget;    /* the action is the window class's */
   g_autoptr (GtkFileFilter) filter = figure_filter_new ();
   g_autofree char *name = suggested_figure_name (self);
 
@@ -239,19 +231,18 @@ tf_window_figure_update (TfWindow *self)
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.export-figure", self->export_enabled);
 }
 
-gboolean
-tf_window_get_export_enabled (TfWindow *self)
-{
-  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
-  return self->export_enabled;
-}
-
 void
 tf_window_figure_class_init (GtkWidgetClass *widget_class)
 {
   gtk_widget_class_install_action (widget_class, "win.export-figure", NULL, export_figure_action);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_e, GDK_CONTROL_MASK,
                                        "win.export-figure", NULL);
+}
+
+static void
+on_plot_kind_changed (TfPlotView *view, GParamSpec *pspec, TfWindow *self)
+{
+  tf_window_figure_update (self);
 }
 
 void
@@ -263,6 +254,7 @@ tf_window_figure_init (TfWindow *self)
   self->export_height_mm = TF_FIGURE_DEFAULT_HEIGHT_MM;
   self->export_dpi = TF_FIGURE_DEFAULT_DPI;
   self->export_options = options;
+  g_signal_connect (self->plot_view, "notify::kind", G_CALLBACK (on_plot_kind_changed), self);
 }
 
 void

@@ -40,4 +40,11 @@ gboolean tf_window_get_export_enabled (TfWindow *self);
 gboolean tf_window_export_figure (TfWindow *self, GFile *file, double width_mm,
                                   double height_mm, double dpi, const TfFigureOptions *options);
 
+/* What Export Report…'s save dialog does: writes the report of the analysis shown to file
+ * (PDF, HTML or Markdown by its ending; a name with no ending gets ".pdf"), says so in a
+ * toast, or on failure says why in a dialog naming the file and returns FALSE. */
+gboolean tf_window_export_report (TfWindow *self, GFile *file);
+/* Whether win.export-report is enabled (the analysis can be computed). */
+gboolean tf_window_get_export_report_enabled (TfWindow *self);
+
 G_END_DECLS

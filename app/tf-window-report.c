@@ -5,7 +5,7 @@
 #include <string.h>
 #include <glib/gi18n.h>
 #include "tf-window-report.h"
-#include "tf-window-actions.h"
+#include "tf-window-files.h"
 #include "tf-report-render.h"
 
 static GtkFileFilter *
@@ -28,11 +28,10 @@ write_report (TfWindow *self, const char *path, gconstpointer data, GError **err
 }
 
 gboolean
-tf_window_export_report (TfWindow *self, GFile *file)
+tf_window_report_export (TfWindow *self, GFile *file)
 {
   g_autoptr (GFile) target = NULL;
 
-  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
   g_return_val_if_fail (G_IS_FILE (file), FALSE);
   target = tf_window_file_with_suffix (file, ".pdf");
   return tf_window_export_to (self, target, write_report, NULL);
@@ -47,13 +46,13 @@ on_report_chooser_response (GtkNativeDialog *dialog, int response, TfWindow *sel
     file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
   g_clear_object (&self->chooser);
   if (file)
-    tf_window_export_report (self, file);
+    tf_window_report_export (self, file);
 }
 
 static void
 export_report_action (GtkWidget *widget, const char *action_name, GVariant *parameter)
 {
-  TfWindow *self = TF_WINDOW (widget);
+  TfWindow *self = (TfWindow *) widget;    /* the action is the window class's */
   g_autoptr (GtkFileFilter) filter = report_filter_new ();
   /* TRANSLATORS: the end of a report's suggested file name, after the analysis's name */
   g_autofree char *name = tf_window_suggested_name (self, _("-report.pdf"));
@@ -66,13 +65,6 @@ void
 tf_window_report_update (TfWindow *self)
 {
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.export-report", self->results != NULL);
-}
-
-gboolean
-tf_window_get_export_report_enabled (TfWindow *self)
-{
-  g_return_val_if_fail (TF_IS_WINDOW (self), FALSE);
-  return self->results != NULL;
 }
 
 void

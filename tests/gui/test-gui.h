@@ -20,7 +20,6 @@
 #include "tf-figure-theme.h"
 #include "tf-axis.h"
 #include "tf-figure-export.h"
-#include "tf-window-report.h"
 #include "tf-explain.h"
 
 typedef struct {
