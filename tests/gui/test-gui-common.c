@@ -126,6 +126,33 @@ assert_list_shows (TfResultList *list, const TfResults *expected)
     }
 }
 
+/* The window shows expected: the page of results, every number of expected in the
+ * list, a figure, and explanations. */
+void
+assert_window_shows_results (TfWindow *window, const TfResults *expected)
+{
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
+  assert_list_shows (tf_window_get_result_list (window), expected);
+  g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
+  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), >, 0);
+}
+
+/* Nothing stale is shown: the page that says what to fix, no numbers in the list, no
+ * figure, no explanations. */
+void
+assert_window_shows_nothing (TfWindow *window)
+{
+  TfResultList *list = tf_window_get_result_list (window);
+
+  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "invalid");
+  g_assert_false (tf_result_list_has_results (list));
+  g_assert_null (tf_result_list_get_value_text (list, "p_value"));
+  g_assert_null (tf_result_list_get_value_text (list, "bf10"));
+  g_assert_null (tf_result_list_get_value_text (list, "posterior_null"));
+  g_assert_null (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
+  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), ==, 0);
+}
+
 TfResults *
 compute_or_fail (const TfAnalysis *analysis)
 {

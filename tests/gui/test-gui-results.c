@@ -4,6 +4,75 @@
  */
 #include "test-gui.h"
 
+/* Results made by hand so that limits can be undefined (the numbers are placeholders for
+ * the display, not check values of any method): a limit's reason reads in its row. */
+static void
+check_undefined_limits (TfResultList *list, const TfAnalysis *analysis)
+{
+  g_autoptr (TfResults) results = tf_results_new (TF_DESIGN_ONE_PROPORTION);
+  const char *why = "the level leaves no room above the estimate";
+
+  tf_results_add (results, "p_value", "p-value", TF_MEASURE_TAIL_PROBABILITY, 0.04);
+  tf_results_add (results, "ci_low", "Confidence interval, lower", TF_MEASURE_CONFIDENCE_LIMIT, 0.25);
+  tf_results_add_undefined (results, "ci_high", "Confidence interval, upper",
+                            TF_MEASURE_CONFIDENCE_LIMIT, why);
+  tf_results_add_undefined (results, "cri_low", "Credible interval, lower",
+                            TF_MEASURE_CREDIBLE_LIMIT, why);
+  tf_results_add_undefined (results, "cri_high", "Credible interval, upper",
+                            TF_MEASURE_CREDIBLE_LIMIT, why);
+  tf_results_add (results, "posterior_mean", "Posterior mean", TF_MEASURE_ESTIMATE, 0.3);
+  /* the core names each interval's method; results made by hand ask it too */
+  tf_analysis_describe_numbers (analysis, results);
+
+  tf_result_list_set_results (list, analysis, results);
+  assert_list_shows (list, results);
+  /* and the strings themselves, as a reader sees them */
+  g_assert_cmpstr (tf_result_list_get_title (list, "ci_high"), ==,
+                   "99.9% confidence interval (Clopper–\u2060Pearson)");
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_high"), ==, "0.25 – not defined");
+  g_assert_cmpstr (tf_result_list_get_subtitle (list, "ci_low"), ==,
+                   "Upper limit not defined: the level leaves no room above the estimate");
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "cri_low"), ==, "not defined");
+  g_assert_cmpstr (tf_result_list_get_subtitle (list, "cri_high"), ==,
+                   "Neither limit is defined: the level leaves no room above the estimate");
+  g_assert_cmpstr (tf_result_list_get_description (list, "ci_low"), ==,
+                   "Lower limit 0.25, upper limit not defined. "
+                   "Upper limit not defined: the level leaves no room above the estimate");
+  g_assert_null (tf_result_list_get_description (list, "p_value"));
+}
+
+/* A lone limit, without its partner, keeps a row of its own. */
+static void
+check_lone_limit (TfResultList *list, const TfAnalysis *analysis)
+{
+  g_autoptr (TfResults) lone = tf_results_new (TF_DESIGN_ONE_PROPORTION);
+
+  tf_results_add (lone, "ci_low", "Confidence interval, lower", TF_MEASURE_CONFIDENCE_LIMIT, 0.25);
+  tf_result_list_set_results (list, analysis, lone);
+  assert_list_shows (list, lone);
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_low"), ==, "0.25");
+  g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==, "Confidence interval, lower");
+}
+
+/* The list shows design_cases' analysis of design at level 0.95, checked against the
+ * core; title_id then has title (when set). */
+static void
+show_design_case (TfResultList *list, TfDesign design, const char *title_id, const char *title)
+{
+  for (guint c = 0; c < n_design_cases; c++)
+    if (design_cases[c].design == design)
+      {
+        g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
+        g_autoptr (TfResults) dr = compute_or_fail (dc);
+
+        dc->level = 0.95;
+        tf_result_list_set_results (list, dc, dr);
+        assert_list_shows (list, dr);
+        if (title)
+          g_assert_cmpstr (tf_result_list_get_title (list, title_id), ==, title);
+      }
+}
+
 /* Each design's intervals, one row each, titled with what they are of and their
  * published method; two proportions' diff_ci repeats its ci and shares its row. */
 static void
@@ -27,84 +96,27 @@ check_design_titles (TfResultList *list)
   };
 
   for (guint t = 0; t < G_N_ELEMENTS (titles); t++)
-    for (guint c = 0; c < n_design_cases; c++)
-      if (design_cases[c].design == titles[t].design)
-        {
-          g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
-          g_autoptr (TfResults) dr = compute_or_fail (dc);
-
-          dc->level = 0.95;
-          tf_result_list_set_results (list, dc, dr);
-          assert_list_shows (list, dr);
-          g_assert_cmpstr (tf_result_list_get_title (list, titles[t].id), ==, titles[t].title);
-        }
-  /* the last case was two rates; two proportions again: the repeated interval reads
-   * back the very row of its ci (the same title string), not a second row */
-  for (guint c = 0; c < n_design_cases; c++)
-    if (design_cases[c].design == TF_DESIGN_TWO_PROPORTIONS)
-      {
-        g_autoptr (TfAnalysis) dc = read_case (design_cases[c].file);
-        g_autoptr (TfResults) dr = compute_or_fail (dc);
-
-        tf_result_list_set_results (list, dc, dr);
-        g_assert_true (tf_result_list_get_title (list, "ci_low")
-                       == tf_result_list_get_title (list, "diff_ci_low"));
-      }
+    show_design_case (list, titles[t].design, titles[t].id, titles[t].title);
+  /* the last case was two rates; two proportions again: the repeated interval reads back
+   * the very row of its ci (the same title string), not a second row */
+  show_design_case (list, TF_DESIGN_TWO_PROPORTIONS, NULL, NULL);
+  g_assert_true (tf_result_list_get_title (list, "ci_low")
+                 == tf_result_list_get_title (list, "diff_ci_low"));
 }
 
-/* The list on its own, fed results made by hand so that limits can be undefined (the
- * numbers are placeholders for the display, not check values of any method). */
+/* The list on its own: undefined limits, a lone limit, every design's interval titles,
+ * and cleared, nothing left to read back. */
 static void
 test_result_list_intervals (void)
 {
   TfResultList *list = TF_RESULT_LIST (g_object_ref_sink (tf_result_list_new ()));
   g_autoptr (TfAnalysis) analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
-  g_autoptr (TfResults) results = tf_results_new (TF_DESIGN_ONE_PROPORTION);
-  const char *why = "the level leaves no room above the estimate";
 
-  tf_results_add (results, "p_value", "p-value", TF_MEASURE_TAIL_PROBABILITY, 0.04);
-  tf_results_add (results, "ci_low", "Confidence interval, lower", TF_MEASURE_CONFIDENCE_LIMIT, 0.25);
-  tf_results_add_undefined (results, "ci_high", "Confidence interval, upper",
-                            TF_MEASURE_CONFIDENCE_LIMIT, why);
-  tf_results_add_undefined (results, "cri_low", "Credible interval, lower",
-                            TF_MEASURE_CREDIBLE_LIMIT, why);
-  tf_results_add_undefined (results, "cri_high", "Credible interval, upper",
-                            TF_MEASURE_CREDIBLE_LIMIT, why);
-  tf_results_add (results, "posterior_mean", "Posterior mean", TF_MEASURE_ESTIMATE, 0.3);
   analysis->level = 0.999;
-  /* the core names each interval's method; results made by hand ask it too */
-  tf_analysis_describe_numbers (analysis, results);
-
-  tf_result_list_set_results (list, analysis, results);
-  assert_list_shows (list, results);
-  /* and the strings themselves, as a reader sees them */
-  g_assert_cmpstr (tf_result_list_get_title (list, "ci_high"), ==,
-                   "99.9% confidence interval (Clopper–\u2060Pearson)");
-  g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_high"), ==, "0.25 – not defined");
-  g_assert_cmpstr (tf_result_list_get_subtitle (list, "ci_low"), ==,
-                   "Upper limit not defined: the level leaves no room above the estimate");
-  g_assert_cmpstr (tf_result_list_get_value_text (list, "cri_low"), ==, "not defined");
-  g_assert_cmpstr (tf_result_list_get_subtitle (list, "cri_high"), ==,
-                   "Neither limit is defined: the level leaves no room above the estimate");
-  g_assert_cmpstr (tf_result_list_get_description (list, "ci_low"), ==,
-                   "Lower limit 0.25, upper limit not defined. "
-                   "Upper limit not defined: the level leaves no room above the estimate");
-  g_assert_null (tf_result_list_get_description (list, "p_value"));
-
-  /* A lone limit, without its partner, keeps a row of its own. */
-  {
-    g_autoptr (TfResults) lone = tf_results_new (TF_DESIGN_ONE_PROPORTION);
-
-    tf_results_add (lone, "ci_low", "Confidence interval, lower", TF_MEASURE_CONFIDENCE_LIMIT, 0.25);
-    tf_result_list_set_results (list, analysis, lone);
-    assert_list_shows (list, lone);
-    g_assert_cmpstr (tf_result_list_get_value_text (list, "ci_low"), ==, "0.25");
-    g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==, "Confidence interval, lower");
-  }
-
+  check_undefined_limits (list, analysis);
+  check_lone_limit (list, analysis);
   check_design_titles (list);
 
-  /* Cleared, nothing is left to read back. */
   tf_result_list_clear (list, "Fix the Marked Field", "A field needs fixing.");
   g_assert_false (tf_result_list_has_results (list));
   g_assert_null (tf_result_list_get_value_text (list, "ci_low"));

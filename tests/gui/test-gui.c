@@ -10,29 +10,18 @@
  */
 #include "test-gui.h"
 
-static void
-test_window_edits (void)
+/* The demo, data/demo/seed-germination.twofold, bundled in the GResource, with its
+ * numbers, figure and explanations; its results. */
+static TfResults *
+check_demo_shown (TfWindow *window)
 {
-  TfWindow *window = tf_window_new (NULL);
   TfResultList *list = tf_window_get_result_list (window);
-  TfAnalysisForm *form = tf_window_get_form (window);
-  g_autoptr (TfAnalysis) expected = NULL;
-  g_autoptr (TfResults) expected_results = NULL;
-  g_autoptr (TfResults) demo_results = NULL;
-  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
-  const TfProblem *problem;
-  GtkEditable *successes;
+  TfResults *demo_results;
 
-  tf_window_open_demo (window);
-  gtk_window_present (GTK_WINDOW (window));
-  wait_until_mapped (GTK_WIDGET (window));
-
-  /* The demo, data/demo/seed-germination.twofold, bundled in the GResource. */
   g_assert_cmpfloat (tf_window_get_analysis (window)->trials, ==, 12000);
   g_assert_cmpfloat (tf_window_get_analysis (window)->successes, ==, 9700);
-  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
   demo_results = compute_or_fail (tf_window_get_analysis (window));
-  assert_list_shows (list, demo_results);
+  assert_window_shows_results (window, demo_results);
   /* the demo's Level is 0.95; one proportion's confidence interval is Clopper–Pearson's.
    * A word joiner (U+2060) after the dash keeps the name whole when the row wraps. */
   g_assert_cmpstr (tf_result_list_get_title (list, "ci_low"), ==,
@@ -41,10 +30,21 @@ test_window_edits (void)
                    "95% credible interval (equal-\u2060tailed)");
   g_assert_nonnull (tf_result_list_get_value_text (list, "p_value"));
   g_assert_nonnull (tf_result_list_get_value_text (list, "posterior_null"));
-  g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
-  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), >, 0);
+  return demo_results;
+}
 
-  /* Type a new analysis in, field by field. */
+/* Type a new analysis in, field by field: the window's analysis is what was typed, and
+ * the list shows its numbers, which moved from the demo's. The analysis typed. */
+static TfAnalysis *
+check_typed_analysis (TfWindow *window, const TfResults *demo_results)
+{
+  TfResultList *list = tf_window_get_result_list (window);
+  TfAnalysis *expected;
+  g_autoptr (TfResults) expected_results = NULL;
+  const TfNumber *p, *post;
+  g_autofree char *p_text = NULL;
+  g_autofree char *post_text = NULL;
+
   type_into (window, "Data", "Trials", "100");
   type_into (window, "Data", "Successes", "62");
   type_into (window, "Null", "Value", "0.5");
@@ -64,22 +64,29 @@ test_window_edits (void)
   expected_results = compute_or_fail (expected);
   g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
   assert_list_shows (list, expected_results);
-  {
-    const TfNumber *p = tf_results_lookup (expected_results, "p_value");
-    const TfNumber *post = tf_results_lookup (expected_results, "posterior_null");
-    g_autofree char *p_text = tf_number_format (p);
-    g_autofree char *post_text = tf_number_format (post);
+  p = tf_results_lookup (expected_results, "p_value");
+  post = tf_results_lookup (expected_results, "posterior_null");
+  p_text = tf_number_format (p);
+  post_text = tf_number_format (post);
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "p_value"), ==, p_text);
+  g_assert_cmpstr (tf_result_list_get_value_text (list, "posterior_null"), ==, post_text);
+  /* and the numbers moved from the demo's */
+  g_assert_true (fabs (p->value - tf_results_lookup (demo_results, "p_value")->value) > 1e-9);
+  return expected;
+}
 
-    g_assert_cmpstr (tf_result_list_get_value_text (list, "p_value"), ==, p_text);
-    g_assert_cmpstr (tf_result_list_get_value_text (list, "posterior_null"), ==, post_text);
-    /* and the numbers moved from the demo's */
-    g_assert_true (fabs (p->value - tf_results_lookup (demo_results, "p_value")->value) > 1e-9);
-  }
+/* More successes than trials (expected, with Successes 120): the field says what the
+ * core says, and nothing stale is shown. */
+static void
+check_successes_over_trials (TfWindow *window, TfAnalysis *expected)
+{
+  TfAnalysisForm *form = tf_window_get_form (window);
+  g_autoptr (GPtrArray) problems = tf_problem_list_new ();
+  const TfProblem *problem;
 
-  /* More successes than trials: the field says so, and nothing stale is shown. */
   type_into (window, "Data", "Successes", "120");
-  successes = tf_analysis_form_get_entry (form, "Data", "Successes");
-  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (successes), "error"));
+  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (tf_analysis_form_get_entry (form, "Data", "Successes")),
+                                           "error"));
   expected->successes = 120;
   g_assert_false (tf_analysis_validate (expected, problems));
   problem = tf_problem_list_find (problems, "Data", "Successes");
@@ -88,35 +95,53 @@ test_window_edits (void)
   g_assert_nonnull (problem);
   g_assert_cmpstr (tf_analysis_form_get_message (form, problem->group, problem->key), ==,
                    problem->message);
-  g_assert_false (tf_result_list_has_results (list));
-  g_assert_null (tf_result_list_get_value_text (list, "p_value"));
-  g_assert_null (tf_result_list_get_value_text (list, "posterior_null"));
-  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "invalid");
-  g_assert_null (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
-  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), ==, 0);
+  assert_window_shows_nothing (window);
+}
 
-  /* A text that is not a number is a problem of its own field, named after it. */
+/* A text that is not a number is a problem of its own field, named after it. */
+static void
+check_not_a_number (TfWindow *window)
+{
+  TfAnalysisForm *form = tf_window_get_form (window);
+  const char *message;
+
   type_into (window, "Data", "Successes", "62");
   type_into (window, "Data", "Trials", "1OO");
-  {
-    const char *message = tf_analysis_form_get_message (form, "Data", "Trials");
-    g_assert_nonnull (message);
-    g_assert_nonnull (strstr (message, "Trials"));
-    g_assert_nonnull (strstr (message, "1OO"));
-    g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (tf_analysis_form_get_entry (form, "Data", "Trials")),
-                                             "error"));
-    g_assert_false (tf_result_list_has_results (list));
-  }
+  message = tf_analysis_form_get_message (form, "Data", "Trials");
+  g_assert_nonnull (message);
+  g_assert_nonnull (strstr (message, "Trials"));
+  g_assert_nonnull (strstr (message, "1OO"));
+  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (tf_analysis_form_get_entry (form, "Data", "Trials")),
+                                           "error"));
+  g_assert_false (tf_result_list_has_results (tf_window_get_result_list (window)));
+}
+
+static void
+test_window_edits (void)
+{
+  TfWindow *window = tf_window_new (NULL);
+  TfAnalysisForm *form = tf_window_get_form (window);
+  g_autoptr (TfResults) demo_results = NULL;
+  g_autoptr (TfAnalysis) expected = NULL;
+  g_autoptr (TfResults) expected_results = NULL;
+
+  tf_window_open_demo (window);
+  gtk_window_present (GTK_WINDOW (window));
+  wait_until_mapped (GTK_WIDGET (window));
+
+  demo_results = check_demo_shown (window);
+  expected = check_typed_analysis (window, demo_results);
+  expected_results = compute_or_fail (expected);
+  check_successes_over_trials (window, expected);
+  check_not_a_number (window);
 
   /* Put it right: the marks go and the results come back. */
   type_into (window, "Data", "Trials", "100");
-  g_assert_false (gtk_widget_has_css_class (GTK_WIDGET (successes), "error"));
+  g_assert_false (gtk_widget_has_css_class (GTK_WIDGET (tf_analysis_form_get_entry (form, "Data", "Successes")),
+                                            "error"));
   g_assert_null (tf_analysis_form_get_message (form, "Data", "Successes"));
   g_assert_null (tf_analysis_form_get_message (form, "Data", "Trials"));
-  g_assert_cmpstr (tf_window_get_visible_page (window), ==, "analysis");
-  assert_list_shows (list, expected_results);
-  g_assert_nonnull (tf_plot_view_get_analysis (tf_window_get_plot_view (window)));
-  g_assert_cmpuint (tf_explanation_pane_get_n_explanations (tf_window_get_explanation_pane (window)), >, 0);
+  assert_window_shows_results (window, expected_results);
 
   gtk_window_destroy (GTK_WINDOW (window));
   iterate ();

@@ -46,6 +46,11 @@ void type_into (TfWindow *window, const char *group, const char *key, const char
 /* Every number of expected is in the list with the text the core formats for it; the
  * two limits of an interval in one row. */
 void assert_list_shows (TfResultList *list, const TfResults *expected);
+/* The window shows expected: the page of results, the list, a figure, explanations. */
+void assert_window_shows_results (TfWindow *window, const TfResults *expected);
+/* Nothing stale is shown: the page that says what to fix, and no numbers, figure or
+ * explanations. */
+void assert_window_shows_nothing (TfWindow *window);
 TfResults *compute_or_fail (const TfAnalysis *analysis);
 void assert_not_modified (TfWindow *window, const char *title);
 char *write_case (const char *dir, const char *name, const char *text);
