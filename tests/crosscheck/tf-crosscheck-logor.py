@@ -2,7 +2,7 @@
 """Cross-check of the two-proportions Bayes factor with a normal prior on the log odds
 ratio (core/tf-two-proportions-logor.c) from 1 to 10^12 trials a group.
 
-Usage: /usr/bin/python3 tf-crosscheck-logor.py PATH/TO/tf-crosscheck-two-proportions-driver [N]
+Usage: /usr/bin/python3 tf-crosscheck-logor.py PATH/TO/tf-crosscheck-driver [N]
 
 The quantity: ln BF01 = −ln ∫ e^{ψ kA} / E0[e^{ψ X}] φ(ψ; 0, σ²) dψ, X the central
 hypergeometric count given the margins (the conditional likelihood, Fisher 1935).
@@ -32,10 +32,11 @@ the second term where ln BF is so large that double precision cannot hold 1e-7).
 Exit 0 when every case is inside it, 1 otherwise, 77 without numpy/scipy/mpmath.
 """
 import math
-import subprocess
 import sys
 import time
 import warnings
+
+from tf_crosscheck_common import run_driver
 
 try:
     import numpy as np
@@ -392,10 +393,7 @@ for i in range(N_MP):
     cases.append(('mpmath', ka, na, kb, nb, sd))
 
 t0 = time.time()
-inp = ''.join('logor %d %d %d %d %.17g\n' % c[1:] for c in cases)
-proc = subprocess.run([sys.argv[1]], input=inp, capture_output=True, text=True, check=True)
-outs = proc.stdout.split()
-assert len(outs) == len(cases), 'driver printed %d values for %d cases' % (len(outs), len(cases))
+outs = run_driver(sys.argv[1], 'two-proportions', ['logor %d %d %d %d %.17g' % c[1:] for c in cases])
 t_ours = time.time() - t0
 
 worst = {}

@@ -1,7 +1,7 @@
 # SPDX-License-Identifier: GPL-3.0-or-later
 """Cross-check of Twofold's means numerics against scipy and mpmath.
 
-Usage: /usr/bin/python3 tf-crosscheck-means.py PATH/TO/tf-crosscheck-means-driver [N]
+Usage: /usr/bin/python3 tf-crosscheck-means.py PATH/TO/tf-crosscheck-driver [N]
 
 Random cases over the whole valid domain (fixed seed; n from 2 to 1e8, |t| from 1e-3
 to 1e3, r from 1e-2 to 1e2) go through one run of the C driver; each quantity is
@@ -15,9 +15,10 @@ reference is above 1e-300; for the posterior's limits, the error over the width 
 equal-tailed interval (at most 1). N/200 posterior cases and the corners of the domain.
 """
 import math
-import subprocess
 import sys
 import warnings
+
+from tf_crosscheck_common import run_driver
 
 try:
     import numpy as np
@@ -56,9 +57,9 @@ def draw_design():
 
 
 def run(lines):
-    out = subprocess.run([DRIVER], input=''.join(lines), capture_output=True, text=True,
-                         check=True)
-    return [float(x) for x in out.stdout.split()]
+    """The driver's numbers for the lines, in order (each line ends in a newline)."""
+    outs = run_driver(DRIVER, 'means', [line.rstrip('\n') for line in lines])
+    return [float(x) for out in outs for x in out.split()]
 
 
 def report(name, cases, got, ref, err_fn, tol, source):

@@ -2,7 +2,7 @@
 """Cross-check of Twofold's rate numerics (tf-poisson, tf-one-rate, tf-two-rates)
 against mpmath and scipy.
 
-Usage: /usr/bin/python3 tf-crosscheck-rates.py PATH/TO/tf-crosscheck-rates-driver [N]
+Usage: /usr/bin/python3 tf-crosscheck-rates.py PATH/TO/tf-crosscheck-driver [N]
 
 Random cases over the whole valid domain (fixed seed), N per quantity (default 10^4),
 through one run of the C driver; each quantity's worst error is printed. Exit 0 when
@@ -479,7 +479,7 @@ for _ in range(N):
     cases.append(('ratioq', 'ratioq %r %r %r %r %r' % (lp, sa, ra, sb, rb),
                   (lp, sa, ra, sb, rb)))
 
-outs = run_driver(sys.argv[1], [c[1] for c in cases])
+outs = run_driver(sys.argv[1], 'rates', [c[1] for c in cases])
 
 tally = Tally({
     'temme': ('Temme coefficients, rel. error', 1e-15),

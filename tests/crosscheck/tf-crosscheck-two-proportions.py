@@ -2,7 +2,7 @@
 """Cross-check of Twofold's two-proportions numerics (tf-fisher, tf-beta-difference,
 tf-two-proportions) against mpmath and scipy.
 
-Usage: /usr/bin/python3 tf-crosscheck-two-proportions.py PATH/TO/driver [N [QUANTITY,...]]
+Usage: /usr/bin/python3 tf-crosscheck-two-proportions.py PATH/TO/tf-crosscheck-driver [N [QUANTITY,...]]
 
 Random cases (fixed seed), trials log-uniform from 1 to 10^9 with the edges (k = 0,
 k = n, n = 1) drawn on purpose, N cases per quantity (default 10^4). The Bayes factor
@@ -40,10 +40,11 @@ converge at shapes above about 10^5, so mpmath serves only through loggamma.
 Exit 0 when every case is inside its tolerance, 1 otherwise, 77 without scipy/mpmath.
 """
 import math
-import subprocess
 import sys
 import time
 import warnings
+
+from tf_crosscheck_common import run_driver
 
 T0 = time.time()
 
@@ -406,10 +407,7 @@ for _ in range(N):
 if len(sys.argv) > 3:          # only these quantities, comma-separated
     keep = sys.argv[3].split(',')
     cases = [c for c in cases if c[0] in keep]
-inp = ''.join(c[1] + '\n' for c in cases)
-proc = subprocess.run([sys.argv[1]], input=inp, capture_output=True, text=True, check=True)
-outs = proc.stdout.splitlines()
-assert len(outs) == len(cases), 'driver printed %d lines for %d cases' % (len(outs), len(cases))
+outs = run_driver(sys.argv[1], 'two-proportions', [c[1] for c in cases])
 
 TOL = {
     'lbf': ('ln BF01 closed form, abs/rel', 1e-9),

@@ -9,9 +9,10 @@ Exit 0 when every case is inside its tolerance, 1 otherwise, 77 when scipy or mp
 is missing. References: scipy 1.10.1 (Debian 12) and mpmath 1.2.1 at mp.dps = 40.
 """
 import math
-import subprocess
 import sys
 import warnings
+
+from tf_crosscheck_common import run_driver
 
 try:
     import numpy as np
@@ -458,10 +459,7 @@ while n_i < N_ITER:
     add('ibf', 'ibf %r %r %r %r %r %r %d' % (k, n, lo, hi, a, b, d), ref)
     n_i += 1
 
-inp = ''.join(c[1] + '\n' for c in cases)
-proc = subprocess.run([sys.argv[1]], input=inp, capture_output=True, text=True, check=True)
-outs = proc.stdout.splitlines()
-assert len(outs) == len(cases), 'driver printed %d lines for %d cases' % (len(outs), len(cases))
+outs = run_driver(sys.argv[1], 'one-proportion', [c[1] for c in cases])
 
 # Tolerances: 'abs' compares logarithms in absolute error (= relative error of the
 # probability), scaled by max(1, |ref|) for logs beyond -1 so that a tail of 1e-300

@@ -1,11 +1,11 @@
 # SPDX-License-Identifier: GPL-3.0-or-later
 """What Twofold's cross-check scripts share: the reference libraries (or exit 77),
-one run of a C driver over all cases, log-uniform draws, the usual error measures,
+one run of the C driver over all cases, log-uniform draws, the usual error measures,
 and the tally of worst errors against stated tolerances.
 
     from tf_crosscheck_common import references, run_driver, log_uniform, abs_rel, Tally
     np, scipy, special, mp = references()          # exits 77 when one is missing
-    outs = run_driver(sys.argv[1], lines)          # one output line per input line
+    outs = run_driver(sys.argv[1], 'rates', lines) # one output line per input line
     tally = Tally({'q': ('label', 1e-9), ...})     # quantity -> (label, tolerance)
     tally.record('q', line, err)                   # NaN counts as a failure
     sys.exit(tally.report())                       # prints the table; 0 or 1
@@ -31,10 +31,12 @@ def references():
     return numpy, scipy, scipy.special, mpmath
 
 
-def run_driver(path, lines):
-    """Feeds the lines to the driver on stdin; its output lines, one per input line."""
+def run_driver(path, area, lines):
+    """Feeds the lines to `path area` (tf-crosscheck-driver and its subcommand:
+    one-proportion, means, rates, two-proportions) on stdin; its output lines, one per
+    input line."""
     inp = ''.join(line + '\n' for line in lines)
-    proc = subprocess.run([path], input=inp, capture_output=True, text=True, check=True)
+    proc = subprocess.run([path, area], input=inp, capture_output=True, text=True, check=True)
     outs = proc.stdout.splitlines()
     assert len(outs) == len(lines), 'driver printed %d lines for %d cases' % (len(outs), len(lines))
     return outs
