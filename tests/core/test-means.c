@@ -271,12 +271,7 @@ test_no_nan (void)
           a->direction = (TfDirection) dir;
           g_autoptr (TfResults) r = tf_analysis_compute (a, problems);
           g_assert_nonnull (r);
-          for (guint k = 0; k < r->numbers->len; k++)
-            {
-              const TfNumber *num = g_ptr_array_index (r->numbers, k);
-              g_assert_true (num->status == TF_STATUS_UNDEFINED ? num->reason != NULL
-                                                                : isfinite (num->value));
-            }
+          assert_all_finite (r);
         }
 }
 

@@ -46,11 +46,7 @@ compute (const TfAnalysis *an)
   TfResults *r = tf_results_new (TF_DESIGN_ONE_PROPORTION);
   tf_one_proportion_compute (an, r);
   /* nothing undefined leaves as NaN or inf */
-  for (guint i = 0; i < r->numbers->len; i++)
-    {
-      const TfNumber *num = g_ptr_array_index (r->numbers, i);
-      g_assert_true (isfinite (num->value));
-    }
+  assert_all_finite (r);
   return r;
 }
 

@@ -35,20 +35,6 @@ two_rates (double ka, double ea, double kb, double eb)
   return a;
 }
 
-/* Every number is finite or undefined with a reason: no NaN leaves the core. */
-static void
-assert_all_finite (const TfResults *r)
-{
-  for (guint i = 0; i < r->numbers->len; i++)
-    {
-      const TfNumber *n = g_ptr_array_index (r->numbers, i);
-      if (n->status == TF_STATUS_OK)
-        g_assert_true (isfinite (n->value));
-      else
-        g_assert_nonnull (n->reason);
-    }
-}
-
 static void
 test_garwood (void)
 {

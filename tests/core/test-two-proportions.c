@@ -35,14 +35,7 @@ compute (const TfAnalysis *a)
   TfResults *r = tf_analysis_compute (a, problems);
   if (r == NULL)
     g_error ("not valid: %s", ((TfProblem *) g_ptr_array_index (problems, 0))->message);
-  for (guint i = 0; i < r->numbers->len; i++)
-    {
-      const TfNumber *n = g_ptr_array_index (r->numbers, i);
-      if (n->status == TF_STATUS_OK)
-        g_assert_true (isfinite (n->value));
-      else
-        g_assert_nonnull (n->reason);
-    }
+  assert_all_finite (r);
   return r;
 }
 
