@@ -6,9 +6,9 @@
 #include "tf-design.h"
 #include "tf-analysis-file.h"
 #include "tf-results.h"
+#include "tf-check.h"
 
 #include <glib/gstdio.h>
-#include <gsl/gsl_errno.h>
 #include <locale.h>
 #include <math.h>
 
@@ -466,8 +466,7 @@ int
 main (int argc, char **argv)
 {
   setlocale (LC_ALL, "C.UTF-8");
-  gsl_set_error_handler_off ();
-  g_test_init (&argc, &argv, NULL);
+  tf_check_init (&argc, &argv);
   g_test_add_func ("/analysis-file/load-fields", test_load_fields);
   g_test_add_func ("/analysis-file/round-trip-keeps-unknown-keys", test_round_trip_keeps_unknown_keys);
   g_test_add_func ("/analysis-file/save-failure-leaves-nothing", test_save_failure_leaves_nothing);

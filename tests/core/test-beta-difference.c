@@ -24,18 +24,11 @@
 #include "tf-check.h"
 
 #include <glib.h>
-#include <gsl/gsl_errno.h>
 #include <math.h>
 #include <string.h>
 
-/* |ln got − ln want| <= tol: the relative error of the probability. */
-static void
-assert_log (double got, double want, double tol)
-{
-  if (!(fabs (got - want) <= tol))
-    g_error ("ln p: got %.17g, want %.17g (difference %.3g > %.3g)", got, want,
-             fabs (got - want), tol);
-}
+/* The figure grid against the point-by-point density: what a curve needs (see above). */
+#define GRID_TOL 1e-6
 
 static void
 check_tails (double pa, double qa, double pb, double qb, double d, double lo, double hi)
@@ -44,8 +37,9 @@ check_tails (double pa, double qa, double pb, double qb, double d, double lo, do
   double l, u;
   tf_beta_diff_init (&bd, pa, qa, pb, qb);
   g_assert_true (tf_beta_diff_log_cdf (&bd, d, &l, &u));
-  assert_log (l, lo, 1e-9);
-  assert_log (u, hi, 1e-9);
+  /* of logs, absolutely: the relative error of the probability */
+  assert_abs (l, lo, TF_TOL_CONVERGED);
+  assert_abs (u, hi, TF_TOL_CONVERGED);
 }
 
 static void
@@ -57,11 +51,11 @@ test_uniform (void)
    * density 1 − |d| (closed form, common practice) */
   tf_beta_diff_init (&bd, 1, 1, 1, 1);
   g_assert_true (tf_beta_diff_log_cdf (&bd, -0.7, &l, &u));
-  assert_rel (exp (l), 0.045, 1e-9);
-  assert_rel (exp (u), 0.955, 1e-9);
-  assert_rel (exp (tf_beta_diff_log_density (&bd, -0.7)), 0.3, 1e-9);
-  assert_rel (tf_beta_diff_quantile_log (&bd, log (0.045), TRUE), -0.7, 1e-9);
-  assert_rel (tf_beta_diff_quantile_log (&bd, log (0.045), FALSE), 0.7, 1e-9);
+  assert_rel (exp (l), 0.045, TF_TOL_CONVERGED);
+  assert_rel (exp (u), 0.955, TF_TOL_CONVERGED);
+  assert_rel (exp (tf_beta_diff_log_density (&bd, -0.7)), 0.3, TF_TOL_CONVERGED);
+  assert_rel (tf_beta_diff_quantile_log (&bd, log (0.045), TRUE), -0.7, TF_TOL_CONVERGED);
+  assert_rel (tf_beta_diff_quantile_log (&bd, log (0.045), FALSE), 0.7, TF_TOL_CONVERGED);
 }
 
 static void
@@ -101,13 +95,15 @@ check_quantile (double pa, double qa, double pb, double qb, double log_p, gboole
       double q = tf_beta_diff_quantile_log (&bd, log_p, lower);
       g_assert_true (isfinite (q));
       g_assert_true (tf_beta_diff_log_cdf (&bd, q, &l, &u));
-      assert_log (lower ? l : u, log_p, 1e-9);
+      assert_abs (lower ? l : u, log_p, TF_TOL_CONVERGED);
     }
   if (!density)
     return;
   double q = tf_beta_diff_quantile_log (&bd, log (0.3), TRUE), h = 1e-4 * bd.sd;
   g_assert_true (tf_beta_diff_log_cdf (&bd, q - h, &l, &u));
   g_assert_true (tf_beta_diff_log_cdf (&bd, q + h, &l1, &u1));
+  /* 1e-6: the difference of step 1e-4 sd divides the tails' own error by the mass
+   * between them, about 1e-4 */
   assert_rel (exp (tf_beta_diff_log_density (&bd, q)), (exp (l1) - exp (l)) / (2.0 * h), 1e-6);
 }
 
@@ -163,7 +159,7 @@ check_grid (double pa, double qa, double pb, double qb, double lo, double hi)
       if (isnan (out[i]) || !(ref[i] > top + log (1e-3)))
         continue;
       double e = fabs (expm1 (out[i] - ref[i]));
-      if (!(e <= 1e-6))
+      if (!(e <= GRID_TOL))
         g_error ("Beta(%g, %g) − Beta(%g, %g) at %.17g: grid %.17g, point by point %.17g",
                  pa, qa, pb, qb, (double) (L + (gint64) i) / S, out[i], ref[i]);
       grid_worst = MAX (grid_worst, e);
@@ -227,7 +223,7 @@ check_grid_at (double pa, double qa, double pb, double qb, gint64 S, gint64 J, d
   double out;
   tf_beta_diff_init (&bd, pa, qa, pb, qb);
   g_assert_true (tf_beta_diff_log_density_grid (&bd, S, J, 1, &out));
-  assert_rel (exp (out), want, 1e-6);
+  assert_rel (exp (out), want, GRID_TOL);
   grid_worst = MAX (grid_worst, fabs (exp (out) - want) / want);
 }
 
@@ -263,7 +259,7 @@ check_curve (const TfDensityCurves *c, const double *y, TfBetaDiff *bd, const ch
       double want = exp (tf_beta_diff_log_density (bd, c->x[i]));
       if (want < 1e-3 * top)
         continue;
-      if (!(fabs (y[i] - want) <= 1e-6 * want))
+      if (!(fabs (y[i] - want) <= GRID_TOL * want))
         g_error ("%s at %.17g: curve %.17g, point by point %.17g", what, c->x[i], y[i], want);
       grid_worst = MAX (grid_worst, fabs (y[i] - want) / want);
       grid_points++;
@@ -343,8 +339,7 @@ test_curves (void)
 int
 main (int argc, char **argv)
 {
-  gsl_set_error_handler_off ();
-  g_test_init (&argc, &argv, NULL);
+  tf_check_init (&argc, &argv);
   g_test_add_func ("/beta-difference/uniform", test_uniform);
   g_test_add_func ("/beta-difference/exact-sums", test_exact_sums);
   g_test_add_func ("/beta-difference/tiny-shape", test_tiny_shape);

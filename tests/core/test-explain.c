@@ -6,8 +6,8 @@
 #include "tf-analysis-file.h"
 #include "tf-explain.h"
 #include "tf-results.h"
+#include "tf-check.h"
 
-#include <gsl/gsl_errno.h>
 #include <locale.h>
 
 static const struct {
@@ -108,8 +108,7 @@ int
 main (int argc, char **argv)
 {
   setlocale (LC_ALL, "C.UTF-8");
-  gsl_set_error_handler_off ();
-  g_test_init (&argc, &argv, NULL);
+  tf_check_init (&argc, &argv);
   g_test_add_func ("/explain/every-design", test_every_design);
   g_test_add_func ("/explain/class-words", test_class_words);
   g_test_add_func ("/explain/caution", test_caution);
