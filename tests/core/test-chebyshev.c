@@ -30,6 +30,7 @@ fit (double (*f) (double), double *c)
   tf_cheb_fit (v, c);
 }
 
+/* The functions with known coefficients, antiderivatives (from −1) and derivatives. */
 static double
 cubic (double x)
 {
@@ -37,10 +38,96 @@ cubic (double x)
 }
 
 static double
+cubic_from_m1 (double x)
+{
+  return 0.75 * x * x * x * x - x * x + 0.5 * x + 0.75;
+}
+
+static double
+cubic_d1 (double x)
+{
+  return 9.0 * x * x - 2.0;
+}
+
+static double
+cubic_d2 (double x)
+{
+  return 18.0 * x;
+}
+
+/* T₂ and T₄ onwards are absent from ½ T₀ + ¼ T₁ + ¾ T₃ */
+static gboolean
+cubic_zero (guint k)
+{
+  return k == 2 || k >= 4;
+}
+
+
+static double
+exp_from_m1 (double x)
+{
+  return exp (x) - exp (-1.0);
+}
+
+
+static double
 cos3 (double x)
 {
   return cos (3.0 * x);
 }
+
+static double
+cos3_from_m1 (double x)
+{
+  return (sin (3.0 * x) + sin (3.0)) / 3.0;
+}
+
+static double
+cos3_d1 (double x)
+{
+  return -3.0 * sin (3.0 * x);
+}
+
+static double
+cos3_d2 (double x)
+{
+  return -9.0 * cos (3.0 * x);
+}
+
+/* an even function: the odd T_k are absent */
+static gboolean
+cos3_zero (guint k)
+{
+  return k % 2 == 1;
+}
+
+
+typedef struct {
+  const char *name;
+  double (*f) (double);
+  double (*from_m1) (double);           /* ∫ of f from −1 */
+  double (*d1) (double), (*d2) (double);
+  gboolean (*zero) (guint k);           /* the coefficients known to vanish, or NULL */
+  guint n_known;
+  struct { guint k; double c; } known[4];
+} KnownFunction;
+
+static const KnownFunction known_functions[] = {
+  /* p(ξ) = 3ξ³ − 2ξ + ½ = ½ T₀ + ¼ T₁ + ¾ T₃ (ξ³ = (3T₁ + T₃)/4): its own interpolant */
+  { "cubic", cubic, cubic_from_m1, cubic_d1, cubic_d2, cubic_zero,
+    3, { { 0, 0.5 }, { 1, 0.25 }, { 3, 0.75 } } },
+  /* mpmath 1.2.1: besseli(0, 1), 2*besseli(1, 1), 2*besseli(2, 1), 2*besseli(5, 1) */
+  { "exp", exp, exp_from_m1, exp, exp, NULL,
+    4, { { 0, 1.266065877752008335598244625214717537608 },
+      { 1, 1.130318207984970054415392055219726614658 },
+      { 2, 0.2714953395340765623657051399899818458997 },
+      { 5, 0.0005429263119139437503621478103075546847671 } } },
+  /* mpmath 1.2.1: besselj(0, 3), -2*besselj(2, 3), 2*besselj(4, 3) */
+  { "cos 3x", cos3, cos3_from_m1, cos3_d1, cos3_d2, cos3_zero,
+    3, { { 0, -0.2600519549019334376241546959773314368196 },
+         { 2, -0.9721825211717821538156621882299680696033 },
+         { 4, 0.2640683678492244206573785915573645281132 } } },
+};
 
 /* The end derivatives weigh coefficient k by k² (first) and k²(k² − 1)/3 (second): the
  * rounding of the coefficients, a few ulps of the largest each, is multiplied by the
@@ -132,69 +219,33 @@ test_clenshaw (void)
   assert_rel (tf_cheb_eval (c, 3, -1.0), 2.0, TF_TOL_EXACT);     /* T_k(−1) = (−1)^k */
 }
 
-/* p(ξ) = 3ξ³ − 2ξ + ½ = ½ T₀ + ¼ T₁ + ¾ T₃: a cubic is its own interpolant. */
+/* Each known function: its coefficients, the interpolant's values, its integral from
+ * −1 (0 at −1 itself) and its end derivatives. */
 static void
-test_cubic (void)
+test_known_functions (void)
 {
-  double c[TF_CHEB_N];
+  static const double points[] = { -0.9, -0.77, -0.6, 0.1, 0.3, 0.5 };
+  static const double ends[] = { 0.25, 0.4, 0.5, 1.0 };
 
-  fit (cubic, c);
-  assert_abs (c[0], 0.5, TF_TOL_ROUNDING);
-  assert_abs (c[1], 0.25, TF_TOL_ROUNDING);
-  assert_abs (c[2], 0.0, TF_TOL_ROUNDING);
-  assert_abs (c[3], 0.75, TF_TOL_ROUNDING);
-  for (guint k = 4; k < TF_CHEB_N; k++)
-    assert_abs (c[k], 0.0, TF_TOL_ROUNDING);
-  assert_rel (tf_cheb_eval (c, TF_CHEB_N, 0.3), cubic (0.3), TF_TOL_ROUNDING);
-  assert_rel (tf_cheb_eval (c, TF_CHEB_N, -0.9), cubic (-0.9), TF_TOL_ROUNDING);
-  /* ∫ from −1: F(ξ) − F(−1), F(ξ) = ¾ξ⁴ − ξ² + ½ξ, F(−1) = −¾ */
-  assert_abs (integral_to (c, -1.0), 0.0, TF_TOL_ULPS);
-  assert_rel (integral_to (c, 0.5), 0.75 * 0.0625 - 0.25 + 0.25 + 0.75, TF_TOL_ROUNDING);
-  assert_rel (integral_to (c, 1.0), 1.0, TF_TOL_ROUNDING);
-  /* p′(ξ) = 9ξ² − 2, p″(ξ) = 18ξ */
-  check_end_derivatives (c, 7.0, 18.0, 7.0, -18.0);
-}
+  for (guint i = 0; i < G_N_ELEMENTS (known_functions); i++)
+    {
+      const KnownFunction *kf = &known_functions[i];
+      double c[TF_CHEB_N];
 
-static void
-test_exp (void)
-{
-  double c[TF_CHEB_N];
-
-  fit (exp, c);
-  /* mpmath 1.2.1: besseli(0, 1), 2*besseli(1, 1), 2*besseli(2, 1), 2*besseli(5, 1) */
-  assert_abs (c[0], 1.266065877752008335598244625214717537608, TF_TOL_ROUNDING);
-  assert_abs (c[1], 1.130318207984970054415392055219726614658, TF_TOL_ROUNDING);
-  assert_abs (c[2], 0.2714953395340765623657051399899818458997, TF_TOL_ROUNDING);
-  assert_abs (c[5], 0.0005429263119139437503621478103075546847671, TF_TOL_ROUNDING);
-  assert_rel (tf_cheb_eval (c, TF_CHEB_N, 0.5), exp (0.5), TF_TOL_ROUNDING);
-  assert_rel (tf_cheb_eval (c, TF_CHEB_N, -0.77), exp (-0.77), TF_TOL_ROUNDING);
-  /* ∫ from −1 to ξ of e^t = e^ξ − 1/e; to 1, 2 sinh 1 */
-  assert_abs (integral_to (c, -1.0), 0.0, TF_TOL_ULPS);
-  assert_rel (integral_to (c, 0.25), exp (0.25) - exp (-1.0), TF_TOL_ROUNDING);
-  assert_rel (integral_to (c, 1.0), 2.0 * sinh (1.0), TF_TOL_ROUNDING);
-  check_end_derivatives (c, M_E, M_E, exp (-1.0), exp (-1.0));
-}
-
-static void
-test_cos (void)
-{
-  double c[TF_CHEB_N];
-
-  fit (cos3, c);
-  /* mpmath 1.2.1: besselj(0, 3), -2*besselj(2, 3), 2*besselj(4, 3); odd ones vanish */
-  assert_abs (c[0], -0.2600519549019334376241546959773314368196, TF_TOL_ROUNDING);
-  assert_abs (c[2], -0.9721825211717821538156621882299680696033, TF_TOL_ROUNDING);
-  assert_abs (c[4], 0.2640683678492244206573785915573645281132, TF_TOL_ROUNDING);
-  for (guint k = 1; k < TF_CHEB_N; k += 2)
-    assert_abs (c[k], 0.0, TF_TOL_ROUNDING);
-  assert_rel (tf_cheb_eval (c, TF_CHEB_N, 0.1), cos (0.3), TF_TOL_ROUNDING);
-  assert_rel (tf_cheb_eval (c, TF_CHEB_N, -0.6), cos (-1.8), TF_TOL_ROUNDING);
-  /* ∫ from −1 to ξ of cos 3t = (sin 3ξ + sin 3) / 3 */
-  assert_abs (integral_to (c, -1.0), 0.0, TF_TOL_ULPS);
-  assert_rel (integral_to (c, 1.0), 2.0 * sin (3.0) / 3.0, TF_TOL_ROUNDING);
-  assert_rel (integral_to (c, 0.4), (sin (1.2) + sin (3.0)) / 3.0, TF_TOL_ROUNDING);
-  /* (cos 3ξ)′ = −3 sin 3ξ, (cos 3ξ)″ = −9 cos 3ξ */
-  check_end_derivatives (c, -3.0 * sin (3.0), -9.0 * cos (3.0), 3.0 * sin (3.0), -9.0 * cos (3.0));
+      g_test_message ("%s", kf->name);
+      fit (kf->f, c);
+      for (guint j = 0; j < kf->n_known; j++)
+        assert_abs (c[kf->known[j].k], kf->known[j].c, TF_TOL_ROUNDING);
+      for (guint k = 0; kf->zero && k < TF_CHEB_N; k++)
+        if (kf->zero (k))
+          assert_abs (c[k], 0.0, TF_TOL_ROUNDING);
+      for (guint j = 0; j < G_N_ELEMENTS (points); j++)
+        assert_rel (tf_cheb_eval (c, TF_CHEB_N, points[j]), kf->f (points[j]), TF_TOL_ROUNDING);
+      assert_abs (integral_to (c, -1.0), 0.0, TF_TOL_ULPS);
+      for (guint j = 0; j < G_N_ELEMENTS (ends); j++)
+        assert_rel (integral_to (c, ends[j]), kf->from_m1 (ends[j]), TF_TOL_ROUNDING);
+      check_end_derivatives (c, kf->d1 (1.0), kf->d2 (1.0), kf->d1 (-1.0), kf->d2 (-1.0));
+    }
 }
 
 int
@@ -204,8 +255,6 @@ main (int argc, char **argv)
   g_test_add_func ("/chebyshev/nodes", test_nodes);
   g_test_add_func ("/chebyshev/fit-basis", test_fit_basis);
   g_test_add_func ("/chebyshev/clenshaw", test_clenshaw);
-  g_test_add_func ("/chebyshev/cubic", test_cubic);
-  g_test_add_func ("/chebyshev/exp", test_exp);
-  g_test_add_func ("/chebyshev/cos", test_cos);
+  g_test_add_func ("/chebyshev/known-functions", test_known_functions);
   return g_test_run ();
 }

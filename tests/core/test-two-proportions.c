@@ -9,7 +9,6 @@
 #include "tf-curves.h"
 #include "tf-results.h"
 #include "tf-fisher.h"
-#include "tf-beta-difference.h"
 #include "tf-two-proportions.h"
 #include "tf-two-proportions-private.h"
 #include "tf-check.h"
@@ -174,21 +173,6 @@ test_hypergeometric (void)
   assert_rel (total, 1.0, TF_TOL_SERIES);
   assert_rel (exp (tf_hyper_log_cdf (&h, 12)), lower, TF_TOL_SERIES);
   assert_rel (exp (tf_hyper_log_sf (&h, 13)), 1.0 - lower, TF_TOL_SERIES);
-}
-
-/* The difference of two betas: for Beta(1, 1) each, Δ is triangular on (−1, 1)
- * (common practice): P(Δ <= d) = (1 + d)²/2 for d <= 0, density 1 − |d|. */
-static void
-test_beta_difference (void)
-{
-  TfBetaDiff bd;
-  double l, u;
-  tf_beta_diff_init (&bd, 1, 1, 1, 1);
-  g_assert_true (tf_beta_diff_log_cdf (&bd, -0.4, &l, &u));
-  assert_rel (exp (l), 0.18, TF_TOL_CONVERGED);
-  assert_rel (exp (u), 0.82, TF_TOL_CONVERGED);
-  assert_rel (exp (tf_beta_diff_log_density (&bd, 0.25)), 0.75, TF_TOL_CONVERGED);
-  assert_rel (tf_beta_diff_quantile_log (&bd, log (0.18), TRUE), -0.4, TF_TOL_CONVERGED);
 }
 
 static void
@@ -361,7 +345,6 @@ main (int argc, char **argv)
   g_test_add_func ("/two-proportions/extremes", test_extremes);
   g_test_add_func ("/two-proportions/validation", test_validation);
   g_test_add_func ("/two-proportions/hypergeometric", test_hypergeometric);
-  g_test_add_func ("/two-proportions/beta-difference", test_beta_difference);
   g_test_add_func ("/two-proportions/curves", test_curves);
   g_test_add_func ("/two-proportions/sample-size", test_sample_size);
   g_test_add_func ("/two-proportions/log-odds-ratio", test_log_or_bf);

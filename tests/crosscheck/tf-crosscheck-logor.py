@@ -34,22 +34,11 @@ Exit 0 when every case is inside it, 1 otherwise, 77 without numpy/scipy/mpmath.
 import math
 import sys
 import time
-import warnings
 
-from tf_crosscheck_common import run_driver
+from tf_crosscheck_common import references, run_driver
 
-try:
-    import numpy as np
-    import scipy
-    import scipy.integrate as si
-    import scipy.optimize as so
-    from scipy.special import logsumexp
-    import mpmath as mp
-except ImportError as e:
-    print('skipping: %s' % e)
-    sys.exit(77)
-
-warnings.simplefilter('ignore')
+np, scipy, special, mp, si, so = references('scipy.integrate', 'scipy.optimize')
+logsumexp = special.logsumexp
 mp.mp.dps = 30
 rng = np.random.default_rng(20261202)
 N = int(sys.argv[2]) if len(sys.argv) > 2 else 10000

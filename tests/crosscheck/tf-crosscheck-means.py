@@ -16,21 +16,12 @@ equal-tailed interval (at most 1). N/200 posterior cases and the corners of the 
 """
 import math
 import sys
-import warnings
 
-from tf_crosscheck_common import run_driver
+from tf_crosscheck_common import references, run_driver
 
-try:
-    import numpy as np
-    import scipy.stats as st
-    from scipy.integrate import quad
-    from scipy.optimize import brentq
-    import mpmath as mp
-except ImportError as e:
-    print('skipping: %s' % e)
-    sys.exit(77)
-
-warnings.simplefilter('ignore')
+np, _, _, mp, st, integrate, optimize = references('scipy.stats', 'scipy.integrate',
+                                                   'scipy.optimize')
+quad, brentq = integrate.quad, optimize.brentq
 rng = np.random.default_rng(20240604)
 N_CASES = int(sys.argv[2]) if len(sys.argv) > 2 else 10000
 DRIVER = sys.argv[1]

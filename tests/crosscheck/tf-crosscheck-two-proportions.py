@@ -42,23 +42,13 @@ Exit 0 when every case is inside its tolerance, 1 otherwise, 77 without scipy/mp
 import math
 import sys
 import time
-import warnings
 
-from tf_crosscheck_common import run_driver
+from tf_crosscheck_common import references, run_driver
 
 T0 = time.time()
 
-try:
-    import numpy as np
-    import scipy
-    import scipy.stats as st
-    import mpmath as mp
-    from scipy.stats._boost import _beta_pdf, _beta_cdf, _beta_sf
-except ImportError as e:
-    print('skipping: %s' % e)
-    sys.exit(77)
-
-warnings.simplefilter('ignore')
+np, scipy, _, mp, st, boost = references('scipy.stats', 'scipy.stats._boost')
+_beta_pdf, _beta_cdf, _beta_sf = boost._beta_pdf, boost._beta_cdf, boost._beta_sf
 mp.mp.dps = 40
 rng = np.random.default_rng(20240611)
 N = int(sys.argv[2]) if len(sys.argv) > 2 else 10000

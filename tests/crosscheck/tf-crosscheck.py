@@ -10,21 +10,10 @@ is missing. References: scipy 1.10.1 (Debian 12) and mpmath 1.2.1 at mp.dps = 40
 """
 import math
 import sys
-import warnings
 
-from tf_crosscheck_common import run_driver
+from tf_crosscheck_common import references, run_driver
 
-try:
-    import numpy as np
-    import scipy
-    import scipy.special as sp
-    import scipy.stats as st
-    import mpmath as mp
-except ImportError as e:
-    print('skipping: %s' % e)
-    sys.exit(77)
-
-warnings.simplefilter('ignore')
+np, scipy, sp, mp, st = references('scipy.stats')
 mp.mp.dps = 40
 rng = np.random.default_rng(20240601)
 N_CLOSED = int(sys.argv[2]) if len(sys.argv) > 2 else 10000
@@ -485,6 +474,16 @@ TOL = {
 }
 LOGS = {'lbf01', 'lbeta', 'ldbinom', 'ldbeta', 'ibeta', 'binom', 'tests', 'ibf'}
 
+
+
+def x_error(x, a, b, log_tail, target):
+    """The error in x of a quantile x of Beta(a, b) whose tail (log_tail, the
+    reference's log at x) should be target: |tail − target| / density, less one ulp of x
+    (the best a double can do), relative to the nearer end."""
+    dx = abs(mp.exp(log_tail) - target) / mp.exp(ref_ldbeta(x, a, b))
+    return float(max(0, dx - mpf(x) * 2.3e-16) / min(mpf(x), 1 - mpf(x)))
+
+
 worst = {q: (0.0, None) for q in TOL}
 count = {q: 0 for q in TOL}
 failed = 0
@@ -505,12 +504,8 @@ for (q, line, ref), out in zip(cases, outs):
                 r = (log_betainc_quad(a, b, x, True), log_betainc_quad(a, b, x, False))
             else:
                 r = ref_log_ibeta(a, b, x)
-            if r is None:
-                continue
-            dens = mp.exp(ref_ldbeta(x, a, b))
-            dx = abs(mp.exp(r[side]) - al) / dens
-            # one ulp of x is the best a double can do
-            errs.append(float(max(0, dx - mpf(x) * 2.3e-16) / min(mpf(x), 1 - mpf(x))))
+            if r is not None:
+                errs.append(x_error(x, a, b, r[side], al))
         ref = ('roundtrip-done', errs)
     if ref[0] == 'roundtrip':
         # the x error of our quantiles: (tail at x - p) / density, relative to x
@@ -518,11 +513,8 @@ for (q, line, ref), out in zip(cases, outs):
         errs = []
         for x, side in ((ours[0], 0), (ours[1], 1)):
             r = ref_log_ibeta(a, b, x) if 0 < x < 1 else None
-            if r is None:
-                continue
-            dens = mp.exp(ref_ldbeta(x, a, b))
-            dx = abs(mp.exp(r[side]) - p) / dens
-            errs.append(float(max(0, dx - mpf(x) * 2.3e-16) / min(mpf(x), 1 - mpf(x))))
+            if r is not None:
+                errs.append(x_error(x, a, b, r[side], p))
         ref = ('roundtrip-done', errs)
     if ref[0] == 'roundtrip-done':
         errs = ref[1]

@@ -5,11 +5,13 @@ and the tally of worst errors against stated tolerances.
 
     from tf_crosscheck_common import references, run_driver, log_uniform, abs_rel, Tally
     np, scipy, special, mp = references()          # exits 77 when one is missing
+    np, scipy, special, mp, st = references('scipy.stats')   # and more modules
     outs = run_driver(sys.argv[1], 'rates', lines) # one output line per input line
     tally = Tally({'q': ('label', 1e-9), ...})     # quantity -> (label, tolerance)
     tally.record('q', line, err)                   # NaN counts as a failure
     sys.exit(tally.report())                       # prints the table; 0 or 1
 """
+import importlib
 import math
 import subprocess
 import sys
@@ -17,18 +19,17 @@ import time
 import warnings
 
 
-def references():
-    """numpy, scipy, scipy.special and mpmath, or exit 77 (meson's "skipped")."""
+def references(*more):
+    """numpy, scipy, scipy.special and mpmath, then the modules named in more, or exit 77
+    (meson's "skipped") when one is missing."""
+    names = ('numpy', 'scipy', 'scipy.special', 'mpmath') + more
     try:
-        import numpy
-        import scipy
-        import scipy.special
-        import mpmath
+        modules = tuple(importlib.import_module(name) for name in names)
     except ImportError as e:
         print('skipping: %s' % e)
         sys.exit(77)
     warnings.simplefilter('ignore')
-    return numpy, scipy, scipy.special, mpmath
+    return modules
 
 
 def run_driver(path, area, lines):

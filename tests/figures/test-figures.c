@@ -12,18 +12,6 @@
 #define H 660
 #define SCALE (W / (120.0 * 72.0 / 25.4))   /* a 120 mm wide figure, ~212 dpi */
 
-void
-test_pixel_at (cairo_surface_t *surface, int x, int y, double rgb[3])
-{
-  const unsigned char *data = cairo_image_surface_get_data (surface);
-  int stride = cairo_image_surface_get_stride (surface);
-  guint32 pixel = *(const guint32 *) (data + y * stride + 4 * x);
-
-  rgb[0] = ((pixel >> 16) & 0xff) / 255.0;
-  rgb[1] = ((pixel >> 8) & 0xff) / 255.0;
-  rgb[2] = (pixel & 0xff) / 255.0;
-}
-
 double
 test_colour_distance (const double rgb[3], const TfColour *colour, const TfColour *over)
 {

@@ -6,9 +6,7 @@
 #include <cairo.h>
 #include "tf-figure-theme.h"
 #include "tf-analysis.h"
-
-/* The pixel at x, y of an RGB24/ARGB32 image surface, as r, g, b in 0..1. */
-void test_pixel_at (cairo_surface_t *surface, int x, int y, double rgb[3]);
+#include "test-pixels.h"
 /* The largest channel difference between a pixel and a colour over a background (alpha
  * composited). */
 double test_colour_distance (const double rgb[3], const TfColour *colour, const TfColour *over);

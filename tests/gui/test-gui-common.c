@@ -126,6 +126,23 @@ assert_list_shows (TfResultList *list, const TfResults *expected)
     }
 }
 
+/* The [Data] field key is marked as wrong, and its message names each of the words
+ * that follow (NULL-terminated). */
+void
+assert_field_says (TfAnalysisForm *form, const char *key, ...)
+{
+  const char *message = tf_analysis_form_get_message (form, "Data", key);
+  va_list words;
+
+  g_assert_true (gtk_widget_has_css_class (tf_analysis_form_get_field (form, "Data", key), "error"));
+  g_assert_nonnull (message);
+  va_start (words, key);
+  for (const char *word = va_arg (words, const char *); word; word = va_arg (words, const char *))
+    if (strstr (message, word) == NULL)
+      g_error ("[Data] %s: “%s” does not name “%s”", key, message, word);
+  va_end (words);
+}
+
 /* The window shows expected: the page of results, every number of expected in the
  * list, a figure, and explanations. */
 void

@@ -3,6 +3,7 @@
  * figure drawn to image and PDF surfaces, checked pixel by pixel.
  */
 #include "test-gui.h"
+#include "test-pixels.h"
 
 /* Figure kinds, the crosshair readout and export, in the window */
 
@@ -177,6 +178,22 @@ find_dialog (const char *heading)
   return NULL;
 }
 
+/* After an export to path failed: a dialog names the file (it is closed here), and
+ * nothing was written. */
+static void
+assert_export_refused (const char *path)
+{
+  g_autofree char *name = g_filename_display_name (path);
+  g_autofree char *heading = g_strdup_printf ("Could Not Export “%s”", name);
+  AdwMessageDialog *dialog;
+
+  iterate ();
+  dialog = find_dialog (heading);
+  g_assert_nonnull (dialog);
+  gtk_window_destroy (GTK_WINDOW (dialog));
+  g_assert_false (g_file_test (path, G_FILE_TEST_EXISTS));
+}
+
 static void
 test_window_export_figure (void)
 {
@@ -220,16 +237,7 @@ test_window_export_figure (void)
 
   /* A folder that does not exist: a dialog that names the file, and nothing written. */
   g_assert_false (tf_window_export_figure (window, bad_file, 120, 80, 300, &options));
-  iterate ();
-  {
-    g_autofree char *name = g_filename_display_name (bad);
-    g_autofree char *heading = g_strdup_printf ("Could Not Export “%s”", name);
-
-    dialog = find_dialog (heading);
-    g_assert_nonnull (dialog);
-    gtk_window_destroy (GTK_WINDOW (dialog));
-  }
-  g_assert_false (g_file_test (bad, G_FILE_TEST_EXISTS));
+  assert_export_refused (bad);
 
   gtk_window_destroy (GTK_WINDOW (window));
   iterate ();
@@ -288,16 +296,9 @@ test_window_export_report (void)
   {
     g_autofree char *bad = g_build_filename (dir, "no-such-folder", "report.pdf", NULL);
     g_autoptr (GFile) bad_file = g_file_new_for_path (bad);
-    g_autofree char *name = g_filename_display_name (bad);
-    g_autofree char *heading = g_strdup_printf ("Could Not Export “%s”", name);
-    AdwMessageDialog *dialog;
 
     g_assert_false (tf_window_export_report (window, bad_file));
-    iterate ();
-    dialog = find_dialog (heading);
-    g_assert_nonnull (dialog);
-    gtk_window_destroy (GTK_WINDOW (dialog));
-    g_assert_false (g_file_test (bad, G_FILE_TEST_EXISTS));
+    assert_export_refused (bad);
   }
 
   gtk_window_destroy (GTK_WINDOW (window));
@@ -316,19 +317,6 @@ test_window_export_report (void)
 }
 
 /* Figure */
-
-static void
-pixel_at (cairo_surface_t *surface, int x, int y, double rgb[3])
-{
-  const unsigned char *data = cairo_image_surface_get_data (surface);
-  int stride = cairo_image_surface_get_stride (surface);
-  guint32 pixel = *(const guint32 *) (data + y * stride + 4 * x);
-
-  /* CAIRO_FORMAT_RGB24: native-endian xRGB */
-  rgb[0] = ((pixel >> 16) & 0xff) / 255.0;
-  rgb[1] = ((pixel >> 8) & 0xff) / 255.0;
-  rgb[2] = (pixel & 0xff) / 255.0;
-}
 
 static double
 colour_distance (const double rgb[3], const TfColour *colour)
@@ -373,9 +361,9 @@ check_figure_pixels (TfFigureStyle style)
     cairo_surface_write_to_png (surface, g_getenv ("TF_GUI_TEST_PNG"));
 
   /* The background at a corner. */
-  pixel_at (surface, 1, 1, rgb);
+  test_pixel_at (surface, 1, 1, rgb);
   g_assert_cmpfloat (colour_distance (rgb, &theme.background), <, 0.01);
-  pixel_at (surface, width - 2, height - 2, rgb);
+  test_pixel_at (surface, width - 2, height - 2, rgb);
   g_assert_cmpfloat (colour_distance (rgb, &theme.background), <, 0.01);
 
   /* The plot area sits inside the figure. */
@@ -399,7 +387,7 @@ check_figure_pixels (TfFigureStyle style)
     for (int dx = -4; dx <= 4; dx++)
       {
         int x = CLAMP (px + dx, 0, width - 1), y = CLAMP (py + dy, 0, height - 1);
-        pixel_at (surface, x, y, rgb);
+        test_pixel_at (surface, x, y, rgb);
         best = MIN (best, colour_distance (rgb, &theme.series[TF_SERIES_POSTERIOR]));
       }
   g_assert_cmpfloat (best, <, 0.12);
@@ -459,7 +447,7 @@ test_figure_invalid (void)
   g_assert_false (tf_figure_draw_densities (cr, 300, 200, 1.0, analysis, TF_FIGURE_STYLE_LIGHT));
   cairo_destroy (cr);
   cairo_surface_flush (surface);
-  pixel_at (surface, 1, 1, rgb);
+  test_pixel_at (surface, 1, 1, rgb);
   g_assert_cmpfloat (colour_distance (rgb, &theme.background), <, 0.01);
   cairo_surface_destroy (surface);
 }

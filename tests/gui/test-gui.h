@@ -46,6 +46,8 @@ void type_into (TfWindow *window, const char *group, const char *key, const char
 /* Every number of expected is in the list with the text the core formats for it; the
  * two limits of an interval in one row. */
 void assert_list_shows (TfResultList *list, const TfResults *expected);
+/* The [Data] field key is marked, its message naming each word (NULL-terminated). */
+void assert_field_says (TfAnalysisForm *form, const char *key, ...) G_GNUC_NULL_TERMINATED;
 /* The window shows expected: the page of results, the list, a figure, explanations. */
 void assert_window_shows_results (TfWindow *window, const TfResults *expected);
 /* Nothing stale is shown: the page that says what to fix, and no numbers, figure or
