@@ -1,5 +1,5 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later
- * twofold-cli: Twofold without a window (DESIGN.md, "Command line").
+ * twofold-cli: Twofold without a window (DEVELOPERS.md, "Command line").
  *
  * Exit codes: 0 done; 1 the analysis could not be computed; 2 bad usage or a bad file
  * (the message on stderr names the file, group and key; nothing is written to stdout).

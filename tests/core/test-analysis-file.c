@@ -69,7 +69,7 @@ test_load_fields (void)
 }
 
 /* Saving and loading again gives the same analysis, and the keys Twofold does not
- * know come back as they were (DESIGN.md: "Unknown keys are kept"). */
+ * know come back as they were (DEVELOPERS.md: "Unknown keys are kept"). */
 static void
 test_round_trip_keeps_unknown_keys (void)
 {

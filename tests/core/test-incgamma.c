@@ -11,7 +11,8 @@
  */
 #include <float.h>
 
-#include "tf-poisson.h"
+#include "tf-incgamma.h"
+#include "tf-logspace.h"
 #include "tf-check.h"
 
 typedef struct {

@@ -21,6 +21,7 @@
  */
 #include <math.h>
 
+#include "tf-design.h"
 #include "tf-crosscheck-driver.h"
 #include "tf-logspace.h"
 #include "tf-incbeta.h"

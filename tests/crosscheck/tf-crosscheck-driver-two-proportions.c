@@ -14,6 +14,7 @@
  */
 #include <math.h>
 
+#include "tf-design.h"
 #include "tf-crosscheck-driver.h"
 #include "tf-fisher.h"
 #include "tf-beta-difference.h"

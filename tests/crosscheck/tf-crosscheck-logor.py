@@ -1,6 +1,6 @@
 # SPDX-License-Identifier: GPL-3.0-or-later
 """Cross-check of the two-proportions Bayes factor with a normal prior on the log odds
-ratio (core/tf-two-proportions-logor.c) from 1 to 10^12 trials a group.
+ratio (core/designs/proportions/tf-two-proportions-logor.c) from 1 to 10^12 trials a group.
 
 Usage: /usr/bin/python3 tf-crosscheck-logor.py PATH/TO/tf-crosscheck-driver [N]
 

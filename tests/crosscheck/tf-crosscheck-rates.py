@@ -23,7 +23,7 @@ References (Debian 12: scipy 1.10.1, mpmath 1.2.1):
       the log marginals). Counts 0..1e12, shapes 1e-3..1e12, exposures and prior
       rates 1e-6..1e12, with strong priors placed on, near and far from the data and
       the null; and a grid of the ranges' edges (prior means up to 1e12).
-It also re-derives Temme's coefficients in core/tf-poisson.c.
+It also re-derives Temme's coefficients in core/math/tf-incgamma.c.
 """
 import itertools
 import math
@@ -70,7 +70,7 @@ def near(m):
     return float(min(k, 1e12))
 
 
-# --- Temme coefficients: exact rational series, as documented in tf-poisson.c ---------
+# --- Temme coefficients: exact rational series, as documented in tf-incgamma.c ---------
 
 def temme_coefficients(order=34):
     def mul(a, b):
@@ -530,7 +530,7 @@ def beta_x_error(c, sa, sb, lp, lower):
 
 
 # the references against each other, on samples
-record('temme', 'core/tf-poisson.c', check_temme(__file__.rsplit('/tests/', 1)[0] + '/core/tf-poisson.c'))
+record('temme', 'core/math/tf-incgamma.c', check_temme(__file__.rsplit('/tests/', 1)[0] + '/core/math/tf-incgamma.c'))
 got = 0
 while got < N_REF:
     a, x = draw_a_x()
