@@ -38,7 +38,7 @@ tf_window_document_update_title (TfWindow *self)
 {
   const char *title = has_title (self) ? self->analysis->title : _("Untitled Analysis");
   const char *design = tf_design_label (self->analysis ? self->analysis->design
-                                                       : TF_DESIGN_ONE_PROPORTION);
+                                                       : tf_design_default ());
   g_autofree char *subtitle = NULL;
   g_autofree char *shown_title = NULL;
 
@@ -281,7 +281,7 @@ tf_window_document_open_demo (TfWindow *self)
   if (analysis == NULL)
     {
       g_warning ("The demo analysis could not be read; showing the defaults");
-      analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+      analysis = tf_analysis_new (tf_design_default ());
     }
   tf_window_document_set (self, analysis, NULL);
   self->is_demo = TRUE;
@@ -292,7 +292,7 @@ void
 tf_window_document_init (TfWindow *self)
 {
   g_signal_connect (self->form, "changed", G_CALLBACK (on_form_changed), self);
-  self->analysis = tf_analysis_new (TF_DESIGN_ONE_PROPORTION);
+  self->analysis = tf_analysis_new (tf_design_default ());
   tf_analysis_form_set_analysis (self->form, self->analysis);
   recompute (self);
   tf_window_document_update_title (self);

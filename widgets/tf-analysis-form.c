@@ -26,16 +26,6 @@ G_DEFINE_FINAL_TYPE (TfAnalysisForm, tf_analysis_form, GTK_TYPE_WIDGET)
 enum { SIGNAL_CHANGED, N_SIGNALS };
 static guint signals[N_SIGNALS];
 
-/* The design a new form shows: the registry's first. */
-static TfDesign
-first_design (void)
-{
-  for (guint d = 0; d < TF_N_DESIGNS; d++)
-    if (tf_design_class ((TfDesign) d))
-      return (TfDesign) d;
-  g_return_val_if_reached ((TfDesign) 0);
-}
-
 static TfFormPage *
 current_page (TfAnalysisForm *self)
 {
@@ -69,9 +59,9 @@ tf_analysis_form_get_design (TfAnalysisForm *self)
 {
   guint selected;
 
-  g_return_val_if_fail (TF_IS_ANALYSIS_FORM (self), first_design ());
+  g_return_val_if_fail (TF_IS_ANALYSIS_FORM (self), tf_design_default ());
   selected = gtk_drop_down_get_selected (self->design_dropdown);
-  return selected < TF_N_DESIGNS ? (TfDesign) selected : first_design ();
+  return selected < TF_N_DESIGNS ? (TfDesign) selected : tf_design_default ();
 }
 
 void
@@ -319,7 +309,7 @@ tf_analysis_form_init (TfAnalysisForm *self)
       tf_form_page_fill (&self->page[d], defaults);
     }
   gtk_drop_down_set_model (self->design_dropdown, G_LIST_MODEL (designs));
-  gtk_drop_down_set_selected (self->design_dropdown, (guint) first_design ());
+  gtk_drop_down_set_selected (self->design_dropdown, (guint) tf_design_default ());
   show_page (self);
   self->updating = FALSE;
   g_signal_connect_swapped (self->design_dropdown, "notify::selected",

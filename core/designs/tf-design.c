@@ -30,6 +30,15 @@ tf_design_class (TfDesign design)
   return (guint) design < TF_N_DESIGNS ? designs[design] : NULL;
 }
 
+TfDesign
+tf_design_default (void)
+{
+  for (guint d = 0; d < TF_N_DESIGNS; d++)
+    if (designs[d])
+      return (TfDesign) d;
+  g_return_val_if_reached ((TfDesign) 0);
+}
+
 const char *
 tf_design_to_string (TfDesign design)
 {

@@ -18,6 +18,9 @@ const char *tf_design_label (TfDesign design);              /* translated, for p
 /* The file's words for every design, separated by ", " (newly allocated). */
 char *tf_design_names_joined (void);
 
+/* The design a new analysis starts from when none is chosen: the registry's first. */
+TfDesign tf_design_default (void);
+
 /* A new analysis of this design with Twofold's neutral defaults. */
 TfAnalysis *tf_analysis_new (TfDesign design);
 /* Sets every field of an analysis to the defaults of this design (keeps the source). */
