@@ -16,6 +16,9 @@
 
 G_BEGIN_DECLS
 
+/* In a class's initialiser: a table and its length, e.g. TF_DESIGN_TABLE (numbers, numbers). */
+#define TF_DESIGN_TABLE(member, table) .member = (table), .n_##member = G_N_ELEMENTS (table)
+
 /* A required number of [Data], held in the double at offset in TfAnalysis. */
 typedef struct {
   const char *key;

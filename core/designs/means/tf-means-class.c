@@ -188,8 +188,7 @@ static const TfIntervalMethod means_intervals[] = {
 
 /* The prior is on the standardised effect δ, so the credible intervals are of δ. */
 #define MEANS_INTERVALS                              \
-  .intervals = means_intervals,                      \
-  .n_intervals = G_N_ELEMENTS (means_intervals),     \
+  TF_DESIGN_TABLE (intervals, means_intervals),      \
   .credible_of = N_("δ")
 
 #define MEANS_HOOKS                                  \
@@ -278,10 +277,8 @@ const TfDesignClass tf_one_mean_class = {
   .symbol = "μ",
   .data_words = one_mean_data_words,
   MEANS_WORDS,
-  .samples = one_mean_samples,
-  .n_samples = G_N_ELEMENTS (one_mean_samples),
-  .fields = one_mean_fields,
-  .n_fields = G_N_ELEMENTS (one_mean_fields),
+  TF_DESIGN_TABLE (samples, one_mean_samples),
+  TF_DESIGN_TABLE (fields, one_mean_fields),
   .method_of = one_mean_method_of,
   MEANS_INTERVALS,
   .known_sd = TRUE,
@@ -299,10 +296,8 @@ const TfDesignClass tf_paired_means_class = {
   .symbol = N_("the mean difference"),
   .data_words = paired_means_data_words,
   MEANS_WORDS,
-  .samples = paired_means_samples,
-  .n_samples = G_N_ELEMENTS (paired_means_samples),
-  .fields = paired_means_fields,
-  .n_fields = G_N_ELEMENTS (paired_means_fields),
+  TF_DESIGN_TABLE (samples, paired_means_samples),
+  TF_DESIGN_TABLE (fields, paired_means_fields),
   .method_of = one_mean_method_of,
   MEANS_INTERVALS,
   .summarise = tf_paired_means_summarise,
@@ -319,10 +314,8 @@ const TfDesignClass tf_two_means_class = {
   .data_words = two_means_data_words,
   .bayes_factor_note = two_means_bayes_factor_note,
   MEANS_WORDS,
-  .samples = two_means_samples,
-  .n_samples = G_N_ELEMENTS (two_means_samples),
-  .fields = two_means_fields,
-  .n_fields = G_N_ELEMENTS (two_means_fields),
+  TF_DESIGN_TABLE (samples, two_means_samples),
+  TF_DESIGN_TABLE (fields, two_means_fields),
   .method_of = two_means_method_of,
   MEANS_INTERVALS,
   .equal_variances = TRUE,
