@@ -107,6 +107,154 @@ answer (int side, double t, gboolean lower)
   return (side == 0) == lower ? v : 1.0 - v;
 }
 
+/* The search in the frame: the lower tail of Beta(p, q) at ln P = lp, the current
+ * point t on its side (0: t = ln w, 1: t = ln(1 − w)), and the bracket (lo, hi) in t
+ * that holds the root. */
+typedef struct {
+  TfIncbetaShape *sh;
+  double lp;
+  gboolean lower;               /* the tail asked, for the answer's x */
+  double p, q;
+  double sd;                    /* the frame's standard deviation */
+  int side;
+  double t;
+  double lo, hi;
+} Search;
+
+/* One evaluation at t: g = ln tail − lp (rising with w), dg/dt, d²g/dt², and the
+ * natural scale of t. */
+typedef struct {
+  double g, g1, g2, scale;
+} Eval;
+
+/* The other side is the smaller now: t = ln(1 − e^t), the bracket mapped. */
+static void
+switch_side (Search *s)
+{
+  double l0 = s->lo;
+  s->side = 1 - s->side;
+  s->t = tf_log1mexp (s->t);
+  s->lo = tf_log1mexp (s->hi);
+  s->hi = tf_log1mexp (l0);
+}
+
+/* dg/dt and d²g/dt² from the density w^{p−1} (1 − w)^{q−1} / B = e^lpre / (w (1 − w)),
+ * given w, 1 − w, their logs and l = ln tail. */
+static void
+derivatives (const Search *s, double w, double wc, double lw, double lwc, double l,
+             double lpre, Eval *e)
+{
+  if (s->side == 0)
+    {
+      e->g1 = exp (lpre - lwc - l);
+      e->g2 = e->g1 * (s->p - (s->q - 1.0) * (w / wc) - e->g1);
+    }
+  else
+    {
+      e->g1 = -exp (lpre - lw - l);
+      e->g2 = e->g1 * (s->q - (s->p - 1.0) * (wc / w) - e->g1);
+    }
+}
+
+/* The tail and density at t (one incomplete beta evaluation), the bracket narrowed by
+ * the sign of g; FALSE with the answer in *x when that ends the search. */
+static gboolean
+evaluate (Search *s, Eval *e, double *x)
+{
+  double v = exp (s->t), vc = 1.0 - v;
+  /* the natural scale of t, sd / (the side's value), at most 1 */
+  e->scale = MIN (1.0, s->sd / v);
+  double lv = s->t, lvc = log1p (-v);
+  /* w and 1 − w, and x, y = 1 − x of the tail asked */
+  double w = s->side ? vc : v, wc = s->side ? v : vc;
+  double lw = s->side ? lvc : lv, lwc = s->side ? lv : lvc;
+  double l, u, lpre;
+  if (s->lower)
+    tf_incbeta_shape_log_both (s->sh, w, wc, &l, &u, &lpre);
+  else
+    tf_incbeta_shape_log_both (s->sh, wc, w, &u, &l, &lpre);
+  e->g = l - s->lp;    /* rises with w */
+  if (isnan (e->g))
+    {
+      *x = NAN;
+      return FALSE;
+    }
+  if (e->g == 0.0)
+    {
+      *x = answer (s->side, s->t, s->lower);
+      return FALSE;
+    }
+  if ((e->g > 0.0) == (s->side == 0))
+    s->hi = s->t;
+  else
+    s->lo = s->t;
+  derivatives (s, w, wc, lw, lwc, l, lpre, e);
+  return TRUE;
+}
+
+/* Halley's step in t where its correction is moderate, else Newton's (*halley says
+ * which). */
+static double
+propose_step (const Search *s, const Eval *e, gboolean *halley)
+{
+  double newton = -e->g / e->g1;
+  double c = 0.5 * newton * e->g2 / e->g1;
+  *halley = fabs (c) <= 0.5;
+  double step = *halley ? newton / (1.0 + c) : newton;
+  /* Far below a quantile near 1 the tail falls like e^{−p(1 − w)} (the gamma limit,
+   * ln Q(q, u) ≈ −u + (q − 1) ln u, u = p(1 − w), slope −u + q − 1 in t): there
+   * Newton's step in 1 − w itself, not in its log */
+  if (s->side == 1 && e->g1 < -2.0 * MAX (s->q, 1.0) && newton < 0.0 && newton > -1.0)
+    {
+      step = log1p (newton);
+      *halley = FALSE;
+    }
+  return step;
+}
+
+/* The step taken, or the bracket halved where it leaves the bracket; FALSE with the
+ * answer in *x when the search has converged. */
+static gboolean
+take_step (Search *s, const Eval *e, double step, gboolean halley, double *x)
+{
+  double tn = s->t + step;
+  /* After a step δ (in units of the scale σ) what is left is about σ(δ/σ)³ for
+   * Halley's method and σ(δ/σ)² for Newton's: stop when that is below 1e-15 σ
+   * (the σ of the curvature, |g'/g''|, when it is the smaller). */
+  double tol = (halley ? 1e-5 : 1e-8) * MIN (e->scale, fabs (e->g1 / e->g2));
+  *x = NAN;
+  if (tn == s->t || (tn > s->lo && tn < s->hi && isfinite (tn)))
+    {
+      if (fabs (step) <= tol || tn == s->t)
+        {
+          *x = answer (s->side, tn, s->lower);
+          return FALSE;
+        }
+    }
+  else
+    {
+      /* outside the bracket: halve it, or walk down while it is open below */
+      if (s->hi <= T_MIN)
+        {
+          *x = answer (s->side, -INFINITY, s->lower);    /* the quantile underflows */
+          return FALSE;
+        }
+      tn = isinf (s->lo) ? MAX (2.0 * s->hi - 1.0, T_MIN) : 0.5 * (s->lo + s->hi);
+      if (!(tn > s->lo && tn < s->hi))
+        {
+          *x = answer (s->side, s->t, s->lower);
+          return FALSE;
+        }
+    }
+  if (s->hi - s->lo <= 2.0 * DBL_EPSILON * fabs (tn))
+    {
+      *x = answer (s->side, tn, s->lower);
+      return FALSE;
+    }
+  s->t = tn;
+  return TRUE;
+}
+
 double
 tf_incbeta_shape_inverse_log (TfIncbetaShape *sh, double lp, gboolean lower)
 {
@@ -125,95 +273,29 @@ tf_incbeta_shape_inverse_log (TfIncbetaShape *sh, double lp, gboolean lower)
     }
 
   /* the frame: the lower tail of Beta(p, q) */
-  const double p = lower ? a : b, q = lower ? b : a;
-  int side;
-  double t;
-  initial_guess (sh, lp, p, q, &side, &t);
-
-  const double s = p + q, sd = sqrt (p / s * (q / s) / (s + 1.0));
-  double lo = -INFINITY, hi = 0.0;   /* the root lies in (lo, hi) */
+  Search s = { .sh = sh, .lp = lp, .lower = lower };
+  s.p = lower ? a : b;
+  s.q = lower ? b : a;
+  initial_guess (sh, lp, s.p, s.q, &s.side, &s.t);
+  const double n = s.p + s.q;
+  s.sd = sqrt (s.p / n * (s.q / n) / (n + 1.0));
+  s.lo = -INFINITY;
+  s.hi = 0.0;
 
   for (int iter = 0; iter < 300; iter++)
     {
-      if (t > -G_LN2)
-        {
-          /* the other side is the smaller now: t = ln(1 − e^t), the bracket mapped */
-          double l0 = lo;
-          side = 1 - side;
-          t = tf_log1mexp (t);
-          lo = tf_log1mexp (hi);
-          hi = tf_log1mexp (l0);
-        }
-      double v = exp (t), vc = 1.0 - v;
-      /* the natural scale of t, sd / (the side's value), at most 1 */
-      double scale = MIN (1.0, sd / v);
-      double lv = t, lvc = log1p (-v);
-      /* w and 1 − w, and x, y = 1 − x of the tail asked */
-      double w = side ? vc : v, wc = side ? v : vc;
-      double lw = side ? lvc : lv, lwc = side ? lv : lvc;
-      double l, u, lpre;
-      if (lower)
-        tf_incbeta_shape_log_both (sh, w, wc, &l, &u, &lpre);
-      else
-        tf_incbeta_shape_log_both (sh, wc, w, &u, &l, &lpre);
-      double g = l - lp;    /* rises with w */
-      if (isnan (g))
-        return NAN;
-      if (g == 0.0)
-        return answer (side, t, lower);
-      if ((g > 0.0) == (side == 0))
-        hi = t;
-      else
-        lo = t;
-
-      /* dg/dt and d²g/dt² from the density w^{p−1} (1 − w)^{q−1} / B = e^lpre / (w (1 − w)) */
-      double g1, g2;
-      if (side == 0)
-        {
-          g1 = exp (lpre - lwc - l);
-          g2 = g1 * (p - (q - 1.0) * (w / wc) - g1);
-        }
-      else
-        {
-          g1 = -exp (lpre - lw - l);
-          g2 = g1 * (q - (p - 1.0) * (wc / w) - g1);
-        }
-      double newton = -g / g1;
-      double c = 0.5 * newton * g2 / g1;
-      gboolean halley = fabs (c) <= 0.5;
-      double step = halley ? newton / (1.0 + c) : newton;
-      /* Far below a quantile near 1 the tail falls like e^{−p(1 − w)} (the gamma limit,
-       * ln Q(q, u) ≈ −u + (q − 1) ln u, u = p(1 − w), slope −u + q − 1 in t): there
-       * Newton's step in 1 − w itself, not in its log */
-      if (side == 1 && g1 < -2.0 * MAX (q, 1.0) && newton < 0.0 && newton > -1.0)
-        {
-          step = log1p (newton);
-          halley = FALSE;
-        }
-      double tn = t + step;
-      /* After a step δ (in units of the scale σ) what is left is about σ(δ/σ)³ for
-       * Halley's method and σ(δ/σ)² for Newton's: stop when that is below 1e-15 σ
-       * (the σ of the curvature, |g'/g''|, when it is the smaller). */
-      double tol = (halley ? 1e-5 : 1e-8) * MIN (scale, fabs (g1 / g2));
-      if (tn == t || (tn > lo && tn < hi && isfinite (tn)))
-        {
-          if (fabs (step) <= tol || tn == t)
-            return answer (side, tn, lower);
-        }
-      else
-        {
-          /* outside the bracket: halve it, or walk down while it is open below */
-          if (hi <= T_MIN)
-            return answer (side, -INFINITY, lower);    /* the quantile underflows */
-          tn = isinf (lo) ? MAX (2.0 * hi - 1.0, T_MIN) : 0.5 * (lo + hi);
-          if (!(tn > lo && tn < hi))
-            return answer (side, t, lower);
-        }
-      if (hi - lo <= 2.0 * DBL_EPSILON * fabs (tn))
-        return answer (side, tn, lower);
-      t = tn;
+      Eval e;
+      gboolean halley;
+      double x;
+      if (s.t > -G_LN2)
+        switch_side (&s);
+      if (!evaluate (&s, &e, &x))
+        return x;
+      double step = propose_step (&s, &e, &halley);
+      if (!take_step (&s, &e, step, halley, &x))
+        return x;
     }
-  return answer (side, t, lower);
+  return answer (s.side, s.t, s.lower);
 }
 
 double
