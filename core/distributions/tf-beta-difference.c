@@ -136,12 +136,17 @@ line_log (const Line *ln, double u, double *dlog)
   return line_dbeta (v, vy, ln->pv, ln->qv, ln->lbv) + lt + ln->log_len + ls + lsc;
 }
 
-/* The peak of the integrand on the line and its width (1 / √ −(ln g)''): a bracket on
- * the log-derivative by doubling steps, regula falsi (Illinois variant, Dowell &
- * Jarratt 1971) with bisection until the point is within a fraction of a width of the
- * peak, then Newton steps with the curvature from central differences. */
+/* A bracket on the integrand's log-derivative, da >= 0 >= db on [ua, ub] once found,
+ * and the latest point um, with its derivative dm. */
+typedef struct {
+  double ua, da, ub, db;
+  double um, dm;
+} PeakBracket;
+
+/* From u0, steps doubling from *step towards the rise until the log-derivative changes
+ * sign (*step left doubled); the bracket in order. */
 static gboolean
-find_peak (const Line *ln, double u0, double step, double *peak, double *width)
+bracket_peak (const Line *ln, double u0, double *step, PeakBracket *br)
 {
   double ua = u0, da, ub, db, g;
 
@@ -156,8 +161,8 @@ find_peak (const Line *ln, double u0, double step, double *peak, double *width)
         return FALSE;
       ua = ub;
       da = db;
-      ub = ua + (da > 0.0 ? step : -step);
-      step *= 2.0;
+      ub = ua + (da > 0.0 ? *step : -*step);
+      *step *= 2.0;
       g = line_log (ln, ub, &db);
       if (!isfinite (g) || !isfinite (db))
         return FALSE;
@@ -176,9 +181,20 @@ find_peak (const Line *ln, double u0, double step, double *peak, double *width)
       da = db;
       db = t;
     }
-  /* now da >= 0 >= db on [ua, ub]; Illinois steps, a bisection whenever a step left
-   * more than half the bracket, until the last two points put the peak within about
-   * a third of the local width */
+  br->ua = ua;
+  br->da = da;
+  br->ub = ub;
+  br->db = db;
+  return TRUE;
+}
+
+/* The bracket narrowed by Illinois steps, a bisection whenever a step left more than
+ * half the bracket, until the last two points put the peak within about a third of the
+ * local width; br->um, br->dm the point reached. */
+static gboolean
+illinois (const Line *ln, PeakBracket *br)
+{
+  double ua = br->ua, da = br->da, ub = br->ub, db = br->db, g;
   double um = ua, dm = da, wa = 1.0, wb = 1.0, up = NAN, dp = NAN;
   gboolean bisect = FALSE;
   for (int it = 0; it < 100 && da != 0.0 && db != 0.0; it++)
@@ -201,10 +217,23 @@ find_peak (const Line *ln, double u0, double step, double *peak, double *width)
       up = um;
       dp = dm;
     }
-  um = da == 0.0 ? ua : (db == 0.0 ? ub : um);
-  /* Newton steps with the curvature from the log-derivative a little to each side, until
-   * the step and the change of the width are small */
-  double k0 = (da - db) / (ub - ua);
+  br->ua = ua;
+  br->da = da;
+  br->ub = ub;
+  br->db = db;
+  br->um = da == 0.0 ? ua : (db == 0.0 ? ub : um);
+  br->dm = dm;
+  return TRUE;
+}
+
+/* Newton steps from br->um with the curvature from the log-derivative a little to each
+ * side, until the step and the change of the width are small (step: the width when
+ * the bracket gives none). */
+static gboolean
+newton_peak (const Line *ln, const PeakBracket *br, double step, double *peak, double *width)
+{
+  double um = br->um, dm = br->dm, g;
+  double k0 = (br->da - br->db) / (br->ub - br->ua);
   double wdt = isfinite (k0) && k0 > 0.0 ? 1.0 / sqrt (k0) : step;
   for (int it = 0; it < 12; it++)
     {
@@ -223,12 +252,26 @@ find_peak (const Line *ln, double u0, double step, double *peak, double *width)
           *width = wdt;
           return TRUE;
         }
-      um = CLAMP (um + delta, ua, ub);
+      um = CLAMP (um + delta, br->ua, br->ub);
       g = line_log (ln, um, &dm);
       if (!isfinite (g) || !isfinite (dm))
         return FALSE;
     }
   return FALSE;
+}
+
+/* The peak of the integrand on the line and its width (1 / √ −(ln g)''): a bracket on
+ * the log-derivative by doubling steps, regula falsi (Illinois variant, Dowell &
+ * Jarratt 1971) with bisection until the point is within a fraction of a width of the
+ * peak, then Newton steps with the curvature from central differences. */
+static gboolean
+find_peak (const Line *ln, double u0, double step, double *peak, double *width)
+{
+  PeakBracket br;
+
+  if (!bracket_peak (ln, u0, &step, &br) || !illinois (ln, &br))
+    return FALSE;
+  return newton_peak (ln, &br, step, peak, width);
 }
 
 /* ln ∫ g(u) du by the trapezoidal rule centred on the peak, FALSE when it did not
