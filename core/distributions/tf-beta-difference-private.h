@@ -13,4 +13,9 @@ typedef enum { TF_BD_LOWER, TF_BD_UPPER, TF_BD_DENSITY } TfBdKind;
  * integration (tf-beta-difference-pieces.c); *ok FALSE when it did not converge. */
 double tf_beta_diff_pieces (TfBetaDiff *bd, double d, TfBdKind kind, gboolean *ok);
 
+/* The same by the fixed rule over θA (over_a) or θB (tf-beta-difference-line.c): the
+ * trapezoidal rule on the line; FALSE when it does not settle there. */
+gboolean tf_beta_diff_line (const TfBetaDiff *bd, gboolean over_a, double d, TfBdKind kind,
+                            double *result);
+
 G_END_DECLS
