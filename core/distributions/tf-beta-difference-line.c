@@ -245,6 +245,95 @@ find_peak (const Line *ln, double u0, double step, double *peak, double *width)
   return newton_peak (ln, &br, step, peak, width);
 }
 
+/* One walk out from the peak (dir −1 or 1) at step h, until a term is below e^−log_cut
+ * of the largest so far (*gmax, raised on the way) and falling: the logs in out[], their
+ * number in *count; FALSE when it does not end within WALK_MAX nodes, or runs into where
+ * v or w is not representable while the terms still matter. */
+static gboolean
+walk (const Line *ln, double peak, double h, double log_cut, int dir, double *out,
+      int *count, double *gmax)
+{
+  double last = *gmax;
+  for (int j = 1;; j++)
+    {
+      if (j > WALK_MAX)
+        return FALSE;
+      double g = line_log (ln, peak + dir * j * h, NULL);
+      if (g == -INFINITY && last > *gmax - log_cut)
+        return FALSE;       /* the mass goes on where v or w is not representable */
+      out[j - 1] = g;
+      *gmax = MAX (*gmax, g);
+      if (g < *gmax - log_cut && g < last)
+        {
+          *count = j;
+          return TRUE;
+        }
+      last = g;
+    }
+}
+
+/* The rule's state: n nodes' logs g[] from u0 at step h (next[] the room for the
+ * following level), their largest gmax, and the sum of e^(g − gmax) over them. */
+typedef struct {
+  const Line *ln;
+  double *g, *next;
+  int n;
+  double u0, h, gmax, sum, log_cut;
+} Rule;
+
+/* The walks' nodes in order, from −nl h to nr h, into the rule and its sum; returns the
+ * sum over every second node (those at an even distance from the peak). */
+static double
+first_level (Rule *r, const double *left, int nl, const double *right, int nr, double peak)
+{
+  double *g = r->g, even = 0.0;
+  for (int j = 0; j < nl; j++)
+    g[j] = left[nl - 1 - j];
+  g[nl] = line_log (r->ln, peak, NULL);
+  for (int j = 0; j < nr; j++)
+    g[nl + 1 + j] = right[j];
+  for (int j = 0; j < r->n; j++)
+    {
+      double t = exp (g[j] - r->gmax);
+      r->sum += t;
+      if ((j - nl) % 2 == 0)
+        even += t;
+    }
+  return even;
+}
+
+/* One halving of the step: a new node between each two, computed, or interpolated
+ * linearly in the log where both neighbours are below epsrel e^−2 of the largest, and
+ * added to the sum; FALSE where a node is not a number or overflows. */
+static gboolean
+halve (Rule *r)
+{
+  const double *g = r->g;
+  double *next = r->next;
+  int n = r->n;
+  for (int j = 0; j + 1 < n; j++)
+    {
+      next[2 * j] = g[j];
+      double m;
+      if (MAX (g[j], g[j + 1]) < r->gmax - (r->log_cut - 10.0))
+        m = 0.5 * (g[j] + g[j + 1]);
+      else
+        {
+          m = line_log (r->ln, r->u0 + (j + 0.5) * r->h, NULL);
+          if (isnan (m) || m > r->gmax + 700.0)
+            return FALSE;
+        }
+      next[2 * j + 1] = m;
+      r->sum += exp (m - r->gmax);
+    }
+  next[2 * (n - 1)] = g[n - 1];
+  r->n = 2 * n - 1;
+  r->next = r->g;
+  r->g = next;
+  r->h *= 0.5;
+  return TRUE;
+}
+
 /* ln ∫ g(u) du by the trapezoidal rule centred on the peak, FALSE when it did not
  * settle within the budget. The step starts below the peak's width and is halved over
  * the range of the first walk until two successive sums differ by less than 10 epsrel
@@ -266,50 +355,17 @@ trapezoid (const Line *ln, double peak, double width, double epsrel, double *res
 
   if (!isfinite (gmax))
     return FALSE;
-  for (int dir = -1; dir <= 1; dir += 2)
-    {
-      double *out = dir < 0 ? left : right;
-      double last = gmax;
-      for (int j = 1;; j++)
-        {
-          if (j > WALK_MAX)
-            return FALSE;
-          double g = line_log (ln, peak + dir * j * h, NULL);
-          if (g == -INFINITY && last > gmax - log_cut)
-            return FALSE;       /* the mass goes on where v or w is not representable */
-          out[j - 1] = g;
-          gmax = MAX (gmax, g);
-          if (g < gmax - log_cut && g < last)
-            {
-              if (dir < 0)
-                nl = j;
-              else
-                nr = j;
-              break;
-            }
-          last = g;
-        }
-    }
+  if (!walk (ln, peak, h, log_cut, -1, left, &nl, &gmax)
+      || !walk (ln, peak, h, log_cut, 1, right, &nr, &gmax))
+    return FALSE;
 
   /* the nodes in order, from −nl h to nr h, with room for the halvings */
   int n = nl + nr + 1, cap = (n - 1) * (1 << LEVELS) + 1;
-  g_autofree double *g = g_new (double, cap);
-  g_autofree double *next = g_new (double, cap);
-  double u0 = peak - nl * h, sum = 0.0, total, prev;
-  for (int j = 0; j < nl; j++)
-    g[j] = left[nl - 1 - j];
-  g[nl] = line_log (ln, peak, NULL);
-  for (int j = 0; j < nr; j++)
-    g[nl + 1 + j] = right[j];
-  double even = 0.0;
-  for (int j = 0; j < n; j++)
-    {
-      double t = exp (g[j] - gmax);
-      sum += t;
-      if ((j - nl) % 2 == 0)
-        even += t;
-    }
-  total = h * sum;
+  g_autofree double *nodes = g_new (double, cap);
+  g_autofree double *room = g_new (double, cap);
+  Rule r = { ln, nodes, room, n, peak - nl * h, h, gmax, 0.0, log_cut };
+  double even = first_level (&r, left, nl, right, nr, peak);
+  double total = h * r.sum, prev;
   /* the nodes at every second step make a coarser rule for free: where it already
    * agrees (a loose tolerance, as for figures), no halving is needed */
   /* far in a tail the logs themselves carry a rounding of ε |ln g| */
@@ -321,29 +377,10 @@ trapezoid (const Line *ln, double peak, double width, double epsrel, double *res
     }
   for (int level = 0; level < LEVELS; level++)
     {
-      for (int j = 0; j + 1 < n; j++)
-        {
-          next[2 * j] = g[j];
-          double m;
-          if (MAX (g[j], g[j + 1]) < gmax - (log_cut - 10.0))
-            m = 0.5 * (g[j] + g[j + 1]);
-          else
-            {
-              m = line_log (ln, u0 + (j + 0.5) * h, NULL);
-              if (isnan (m) || m > gmax + 700.0)
-                return FALSE;
-            }
-          next[2 * j + 1] = m;
-          sum += exp (m - gmax);
-        }
-      next[2 * (n - 1)] = g[n - 1];
-      n = 2 * n - 1;
-      double *t = g;
-      g = next;
-      next = t;
-      h *= 0.5;
+      if (!halve (&r))
+        return FALSE;
       prev = total;
-      total = h * sum;
+      total = r.h * r.sum;
       if (fabs (total - prev) <= tol * total)
         {
           *result = gmax + log (total);
