@@ -206,13 +206,106 @@ piece_log_mass (const TfBetaDiff *bd, guint i)
   return tf_log_sub (s0, s1);
 }
 
+/* The piece between cuts i and i + 1, split at the kinks inside it (where the other
+ * variable's argument reaches 0 or 1), appended to pieces with its mass and the bound
+ * on its integral; FALSE when pieces is full. */
+static gboolean
+split_piece (const Integrand *in, const double kinks[2], guint i, Piece *pieces, guint *np,
+             guint cap)
+{
+  const TfBetaDiff *bd = in->bd;
+  double a = bd->cut[i], b = bd->cut[i + 1];
+  double ya = bd->cut_y[i], yb = bd->cut_y[i + 1];
+  double lm;
+  if (!(b > a) && !(ya > yb))
+    return TRUE;
+  lm = piece_log_mass (bd, i);
+  /* split at the kinks inside */
+  double edges[4] = { a, 0, 0, b };
+  guint ne = 1;
+  for (guint k = 0; k < 2; k++)
+    if (kinks[k] > a && kinks[k] < b)
+      edges[ne++] = kinks[k];
+  if (ne == 3 && edges[1] > edges[2])
+    {
+      double t = edges[1];
+      edges[1] = edges[2];
+      edges[2] = t;
+    }
+  edges[ne] = b;
+  for (guint k = 0; k < ne; k++)
+    {
+      Piece *p = &pieces[(*np)++];
+      p->v0 = edges[k];
+      p->v1 = edges[k + 1];
+      p->y0 = k == 0 ? ya : 1.0 - edges[k];
+      p->y1 = k + 1 == ne ? yb : 1.0 - edges[k + 1];
+      p->log_mass = lm;       /* a bound when the piece was split */
+      p->log_bound = lm + log_factor_max (in, p->v0, p->v1);
+      if (*np == cap)
+        return FALSE;
+    }
+  return TRUE;
+}
+
+/* The pieces between successive cuts, split at the kinks; returns their number. */
+static guint
+make_pieces (const Integrand *in, Piece *pieces, guint cap)
+{
+  const TfBetaDiff *bd = in->bd;
+  const double d = in->d;
+  double kinks[2];
+  guint np = 0;
+
+  /* where the other variable's argument reaches 0 and 1 */
+  kinks[0] = bd->over_a ? d : -d;
+  kinks[1] = bd->over_a ? 1.0 + d : 1.0 - d;
+  for (guint i = 0; i + 1 < bd->n_cuts; i++)
+    if (!split_piece (in, kinks, i, pieces, &np, cap))
+      break;
+  return np;
+}
+
+/* One piece by QAGS, in v, or in y = 1 − v where it lies above ½, with the integrand
+ * scaled by its bound, added to *total; skipped when the bound is below e^−41 (1e-18)
+ * of the sum so far. */
+static void
+integrate_piece (Integrand *in, const Piece *p, gsl_integration_workspace *ws, double *total,
+                 double *log_err)
+{
+  gsl_function f = { integrand, in };
+  double result, abserr;
+  int status;
+
+  if (p->log_bound == -INFINITY || p->log_bound < *total - 41.0)
+    return;
+  gboolean in_y = p->v0 + p->v1 > 1.0;
+  double width = in_y ? p->y0 - p->y1 : p->v1 - p->v0;
+  if (!(width > 0.0))
+    return;
+  in->ref = isfinite (p->log_bound) ? p->log_bound - log (width) : 0.0;
+  if (in_y)
+    {
+      f.function = integrand_y;
+      status = gsl_integration_qags (&f, p->y1, p->y0, 0.0, in->bd->epsrel, 200, ws, &result,
+                                     &abserr);
+    }
+  else
+    status = gsl_integration_qags (&f, p->v0, p->v1, 0.0, in->bd->epsrel, 200, ws, &result,
+                                   &abserr);
+  /* a piece that stops short of its tolerance (roundoff near a singular end) only
+   * matters when its error is not negligible next to the whole */
+  if (status != GSL_SUCCESS)
+    *log_err = tf_log_add (*log_err, in->ref + log (abserr + 1e-300));
+  if (result > 0.0)
+    *total = tf_log_add (*total, in->ref + log (result));
+}
+
 double
 tf_beta_diff_pieces (TfBetaDiff *bd, double d, TfBdKind kind, gboolean *ok)
 {
   Piece pieces[TF_BETA_DIFF_N_CUTS + 2];
-  guint np = 0;
   Integrand in = { bd, d, kind, 0.0, 0, 0, 0, 0 };
-  double kinks[2];
   double total = -INFINITY, log_err = -INFINITY;
 
   ensure_cuts (bd);
@@ -220,78 +313,14 @@ tf_beta_diff_pieces (TfBetaDiff *bd, double d, TfBdKind kind, gboolean *ok)
   in.qv = bd->over_a ? bd->qa : bd->qb;
   in.po = bd->over_a ? bd->pb : bd->pa;
   in.qo = bd->over_a ? bd->qb : bd->qa;
-  /* where the other variable's argument reaches 0 and 1 */
-  kinks[0] = bd->over_a ? d : -d;
-  kinks[1] = bd->over_a ? 1.0 + d : 1.0 - d;
-
-  for (guint i = 0; i + 1 < bd->n_cuts; i++)
-    {
-      double a = bd->cut[i], b = bd->cut[i + 1];
-      double ya = bd->cut_y[i], yb = bd->cut_y[i + 1];
-      double lm;
-      if (!(b > a) && !(ya > yb))
-        continue;
-      lm = piece_log_mass (bd, i);
-      /* split at the kinks inside */
-      double edges[4] = { a, 0, 0, b };
-      guint ne = 1;
-      for (guint k = 0; k < 2; k++)
-        if (kinks[k] > a && kinks[k] < b)
-          edges[ne++] = kinks[k];
-      if (ne == 3 && edges[1] > edges[2])
-        {
-          double t = edges[1];
-          edges[1] = edges[2];
-          edges[2] = t;
-        }
-      edges[ne] = b;
-      for (guint k = 0; k < ne; k++)
-        {
-          Piece *p = &pieces[np++];
-          p->v0 = edges[k];
-          p->v1 = edges[k + 1];
-          p->y0 = k == 0 ? ya : 1.0 - edges[k];
-          p->y1 = k + 1 == ne ? yb : 1.0 - edges[k + 1];
-          p->log_mass = lm;       /* a bound when the piece was split */
-          p->log_bound = lm + log_factor_max (&in, p->v0, p->v1);
-          if (np == G_N_ELEMENTS (pieces))
-            break;
-        }
-      if (np == G_N_ELEMENTS (pieces))
-        break;
-    }
+  guint np = make_pieces (&in, pieces, G_N_ELEMENTS (pieces));
+  /* the largest bounds first, so that the sum so far can skip the negligible */
   qsort (pieces, np, sizeof *pieces, compare_pieces);
 
   gsl_integration_workspace *ws = gsl_integration_workspace_alloc (200);
   *ok = TRUE;
   for (guint i = 0; i < np; i++)
-    {
-      Piece *p = &pieces[i];
-      gsl_function f = { integrand, &in };
-      double result, abserr;
-      int status;
-
-      if (p->log_bound == -INFINITY || p->log_bound < total - 41.0)
-        continue;
-      gboolean in_y = p->v0 + p->v1 > 1.0;
-      double width = in_y ? p->y0 - p->y1 : p->v1 - p->v0;
-      if (!(width > 0.0))
-        continue;
-      in.ref = isfinite (p->log_bound) ? p->log_bound - log (width) : 0.0;
-      if (in_y)
-        {
-          f.function = integrand_y;
-          status = gsl_integration_qags (&f, p->y1, p->y0, 0.0, bd->epsrel, 200, ws, &result, &abserr);
-        }
-      else
-        status = gsl_integration_qags (&f, p->v0, p->v1, 0.0, bd->epsrel, 200, ws, &result, &abserr);
-      /* a piece that stops short of its tolerance (roundoff near a singular end) only
-       * matters when its error is not negligible next to the whole */
-      if (status != GSL_SUCCESS)
-        log_err = tf_log_add (log_err, in.ref + log (abserr + 1e-300));
-      if (result > 0.0)
-        total = tf_log_add (total, in.ref + log (result));
-    }
+    integrate_piece (&in, &pieces[i], ws, &total, &log_err);
   gsl_integration_workspace_free (ws);
   if (log_err > total + log (1e-8))
     *ok = FALSE;
