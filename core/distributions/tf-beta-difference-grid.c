@@ -325,6 +325,132 @@ spike (double pv, double qv, double po, double qo, gint64 sign, gint64 S, gint64
   return TRUE;
 }
 
+/* The convolution on one grid: the frame (sign 1 over θA, −1 over θB), the nodes
+ * k h, h = 1 / K, K = S m, each beta's log density and the end expansions, and each
+ * beta's mass nodes (V's fv[j − jv0] for j in [jv0, jv1], O's fo[k − ko0] for k in
+ * [ko0, ko1], each relative to its largest, e^lv and e^ln_). */
+typedef struct {
+  gint64 sign, L, m, K;
+  double h;
+  Dens dv, dn;
+  Ends lower, upper;
+  gint64 jv0, jv1, ko0, ko1;
+  double *fv, *fo;
+  double lv, ln_;
+} Grid;
+
+/* Point i's integral: c = J / K, its ends Li, Ui (both nodes) and the nodes [a, b]
+ * within them where both densities have mass. */
+typedef struct {
+  gint64 J, Li, Ui, a, b;
+} Span;
+
+/* Each beta's mass nodes: V's over its support, O's as far as some point of the grid
+ * needs them; FALSE when either needs too many. */
+static gboolean
+grid_nodes (Grid *gr, guint n)
+{
+  gr->lv = mass_nodes (&gr->dv, gr->K, 0, gr->K, MAX_V_NODES, &gr->jv0, &gr->jv1, &gr->fv);
+  if (isnan (gr->lv))
+    return FALSE;
+  gint64 J0 = gr->sign * gr->L * gr->m, J1 = gr->sign * (gr->L + (gint64) n - 1) * gr->m;
+  gint64 Jmin = MIN (J0, J1), Jmax = MAX (J0, J1);
+  gr->ln_ = mass_nodes (&gr->dn, gr->K, gr->jv0 - Jmax, gr->jv1 - Jmin, MAX_O_NODES, &gr->ko0,
+                        &gr->ko1, &gr->fo);
+  return !isnan (gr->ln_);
+}
+
+static void
+point_span (const Grid *gr, guint i, Span *sp)
+{
+  sp->J = gr->sign * (gr->L + (gint64) i) * gr->m;
+  sp->Li = MAX (0, sp->J);
+  sp->Ui = MIN (gr->K, gr->K + sp->J);
+  sp->a = MAX (sp->Li, MAX (gr->jv0, sp->J + gr->ko0));
+  sp->b = MIN (sp->Ui, MIN (gr->jv1, sp->J + gr->ko1));
+}
+
+/* The rule's sum for point i over its nodes, end nodes left out, in *sum; FALSE when
+ * the point is not the rule's: out[i] then +inf where the density is infinite (d = 0),
+ * −inf for d outside (−1, 1) or no mass, left NAN where an end has too few nodes. */
+static gboolean
+point_sum (const Grid *gr, guint i, double *sum, double *out)
+{
+  Span sp;
+  point_span (gr, i, &sp);
+  gboolean true_a = sp.a == sp.Li, true_b = sp.b == sp.Ui;
+  if (sp.J == 0 && gr->lower.expo[0] + gr->lower.expo[2] <= -1.0)
+    {
+      out[i] = INFINITY;      /* both lower shapes add up to 1 or less: f(0) = ∞ */
+      return FALSE;
+    }
+  if (sp.J == 0 && gr->upper.expo[1] + gr->upper.expo[3] <= -1.0)
+    {
+      out[i] = INFINITY;
+      return FALSE;
+    }
+  if (!(sp.J > -gr->K && sp.J < gr->K) || sp.b < sp.a)
+    {
+      out[i] = -INFINITY;     /* d outside (−1, 1), or no mass */
+      return FALSE;
+    }
+  if ((true_a || true_b) && sp.b - sp.a < 4)
+    return FALSE;           /* too few nodes for an end: left to the caller */
+  const double *x = gr->fv - gr->jv0, *y = gr->fo - (sp.J + gr->ko0);
+  /* four sums, which the processor can run side by side */
+  double s4[4] = { 0.0, 0.0, 0.0, 0.0 };
+  gint64 j = sp.a + true_a, end = sp.b - true_b;
+  for (; j + 3 <= end; j += 4)
+    for (int q = 0; q < 4; q++)
+      s4[q] += x[j + q] * y[j + q];
+  for (; j <= end; j++)
+    s4[0] += x[j] * y[j];
+  *sum = (s4[0] + s4[1]) + (s4[2] + s4[3]);
+  return TRUE;
+}
+
+/* Point i's log density from its sum, Navot's corrections taken off at each end of the
+ * integral that is an end of the rule; left NAN where a correction cannot be made. */
+static void
+point_finish (const Grid *gr, guint i, double sum, double top, double *out)
+{
+  Span sp;
+  point_span (gr, i, &sp);
+  double c = (double) sp.J / gr->K;
+  double floor_ = MAX (1e-13 * sum, 1e-12 * top);
+  const double scale = gr->lv + gr->ln_;
+  if (isnan (sum))
+    return;
+  if (sp.a == sp.Li && !side (&gr->lower, &gr->dv, &gr->dn, c, (double) sp.Li / gr->K, TRUE,
+                              gr->h, scale, floor_, &sum))
+    return;
+  if (sp.b == sp.Ui && !side (&gr->upper, &gr->dv, &gr->dn, c, (double) sp.Ui / gr->K, FALSE,
+                              gr->h, scale, floor_, &sum))
+    return;
+  if (sum > 0.0)
+    out[i] = log (gr->h * sum) + gr->lv + gr->ln_;
+  else if (sp.a != sp.Li && sp.b != sp.Ui)
+    out[i] = -INFINITY;
+}
+
+/* The sums first; the end corrections then, where they are not negligible next to the
+ * point's sum (1e-13) or the largest (1e-12: far in a tail, the expansion is not needed
+ * to draw 0). */
+static void
+convolve (const Grid *gr, guint n, double *out)
+{
+  g_autofree double *sums = g_new (double, n);
+  double top = 0.0;
+  for (guint i = 0; i < n; i++)
+    {
+      sums[i] = NAN;
+      if (point_sum (gr, i, &sums[i], out))
+        top = MAX (top, sums[i]);
+    }
+  for (guint i = 0; i < n; i++)
+    point_finish (gr, i, sums[i], top, out);
+}
+
 gboolean
 tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n,
                                double *out)
@@ -332,8 +458,7 @@ tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n
   const double pv = bd->over_a ? bd->pa : bd->pb, qv = bd->over_a ? bd->qa : bd->qb;
   const double po = bd->over_a ? bd->pb : bd->pa, qo = bd->over_a ? bd->qb : bd->qa;
   const gint64 sign = bd->over_a ? 1 : -1;
-  Dens dv, dn;
-  Ends lower, upper;
+  Grid gr = { .sign = sign, .L = L, .fv = NULL, .fo = NULL };
 
   for (guint i = 0; i < n; i++)
     out[i] = NAN;
@@ -344,84 +469,18 @@ tf_beta_diff_log_density_grid (const TfBetaDiff *bd, gint64 S, gint64 L, guint n
   double m_real = MAX (1.0, ceil (10.0 / ((double) S * tf_beta_sd (pv, qv))));
   if (!(m_real * S < 1e15))
     return FALSE;
-  const gint64 m = (gint64) m_real, K = S * m;
-  const double h = 1.0 / (double) K;
-  dens_init (&dv, pv, qv);
-  dens_init (&dn, po, qo);
-  ends_init (&lower, &dv, &dn, TRUE);
-  ends_init (&upper, &dv, &dn, FALSE);
+  gr.m = (gint64) m_real;
+  gr.K = S * gr.m;
+  gr.h = 1.0 / (double) gr.K;
+  dens_init (&gr.dv, pv, qv);
+  dens_init (&gr.dn, po, qo);
+  ends_init (&gr.lower, &gr.dv, &gr.dn, TRUE);
+  ends_init (&gr.upper, &gr.dv, &gr.dn, FALSE);
 
-  gint64 jv0, jv1, ko0, ko1;
-  g_autofree double *fv = NULL;
-  g_autofree double *fo = NULL;
-  double lv = mass_nodes (&dv, K, 0, K, MAX_V_NODES, &jv0, &jv1, &fv);
-  if (isnan (lv))
-    return FALSE;
-  gint64 J0 = sign * L * m, J1 = sign * (L + (gint64) n - 1) * m;
-  gint64 Jmin = MIN (J0, J1), Jmax = MAX (J0, J1);
-  double ln_ = mass_nodes (&dn, K, jv0 - Jmax, jv1 - Jmin, MAX_O_NODES, &ko0, &ko1, &fo);
-  if (isnan (ln_))
-    return FALSE;
-
-  /* the sums first; the end corrections then, where they are not negligible next to
-   * the point's sum (1e-13) or the largest (1e-12: far in a tail, the expansion is not
-   * needed to draw 0) */
-  g_autofree double *sums = g_new (double, n);
-  double top = 0.0;
-  for (guint i = 0; i < n; i++)
-    {
-      gint64 J = sign * (L + (gint64) i) * m;
-      gint64 Li = MAX (0, J), Ui = MIN (K, K + J);
-      gint64 a = MAX (Li, MAX (jv0, J + ko0)), b = MIN (Ui, MIN (jv1, J + ko1));
-      gboolean true_a = a == Li, true_b = b == Ui;
-      sums[i] = NAN;
-      if (J == 0 && lower.expo[0] + lower.expo[2] <= -1.0)
-        {
-          out[i] = INFINITY;      /* both lower shapes add up to 1 or less: f(0) = ∞ */
-          continue;
-        }
-      if (J == 0 && upper.expo[1] + upper.expo[3] <= -1.0)
-        {
-          out[i] = INFINITY;
-          continue;
-        }
-      if (!(J > -K && J < K) || b < a)
-        {
-          out[i] = -INFINITY;     /* d outside (−1, 1), or no mass */
-          continue;
-        }
-      if ((true_a || true_b) && b - a < 4)
-        continue;               /* too few nodes for an end: left to the caller */
-      const double *x = fv - jv0, *y = fo - (J + ko0);
-      /* four sums, which the processor can run side by side */
-      double s4[4] = { 0.0, 0.0, 0.0, 0.0 };
-      gint64 j = a + true_a, end = b - true_b;
-      for (; j + 3 <= end; j += 4)
-        for (int q = 0; q < 4; q++)
-          s4[q] += x[j + q] * y[j + q];
-      for (; j <= end; j++)
-        s4[0] += x[j] * y[j];
-      double sum = (s4[0] + s4[1]) + (s4[2] + s4[3]);
-      sums[i] = sum;
-      top = MAX (top, sum);
-    }
-  for (guint i = 0; i < n; i++)
-    {
-      gint64 J = sign * (L + (gint64) i) * m;
-      gint64 Li = MAX (0, J), Ui = MIN (K, K + J);
-      gint64 a = MAX (Li, MAX (jv0, J + ko0)), b = MIN (Ui, MIN (jv1, J + ko1));
-      double sum = sums[i], c = (double) J / K;
-      double floor_ = MAX (1e-13 * sum, 1e-12 * top);
-      if (isnan (sum))
-        continue;
-      if (a == Li && !side (&lower, &dv, &dn, c, (double) Li / K, TRUE, h, lv + ln_, floor_, &sum))
-        continue;
-      if (b == Ui && !side (&upper, &dv, &dn, c, (double) Ui / K, FALSE, h, lv + ln_, floor_, &sum))
-        continue;
-      if (sum > 0.0)
-        out[i] = log (h * sum) + lv + ln_;
-      else if (a != Li && b != Ui)
-        out[i] = -INFINITY;
-    }
-  return TRUE;
+  gboolean done = grid_nodes (&gr, n);
+  if (done)
+    convolve (&gr, n, out);
+  g_free (gr.fv);
+  g_free (gr.fo);
+  return done;
 }
