@@ -14,43 +14,6 @@
 #include "tf-axis.h"
 #include "test-figures.h"
 
-/* Data for each design, invented for the test (sizes and values of the ordinary kind). */
-TfAnalysis *
-test_design_analysis (TfDesign design)
-{
-  TfAnalysis *a = tf_analysis_new (design);
-
-  switch (design)
-    {
-    case TF_DESIGN_ONE_PROPORTION:
-      a->successes = 30, a->trials = 100, a->null_value = 0.5;
-      break;
-    case TF_DESIGN_TWO_PROPORTIONS:
-      a->successes_a = 15, a->trials_a = 50, a->successes_b = 26, a->trials_b = 50;
-      break;
-    case TF_DESIGN_ONE_MEAN:
-      a->n = 20, a->mean = 0.45, a->sd = 1.1, a->null_value = 0;
-      break;
-    case TF_DESIGN_PAIRED_MEANS:
-      a->n = 24, a->mean = 0.3, a->sd = 0.9, a->null_value = 0;
-      break;
-    case TF_DESIGN_TWO_MEANS:
-      a->n_a = 20, a->mean_a = 10.1, a->sd_a = 2.0;
-      a->n_b = 22, a->mean_b = 11.4, a->sd_b = 2.2;
-      break;
-    case TF_DESIGN_ONE_RATE:
-      a->events = 18, a->exposure = 10, a->null_value = 1.2;
-      break;
-    case TF_DESIGN_TWO_RATES:
-      a->events_a = 12, a->exposure_a = 10, a->events_b = 25, a->exposure_b = 11;
-      break;
-    case TF_N_DESIGNS:
-    default:
-      break;
-    }
-  return a;
-}
-
 static gboolean
 run_tool (const char *const *argv, char **out)
 {
