@@ -284,7 +284,8 @@ tf_analysis_to_key_file (const TfAnalysis *a)
     case TF_PRIOR_BETA:
       tf_key_file_set_number (key_file, "Alternative", "PriorA", a->prior_a);
       tf_key_file_set_number (key_file, "Alternative", "PriorB", a->prior_b);
-      /* two proportions' second Bayes factor: a normal prior on the log odds ratio */
+      /* a design with a second Bayes factor beside the beta prior's (a normal prior of
+       * scale PriorScale) says so in its class */
       if (tf_design_class (a->design)->beta_with_scale)
         tf_key_file_set_number (key_file, "Alternative", "PriorScale", a->prior_scale);
       break;
