@@ -5,7 +5,9 @@
  * its checks, its numbers and its curves. Nothing outside core/designs switches on a
  * design.
  *
- * A NULL hook means "this design does not provide it"; callers say so.
+ * A NULL hook means "this design does not provide it"; callers say so. New kinds of work
+ * on every design (a walk-through's steps, study planning, importing data) add their
+ * hooks here, and each class fills them in its own file.
  */
 #pragma once
 
