@@ -2,7 +2,7 @@
  * tf-one-rate-class.c: the class of one Poisson rate: events over an exposure against λ = λ0.
  */
 #include "tf-one-rate.h"
-#include "tf-rates-curves.h"
+#include "tf-rates.h"
 #include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
@@ -56,7 +56,7 @@ const TfDesignClass tf_one_rate_class = {
   .validate = tf_one_rate_validate,
   .compute = tf_one_rate_compute,
   .densities = tf_one_rate_densities,
-  .sensitivity = tf_rates_sensitivity,
+  .sensitivity = tf_one_rate_sensitivity,
   .sample_size = tf_one_rate_sample_size,
   .null_distribution = tf_one_rate_null_distribution,
 };

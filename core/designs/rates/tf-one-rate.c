@@ -8,6 +8,7 @@
  */
 #include "tf-one-rate.h"
 #include "tf-poisson.h"
+#include "tf-incgamma.h"
 #include "tf-rates.h"
 #include "tf-evidence.h"
 #include "tf-logspace.h"
@@ -271,5 +272,13 @@ tf_one_rate_null_distribution (const TfAnalysis *analysis, TfNullDistribution *d
     return FALSE;
   rate_tests (a->events, m, a->direction, &t);
   dist->p_value = exp (t.lp_exact);
+  return TRUE;
+}
+
+/* The sensitivity curve around one rate's own Bayes factor. */
+gboolean
+tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  tf_rates_sensitivity_of (analysis, curve, tf_one_rate_log_bf01_at);
   return TRUE;
 }

@@ -30,6 +30,8 @@ double tf_one_rate_log_bf01 (double k, double exposure, double lambda0, double s
 
 /* ln BF01 in the analysis's hypotheses at a curve's point (TfRatesLogBf01). */
 double tf_one_rate_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint *at);
+gboolean tf_one_rate_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                  char **why_not);
 
 /* The design's entry for tf_design_class(). */
 extern const TfDesignClass tf_one_rate_class;

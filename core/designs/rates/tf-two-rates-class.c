@@ -2,7 +2,7 @@
  * tf-two-rates-class.c: the class of two Poisson rates: events over exposures in groups A and B, against a rate ratio.
  */
 #include "tf-two-rates.h"
-#include "tf-rates-curves.h"
+#include "tf-rates.h"
 #include "tf-form-field-private.h"
 
 #include <glib/gi18n-lib.h>
@@ -65,7 +65,7 @@ const TfDesignClass tf_two_rates_class = {
   .validate = tf_two_rates_validate,
   .compute = tf_two_rates_compute,
   .densities = tf_two_rates_densities,
-  .sensitivity = tf_rates_sensitivity,
+  .sensitivity = tf_two_rates_sensitivity,
   .sample_size = tf_two_rates_sample_size,
   .null_distribution = tf_two_rates_null_distribution,
 };

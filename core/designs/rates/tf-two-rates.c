@@ -470,3 +470,13 @@ tf_two_rates_null_distribution (const TfAnalysis *analysis, TfNullDistribution *
   dist->p_value = exp (t.lp_exact);
   return TRUE;
 }
+
+/* The sensitivity curve around two rates' own Bayes factor, where the prior is in range. */
+gboolean
+tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **why_not)
+{
+  if (!tf_two_rates_prior_in_range (analysis, why_not))
+    return FALSE;
+  tf_rates_sensitivity_of (analysis, curve, tf_two_rates_log_bf01_at);
+  return TRUE;
+}

@@ -44,6 +44,8 @@ double tf_two_rates_ratio_quantile_log (double log_p, double sa, double ra, doub
 
 /* ln BF01 in the analysis's hypotheses at a curve's point (TfRatesLogBf01). */
 double tf_two_rates_log_bf01_at (const TfAnalysis *analysis, const TfRatesPoint *at);
+gboolean tf_two_rates_sensitivity (const TfAnalysis *analysis, TfEvidenceCurve *curve,
+                                   char **why_not);
 
 /* The design's entry for tf_design_class(). */
 extern const TfDesignClass tf_two_rates_class;
