@@ -5,8 +5,6 @@
 #pragma once
 
 #include <glib.h>
-#include "tf-incgamma.h"
-#include "tf-logspace.h"
 
 G_BEGIN_DECLS
 

@@ -13,6 +13,8 @@
  */
 #include "tf-crosscheck-driver.h"
 #include "tf-poisson.h"
+#include "tf-incgamma.h"
+#include "tf-logspace.h"
 #include "tf-one-rate.h"
 #include "tf-two-rates.h"
 
