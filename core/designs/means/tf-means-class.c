@@ -11,6 +11,8 @@
 
 #include <glib/gi18n-lib.h>
 
+/* The statistics of the design at hand: two samples, or one (a mean, or the differences
+ * within pairs). */
 static void
 means_stats (const TfAnalysis *analysis, TfMeansStats *stats)
 {
@@ -54,7 +56,7 @@ class_sample_size (const TfAnalysis *analysis, TfEvidenceCurve *curve, char **wh
 
 static gboolean
 class_null_distribution (const TfAnalysis *analysis, TfNullDistribution *dist,
-                                  char **why_not)
+                         char **why_not)
 {
   TfMeansStats s;
   means_stats (analysis, &s);
