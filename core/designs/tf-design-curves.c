@@ -141,10 +141,11 @@ tf_null_distribution_new (const TfAnalysis *analysis, guint n_points, GPtrArray 
 }
 
 static gboolean
-two_models_from_results (const TfAnalysis *analysis, TfModelProbabilities *models,
-                         char **why_not)
+two_models_from_results (const TfAnalysis *analysis, const TfResults *given,
+                         TfModelProbabilities *models, char **why_not)
 {
-  g_autoptr (TfResults) results = tf_analysis_compute (analysis, NULL);
+  g_autoptr (TfResults) computed = given ? NULL : tf_analysis_compute (analysis, NULL);
+  const TfResults *results = given ? given : computed;
   double post_null, post_alt;
 
   if (results == NULL || !tf_results_get (results, "posterior_null", &post_null)
@@ -164,7 +165,8 @@ two_models_from_results (const TfAnalysis *analysis, TfModelProbabilities *model
 }
 
 TfModelProbabilities *
-tf_model_probabilities_new (const TfAnalysis *analysis, GPtrArray *problems, char **why_not)
+tf_model_probabilities_new (const TfAnalysis *analysis, const TfResults *results,
+                            GPtrArray *problems, char **why_not)
 {
   const TfDesignClass *klass = valid_class (analysis, problems);
   TfModelProbabilities *models;
@@ -176,7 +178,7 @@ tf_model_probabilities_new (const TfAnalysis *analysis, GPtrArray *problems, cha
   if (klass->model_probabilities == NULL)
     {
       /* The two models every design compares, from its own numbers. */
-      if (two_models_from_results (analysis, models, &reason))
+      if (two_models_from_results (analysis, results, models, &reason))
         return models;
       tf_model_probabilities_free (models);
       set_why_not (why_not, reason);

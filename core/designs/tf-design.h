@@ -56,7 +56,9 @@ TfEvidenceCurve *tf_sample_size_curve_new (const TfAnalysis *analysis, guint n_p
 /* n_points: the grid of a continuous distribution; a discrete one sets its own n. */
 TfNullDistribution *tf_null_distribution_new (const TfAnalysis *analysis, guint n_points,
                                               GPtrArray *problems, char **why_not);
+/* results: the analysis's numbers when the caller has them already, else NULL. */
 TfModelProbabilities *tf_model_probabilities_new (const TfAnalysis *analysis,
+                                                  const TfResults *results,
                                                   GPtrArray *problems, char **why_not);
 
 G_END_DECLS

@@ -379,7 +379,7 @@ test_models (void)
   assert_rel (get (r, "bf_null_less"), 0.69567865524626925, TF_TOL_CLOSED_FORM);
   assert_rel (get (r, "bf_null_greater"), 3.8558035145553803, TF_TOL_CLOSED_FORM);
   assert_rel (get (r, "bf_less_greater"), 5.5425065660386423, TF_TOL_CLOSED_FORM);
-  g_autoptr (TfModelProbabilities) m = tf_model_probabilities_new (an, NULL, NULL);
+  g_autoptr (TfModelProbabilities) m = tf_model_probabilities_new (an, NULL, NULL, NULL);
   g_assert_cmpuint (m->n, ==, 3);
   assert_rel (m->posterior[0], 0.54100923060799644, TF_TOL_CLOSED_FORM);
   g_assert_cmpstr (m->names_markup[1], ==, "θ &lt; 0.5");
@@ -416,7 +416,7 @@ test_models (void)
   g_autoptr (TfAnalysis) two = make (7, 20, 0.5, 2, 3, TF_DIRECTION_TWO_SIDED);
   g_autoptr (TfResults) t = compute (two);
   g_assert_null (tf_results_lookup (t, "posterior_model_null"));
-  g_autoptr (TfModelProbabilities) m2 = tf_model_probabilities_new (two, NULL, NULL);
+  g_autoptr (TfModelProbabilities) m2 = tf_model_probabilities_new (two, NULL, NULL, NULL);
   g_assert_cmpuint (m2->n, ==, 2);
   assert_rel (m2->posterior[0], get (t, "posterior_null"), TF_TOL_DOUBLE);
 }

@@ -202,7 +202,7 @@ test_curves (void)
     }
   assert_rel (mass, 1.0, TF_TOL_CLOSED_FORM);
   assert_rel (tail, d->p_value, TF_TOL_CLOSED_FORM);
-  g_autoptr (TfModelProbabilities) m = tf_model_probabilities_new (a, NULL, NULL);
+  g_autoptr (TfModelProbabilities) m = tf_model_probabilities_new (a, NULL, NULL, NULL);
   g_assert_nonnull (m);
   g_assert_cmpuint (m->n, ==, 2);
   assert_rel (m->posterior[0] + m->posterior[1], 1.0, TF_TOL_ROUNDING);

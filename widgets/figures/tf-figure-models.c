@@ -187,7 +187,7 @@ gpointer
 tf_fig_models_compute (const TfAnalysis *analysis, const TfResults *results,
                        GPtrArray *problems, char **reason)
 {
-  return tf_model_probabilities_new (analysis, problems, reason);
+  return tf_model_probabilities_new (analysis, results, problems, reason);
 }
 
 gboolean
